@@ -1,0 +1,120 @@
+#!/usr/bin/env bash
+# Leeward's one entry point: installs what is missing (idempotent), then builds, serves or tests.
+#   ./setup.sh serve   set up, build the release page and serve it on http://127.0.0.1:8080
+#   ./setup.sh test    set up, build, and run every test (native engine, integration, browser)
+#   ./setup.sh build   set up and build dist/ and dist/leeward.html only
+#   ./setup.sh tools   set up the tools only
+set -euo pipefail
+cd "$(dirname "$0")"
+
+TRUNK_VERSION=0.21.14
+BINARYEN_VERSION=132
+export PATH="$HOME/.cargo/bin:$PATH"
+
+log() { printf '\033[1m[setup]\033[0m %s\n' "$*" >&2; }
+
+# The wasm-bindgen CLI must equal the wasm-bindgen crate in Cargo.lock exactly.
+wasm_bindgen_version() {
+  if [ -f Cargo.lock ]; then
+    awk '/^name = "wasm-bindgen"$/ {getline; gsub(/version = |"/, ""); print; exit}' Cargo.lock
+  else
+    sed -n 's/^wasm-bindgen = .*"=\([0-9.]*\)".*/\1/p' Cargo.toml | head -n1
+  fi
+}
+
+ensure_target() {
+  if rustup target list --installed | grep -qx wasm32-unknown-unknown; then
+    log "wasm32 target: present"
+  else
+    log "wasm32 target: installing"
+    rustup target add wasm32-unknown-unknown
+  fi
+}
+
+ensure_trunk() {
+  local have
+  have=$(trunk --version 2>/dev/null | awk '{print $2}' || true)
+  if [ "$have" = "$TRUNK_VERSION" ]; then
+    log "trunk $have: present"
+  else
+    log "trunk: found '${have:-none}', installing $TRUNK_VERSION (about 14 minutes on 2 cores)"
+    cargo install --locked trunk --version "$TRUNK_VERSION" --force
+  fi
+}
+
+ensure_wasm_bindgen() {
+  local want have
+  want=$(wasm_bindgen_version)
+  have=$(wasm-bindgen --version 2>/dev/null | awk '{print $2}' || true)
+  if [ "$have" = "$want" ]; then
+    log "wasm-bindgen-cli $have: present"
+  else
+    log "wasm-bindgen-cli: found '${have:-none}', installing $want (about 5 minutes)"
+    # No --locked: the CLI's own lockfile pins a crate version the registry mirror lacks.
+    cargo install wasm-bindgen-cli --version "$want" --force
+  fi
+}
+
+ensure_wasm_opt() {
+  local have
+  have=$(wasm-opt --version 2>/dev/null | sed -n 's/.*version \([0-9]*\).*/\1/p' || true)
+  if [ "$have" = "$BINARYEN_VERSION" ]; then
+    log "wasm-opt $have: present"
+  else
+    log "wasm-opt: found '${have:-none}', installing binaryen@$BINARYEN_VERSION from npm"
+    # Debian's binaryen (108) produces wasm that fails in the browser; it also blocks the npm install.
+    if dpkg -s binaryen >/dev/null 2>&1; then apt-get remove -y binaryen; fi
+    npm install -g "binaryen@$BINARYEN_VERSION"
+    hash -r
+  fi
+}
+
+apt_updated=0
+apt_install() {
+  if [ "$apt_updated" = 0 ]; then apt-get update -qq; apt_updated=1; fi
+  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends "$@" >/dev/null
+}
+
+ensure_browser() {
+  if command -v chromium >/dev/null && command -v chromedriver >/dev/null; then
+    log "$(chromium --version 2>/dev/null | head -n1): present"
+  else
+    log "chromium + chromedriver: installing from Debian"
+    apt_install chromium chromium-driver
+  fi
+}
+
+tools() {
+  ensure_target
+  ensure_wasm_opt
+  ensure_browser
+  ensure_trunk
+  ensure_wasm_bindgen
+  log "fetching crates"
+  cargo fetch --quiet
+}
+
+build() {
+  log "building dist/ (release, size-tuned, wasm-opt)"
+  trunk build --release
+  log "building dist/leeward.html (single self-contained file)"
+  cargo run --quiet --no-default-features --bin leeward-bundle -- dist
+}
+
+case "${1:-}" in
+  tools) tools ;;
+  build) tools; build ;;
+  serve)
+    tools; build
+    log "serving dist/ on http://127.0.0.1:8080/  (single file: dist/leeward.html)"
+    exec cargo run --quiet --no-default-features --bin leeward-serve -- dist 127.0.0.1:8080
+    ;;
+  test)
+    tools; build
+    log "engine alone (no web feature)"
+    cargo test --no-default-features --lib
+    log "everything, including the browser tests against dist/"
+    LEEWARD_REQUIRE_BROWSER=1 cargo test
+    ;;
+  *) echo "usage: $0 serve|test|build|tools" >&2; exit 2 ;;
+esac

@@ -1,0 +1,349 @@
+//! Build step after `trunk build`: `leeward-bundle DIST`.
+//!
+//! 1. Moves Trunk's inline loader script out of `DIST/index.html` into `DIST/boot-<hash>.js`, so
+//!    the hosted page runs under a Content-Security-Policy with `script-src 'self'` (no inline
+//!    script at all).
+//! 2. Writes `DIST/leeward.html`: one self-contained file (CSS, JS glue and the wasm as base64
+//!    inlined) that runs opened from disk (`file://`), where browsers refuse module scripts and
+//!    fetches. Its CSP allows exactly its own inline script and style by SHA-256 hash, WebAssembly
+//!    compilation, and no network connection of any kind.
+//!
+//! Plain std: a small SHA-256 and base64 live below, tested against their standards' vectors.
+
+use std::fs;
+use std::path::{Path, PathBuf};
+
+fn main() {
+    let dist = std::env::args().nth(1).unwrap_or_else(|| "dist".into());
+    if let Err(e) = run(Path::new(&dist)) {
+        eprintln!("leeward-bundle: {e}");
+        std::process::exit(1);
+    }
+}
+
+fn run(dist: &Path) -> Result<(), String> {
+    let index_path = dist.join("index.html");
+    let index = read(&index_path)?;
+    let (js_name, wasm_name) = asset_names(&index)?;
+    let css_name = find_attr_value(&index, "rel=\"stylesheet\"", "href")
+        .ok_or("no stylesheet link in index.html")?;
+
+    // 1. The hosted page: loader out of line.
+    let hosted = externalise_loader(&index)?;
+    let hosted = hosted
+        .map(|(html, boot_name, boot_js)| -> Result<String, String> {
+            write(&dist.join(&boot_name), &boot_js)?;
+            Ok(html)
+        })
+        .transpose()?;
+    if let Some(html) = &hosted {
+        write(&index_path, html)?;
+    }
+
+    // 2. The single file.
+    let glue = read(&dist.join(strip_dot(&js_name)))?;
+    let wasm = fs::read(dist.join(strip_dot(&wasm_name)))
+        .map_err(|e| format!("reading {wasm_name}: {e}"))?;
+    let css = read(&dist.join(strip_dot(&css_name)))?;
+    let single = single_file(hosted.as_deref().unwrap_or(&index), &glue, &wasm, &css)?;
+    write(&dist.join("leeward.html"), &single)?;
+    println!(
+        "leeward-bundle: {} ({} bytes), index.html loader in its own file",
+        dist.join("leeward.html").display(),
+        single.len()
+    );
+    Ok(())
+}
+
+fn read(p: &Path) -> Result<String, String> {
+    fs::read_to_string(p).map_err(|e| format!("reading {}: {e}", p.display()))
+}
+
+fn write(p: &PathBuf, s: &str) -> Result<(), String> {
+    fs::write(p, s).map_err(|e| format!("writing {}: {e}", p.display()))
+}
+
+fn strip_dot(name: &str) -> &str {
+    name.trim_start_matches("./").trim_start_matches('/')
+}
+
+/// The glue JS and wasm file names Trunk linked (from the modulepreload / preload links).
+fn asset_names(index: &str) -> Result<(String, String), String> {
+    let js = find_attr_value(index, "rel=\"modulepreload\"", "href")
+        .ok_or("no modulepreload link for the JS glue in index.html")?;
+    let wasm = find_attr_value(index, "type=\"application/wasm\"", "href")
+        .ok_or("no preload link for the wasm in index.html")?;
+    Ok((js, wasm))
+}
+
+/// The value of `attr` in the first tag that contains `marker`.
+fn find_attr_value(html: &str, marker: &str, attr: &str) -> Option<String> {
+    let at = html.find(marker)?;
+    let start = html[..at].rfind('<')?;
+    let end = at + html[at..].find('>')?;
+    let tag = &html[start..end];
+    let key = format!("{attr}=\"");
+    let v0 = tag.find(&key)? + key.len();
+    let v1 = v0 + tag[v0..].find('"')?;
+    Some(tag[v0..v1].to_string())
+}
+
+/// The first inline `<script type="module">…</script>` (no src): (start, end, body).
+fn inline_module(html: &str) -> Option<(usize, usize, &str)> {
+    let mut from = 0;
+    while let Some(rel) = html[from..].find("<script") {
+        let start = from + rel;
+        let open_end = start + html[start..].find('>')?;
+        let open = &html[start..open_end];
+        let close = open_end + html[open_end..].find("</script>")?;
+        if open.contains("type=\"module\"") && !open.contains("src=") {
+            return Some((start, close + "</script>".len(), &html[open_end + 1..close]));
+        }
+        from = close;
+    }
+    None
+}
+
+/// Move the inline loader into `boot-<hash>.js`. `None` when there is none (already moved).
+fn externalise_loader(index: &str) -> Result<Option<(String, String, String)>, String> {
+    let Some((a, b, body)) = inline_module(index) else {
+        return Ok(None);
+    };
+    let name = format!("boot-{}.js", &hex(&sha256(body.as_bytes()))[..16]);
+    let tag = format!("<script type=\"module\" src=\"./{name}\"></script>");
+    let html = format!("{}{}{}", &index[..a], tag, &index[b..]);
+    Ok(Some((html, name, body.trim().to_string() + "\n")))
+}
+
+/// Remove every tag (and for scripts, its element) matching `pred` on its opening text.
+fn remove_tags(html: &str, tag: &str, pred: impl Fn(&str) -> bool) -> String {
+    let mut out = String::with_capacity(html.len());
+    let mut rest = html;
+    let open = format!("<{tag}");
+    while let Some(i) = rest.find(&open) {
+        let Some(j) = rest[i..].find('>') else { break };
+        let mut end = i + j + 1;
+        if pred(&rest[i..end]) {
+            if tag == "script" {
+                if let Some(k) = rest[end..].find("</script>") {
+                    end += k + "</script>".len();
+                }
+            }
+            out.push_str(&rest[..i]);
+        } else {
+            out.push_str(&rest[..end]);
+        }
+        rest = &rest[end..];
+    }
+    out.push_str(rest);
+    out
+}
+
+/// wasm-bindgen `--target web` glue as a classic part of one inline module: drop its exports.
+fn glue_inline(glue: &str) -> String {
+    let mut out = String::with_capacity(glue.len());
+    for line in glue.lines() {
+        let t = line.trim_start();
+        if t.starts_with("export {") || t.starts_with("export default") {
+            continue;
+        }
+        if let Some(rest) = t.strip_prefix("export ") {
+            out.push_str(rest);
+        } else {
+            out.push_str(line);
+        }
+        out.push('\n');
+    }
+    out
+}
+
+fn single_file(index: &str, glue: &str, wasm: &[u8], css: &str) -> Result<String, String> {
+    let mut html = remove_tags(index, "link", |t| {
+        t.contains("modulepreload") || t.contains("rel=\"preload\"") || t.contains("stylesheet")
+    });
+    html = remove_tags(&html, "script", |t| t.contains("type=\"module\""));
+    html = remove_tags(&html, "meta", |t| t.contains("Content-Security-Policy"));
+
+    let script = format!(
+        "{}\nconst leewardWasmBytes = Uint8Array.from(atob(\"{}\"), (c) => c.charCodeAt(0));\n\
+         await __wbg_init({{ module_or_path: leewardWasmBytes }});\n",
+        glue_inline(glue),
+        base64(wasm)
+    );
+    let csp = format!(
+        "default-src 'none'; script-src 'sha256-{}' 'wasm-unsafe-eval'; style-src 'sha256-{}'; \
+         img-src data:; connect-src 'none'; base-uri 'none'; form-action 'none'",
+        base64(&sha256(script.as_bytes())),
+        base64(&sha256(css.as_bytes()))
+    );
+    let head = format!(
+        "<meta http-equiv=\"Content-Security-Policy\" content=\"{csp}\">\n<style>{css}</style>\n"
+    );
+    let at = html
+        .find("<meta charset")
+        .ok_or("index.html has no <meta charset>")?;
+    let at = at + html[at..].find('>').ok_or("unclosed meta")? + 1;
+    html.insert_str(at, &format!("\n{head}"));
+    let body_end = html.rfind("</body>").ok_or("index.html has no </body>")?;
+    html.insert_str(
+        body_end,
+        &format!("<script type=\"module\">{script}</script>\n"),
+    );
+    Ok(html)
+}
+
+// ---- SHA-256 (FIPS 180-4) and base64 (RFC 4648) -------------------------------------------
+
+const K: [u32; 64] = [
+    0x428a2f98, 0x71374491, 0xb5c0fbcf, 0xe9b5dba5, 0x3956c25b, 0x59f111f1, 0x923f82a4, 0xab1c5ed5,
+    0xd807aa98, 0x12835b01, 0x243185be, 0x550c7dc3, 0x72be5d74, 0x80deb1fe, 0x9bdc06a7, 0xc19bf174,
+    0xe49b69c1, 0xefbe4786, 0x0fc19dc6, 0x240ca1cc, 0x2de92c6f, 0x4a7484aa, 0x5cb0a9dc, 0x76f988da,
+    0x983e5152, 0xa831c66d, 0xb00327c8, 0xbf597fc7, 0xc6e00bf3, 0xd5a79147, 0x06ca6351, 0x14292967,
+    0x27b70a85, 0x2e1b2138, 0x4d2c6dfc, 0x53380d13, 0x650a7354, 0x766a0abb, 0x81c2c92e, 0x92722c85,
+    0xa2bfe8a1, 0xa81a664b, 0xc24b8b70, 0xc76c51a3, 0xd192e819, 0xd6990624, 0xf40e3585, 0x106aa070,
+    0x19a4c116, 0x1e376c08, 0x2748774c, 0x34b0bcb5, 0x391c0cb3, 0x4ed8aa4a, 0x5b9cca4f, 0x682e6ff3,
+    0x748f82ee, 0x78a5636f, 0x84c87814, 0x8cc70208, 0x90befffa, 0xa4506ceb, 0xbef9a3f7, 0xc67178f2,
+];
+
+fn sha256(data: &[u8]) -> [u8; 32] {
+    let mut h: [u32; 8] = [
+        0x6a09e667, 0xbb67ae85, 0x3c6ef372, 0xa54ff53a, 0x510e527f, 0x9b05688c, 0x1f83d9ab,
+        0x5be0cd19,
+    ];
+    let mut msg = data.to_vec();
+    let bits = (data.len() as u64).wrapping_mul(8);
+    msg.push(0x80);
+    while msg.len() % 64 != 56 {
+        msg.push(0);
+    }
+    msg.extend_from_slice(&bits.to_be_bytes());
+    for block in msg.chunks(64) {
+        let mut w = [0u32; 64];
+        for i in 0..16 {
+            w[i] = u32::from_be_bytes([
+                block[4 * i],
+                block[4 * i + 1],
+                block[4 * i + 2],
+                block[4 * i + 3],
+            ]);
+        }
+        for i in 16..64 {
+            let s0 = w[i - 15].rotate_right(7) ^ w[i - 15].rotate_right(18) ^ (w[i - 15] >> 3);
+            let s1 = w[i - 2].rotate_right(17) ^ w[i - 2].rotate_right(19) ^ (w[i - 2] >> 10);
+            w[i] = w[i - 16]
+                .wrapping_add(s0)
+                .wrapping_add(w[i - 7])
+                .wrapping_add(s1);
+        }
+        let [mut a, mut b, mut c, mut d, mut e, mut f, mut g, mut hh] = h;
+        for i in 0..64 {
+            let s1 = e.rotate_right(6) ^ e.rotate_right(11) ^ e.rotate_right(25);
+            let ch = (e & f) ^ (!e & g);
+            let t1 = hh
+                .wrapping_add(s1)
+                .wrapping_add(ch)
+                .wrapping_add(K[i])
+                .wrapping_add(w[i]);
+            let s0 = a.rotate_right(2) ^ a.rotate_right(13) ^ a.rotate_right(22);
+            let maj = (a & b) ^ (a & c) ^ (b & c);
+            let t2 = s0.wrapping_add(maj);
+            hh = g;
+            g = f;
+            f = e;
+            e = d.wrapping_add(t1);
+            d = c;
+            c = b;
+            b = a;
+            a = t1.wrapping_add(t2);
+        }
+        for (x, y) in h.iter_mut().zip([a, b, c, d, e, f, g, hh]) {
+            *x = x.wrapping_add(y);
+        }
+    }
+    let mut out = [0u8; 32];
+    for (i, x) in h.iter().enumerate() {
+        out[4 * i..4 * i + 4].copy_from_slice(&x.to_be_bytes());
+    }
+    out
+}
+
+fn base64(data: &[u8]) -> String {
+    const A: &[u8; 64] = b"ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789+/";
+    let mut out = String::with_capacity(data.len().div_ceil(3) * 4);
+    for c in data.chunks(3) {
+        let n = (c[0] as u32) << 16
+            | (*c.get(1).unwrap_or(&0) as u32) << 8
+            | *c.get(2).unwrap_or(&0) as u32;
+        for i in 0..4 {
+            if i <= c.len() {
+                out.push(A[(n >> (18 - 6 * i) & 63) as usize] as char);
+            } else {
+                out.push('=');
+            }
+        }
+    }
+    out
+}
+
+fn hex(b: &[u8]) -> String {
+    b.iter().map(|x| format!("{x:02x}")).collect()
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn sha256_fips_180_2_vectors() {
+        // FIPS 180-2 Appendix B.1 and B.2.
+        assert_eq!(
+            hex(&sha256(b"abc")),
+            "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad"
+        );
+        assert_eq!(
+            hex(&sha256(
+                b"abcdbcdecdefdefgefghfghighijhijkijkljklmklmnlmnomnopnopq"
+            )),
+            "248d6a61d20638b8e5c026930c3e6039a33ce45964ff2167f6ecedd419db06c1"
+        );
+        assert_eq!(
+            hex(&sha256(b"")),
+            "e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855"
+        );
+    }
+
+    #[test]
+    fn base64_rfc_4648_vectors() {
+        // RFC 4648 section 10.
+        for (i, o) in [
+            ("", ""),
+            ("f", "Zg=="),
+            ("fo", "Zm8="),
+            ("foo", "Zm9v"),
+            ("foob", "Zm9vYg=="),
+            ("fooba", "Zm9vYmE="),
+            ("foobar", "Zm9vYmFy"),
+        ] {
+            assert_eq!(base64(i.as_bytes()), o);
+        }
+    }
+
+    #[test]
+    fn glue_loses_its_exports_only() {
+        let g = "export function f() {}\nexport class C {}\nfunction g() {}\nexport { initSync, __wbg_init as default };\n";
+        assert_eq!(
+            glue_inline(g),
+            "function f() {}\nclass C {}\nfunction g() {}\n"
+        );
+    }
+
+    #[test]
+    fn loader_moves_out_of_line() {
+        let html = "<head><script type=\"module\">import x from './a.js';</script></head>";
+        let (out, name, js) = externalise_loader(html).unwrap().unwrap();
+        assert!(out.contains(&format!("src=\"./{name}\"")));
+        assert!(!out.contains("import x"));
+        assert_eq!(js, "import x from './a.js';\n");
+        assert!(externalise_loader(&out).unwrap().is_none());
+    }
+}

@@ -1,0 +1,15 @@
+//! The engine: pure computation. Properties, correlations, solvers, units and validity checks.
+//!
+//! Nothing in here touches the browser, the network, files or the clock: it builds and tests with
+//! `--no-default-features`, so the compiler keeps the boundary. Everything is SI `f64` inside;
+//! only [`units`] converts.
+
+pub mod correlations;
+pub mod error;
+pub mod props;
+pub mod scenario;
+pub mod units;
+pub mod validity;
+
+pub use error::EngineError;
+pub use validity::{Flag, Flagged};

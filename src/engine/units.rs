@@ -1,0 +1,400 @@
+//! The one place where units are converted, numbers are parsed from user text and formatted.
+//!
+//! Inside the engine everything is SI. A [`Unit`] maps a shown value to SI as
+//! `si = shown * scale + offset`. Factors are the exact definitions of NIST Special Publication 811
+//! (2008), Appendix B: 1 in = 0.0254 m, 1 ft = 0.3048 m, 1 mile = 1609.344 m, 1 lbf =
+//! 4.4482216152605 N, 1 Btu_IT = 1055.05585262 J, °F = (°R − 459.67), 1 °R = 5/9 K.
+
+/// The kind of quantity a unit measures.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum Dim {
+    Temperature,
+    Length,
+    Speed,
+    Pressure,
+    HeatTransferCoefficient,
+    HeatFlowPerLength,
+    ThermalConductivity,
+    KinematicViscosity,
+    DynamicViscosity,
+    Density,
+    SpecificHeat,
+}
+
+/// Every dimension, in the order the page lists them.
+pub const ALL_DIMS: [Dim; 11] = [
+    Dim::Temperature,
+    Dim::Length,
+    Dim::Speed,
+    Dim::Pressure,
+    Dim::HeatTransferCoefficient,
+    Dim::HeatFlowPerLength,
+    Dim::ThermalConductivity,
+    Dim::KinematicViscosity,
+    Dim::DynamicViscosity,
+    Dim::Density,
+    Dim::SpecificHeat,
+];
+
+/// A unit system for the global switch.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum System {
+    Si,
+    Us,
+}
+
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Unit {
+    /// Stable id used in links and storage.
+    pub id: &'static str,
+    /// What the page shows.
+    pub symbol: &'static str,
+    pub dim: Dim,
+    pub scale: f64,
+    pub offset: f64,
+}
+
+const IN: f64 = 0.0254;
+const FT: f64 = 0.3048;
+const MILE: f64 = 1609.344;
+const LBF: f64 = 4.448_221_615_260_5;
+const BTU_IT: f64 = 1_055.055_852_62;
+const HOUR: f64 = 3600.0;
+const RANKINE: f64 = 5.0 / 9.0;
+const LB: f64 = 0.453_592_37;
+
+const fn u(id: &'static str, symbol: &'static str, dim: Dim, scale: f64, offset: f64) -> Unit {
+    Unit {
+        id,
+        symbol,
+        dim,
+        scale,
+        offset,
+    }
+}
+
+/// Every unit the page offers. The first unit of each dimension is SI's own.
+pub const UNITS: &[Unit] = &[
+    u("K", "K", Dim::Temperature, 1.0, 0.0),
+    u("C", "°C", Dim::Temperature, 1.0, 273.15),
+    u("F", "°F", Dim::Temperature, RANKINE, 459.67 * RANKINE),
+    u("m", "m", Dim::Length, 1.0, 0.0),
+    u("mm", "mm", Dim::Length, 1e-3, 0.0),
+    u("in", "in", Dim::Length, IN, 0.0),
+    u("ft", "ft", Dim::Length, FT, 0.0),
+    u("m/s", "m/s", Dim::Speed, 1.0, 0.0),
+    u("km/h", "km/h", Dim::Speed, 1000.0 / HOUR, 0.0),
+    u("ft/s", "ft/s", Dim::Speed, FT, 0.0),
+    u("mph", "mph", Dim::Speed, MILE / HOUR, 0.0),
+    u("Pa", "Pa", Dim::Pressure, 1.0, 0.0),
+    u("kPa", "kPa", Dim::Pressure, 1e3, 0.0),
+    u("bar", "bar", Dim::Pressure, 1e5, 0.0),
+    u("psi", "psi", Dim::Pressure, LBF / (IN * IN), 0.0),
+    u("inHg", "inHg", Dim::Pressure, 3386.389, 0.0),
+    u("W/m2K", "W/(m²·K)", Dim::HeatTransferCoefficient, 1.0, 0.0),
+    u(
+        "Btu/hft2F",
+        "Btu/(h·ft²·°F)",
+        Dim::HeatTransferCoefficient,
+        BTU_IT / HOUR / (FT * FT) / RANKINE,
+        0.0,
+    ),
+    u("W/m", "W/m", Dim::HeatFlowPerLength, 1.0, 0.0),
+    u(
+        "Btu/hft",
+        "Btu/(h·ft)",
+        Dim::HeatFlowPerLength,
+        BTU_IT / HOUR / FT,
+        0.0,
+    ),
+    u("W/mK", "W/(m·K)", Dim::ThermalConductivity, 1.0, 0.0),
+    u(
+        "Btu/hftF",
+        "Btu/(h·ft·°F)",
+        Dim::ThermalConductivity,
+        BTU_IT / HOUR / FT / RANKINE,
+        0.0,
+    ),
+    u("m2/s", "m²/s", Dim::KinematicViscosity, 1.0, 0.0),
+    u("ft2/s", "ft²/s", Dim::KinematicViscosity, FT * FT, 0.0),
+    u("Pas", "Pa·s", Dim::DynamicViscosity, 1.0, 0.0),
+    u("lb/fts", "lb/(ft·s)", Dim::DynamicViscosity, LB / FT, 0.0),
+    u("kg/m3", "kg/m³", Dim::Density, 1.0, 0.0),
+    u("lb/ft3", "lb/ft³", Dim::Density, LB / (FT * FT * FT), 0.0),
+    u("J/kgK", "J/(kg·K)", Dim::SpecificHeat, 1.0, 0.0),
+    u(
+        "Btu/lbF",
+        "Btu/(lb·°F)",
+        Dim::SpecificHeat,
+        BTU_IT / LB / RANKINE,
+        0.0,
+    ),
+];
+
+impl Unit {
+    pub fn to_si(&self, shown: f64) -> f64 {
+        shown * self.scale + self.offset
+    }
+    pub fn from_si(&self, si: f64) -> f64 {
+        (si - self.offset) / self.scale
+    }
+}
+
+/// Look a unit up by its id.
+pub fn unit(id: &str) -> Option<&'static Unit> {
+    UNITS.iter().find(|u| u.id == id)
+}
+
+/// The units offered for one dimension, in the order shown.
+pub fn units_of(dim: Dim) -> impl Iterator<Item = &'static Unit> {
+    UNITS.iter().filter(move |u| u.dim == dim)
+}
+
+/// The unit the global switch picks for a dimension.
+pub fn default_unit(dim: Dim, system: System) -> &'static Unit {
+    let id = match (dim, system) {
+        (Dim::Temperature, System::Si) => "C",
+        (Dim::Temperature, System::Us) => "F",
+        (Dim::Length, System::Si) => "mm",
+        (Dim::Length, System::Us) => "in",
+        (Dim::Speed, System::Si) => "m/s",
+        (Dim::Speed, System::Us) => "mph",
+        (Dim::Pressure, System::Si) => "kPa",
+        (Dim::Pressure, System::Us) => "psi",
+        (Dim::HeatTransferCoefficient, System::Si) => "W/m2K",
+        (Dim::HeatTransferCoefficient, System::Us) => "Btu/hft2F",
+        (Dim::HeatFlowPerLength, System::Si) => "W/m",
+        (Dim::HeatFlowPerLength, System::Us) => "Btu/hft",
+        (Dim::ThermalConductivity, System::Si) => "W/mK",
+        (Dim::ThermalConductivity, System::Us) => "Btu/hftF",
+        (Dim::KinematicViscosity, System::Si) => "m2/s",
+        (Dim::KinematicViscosity, System::Us) => "ft2/s",
+        (Dim::DynamicViscosity, System::Si) => "Pas",
+        (Dim::DynamicViscosity, System::Us) => "lb/fts",
+        (Dim::Density, System::Si) => "kg/m3",
+        (Dim::Density, System::Us) => "lb/ft3",
+        (Dim::SpecificHeat, System::Si) => "J/kgK",
+        (Dim::SpecificHeat, System::Us) => "Btu/lbF",
+    };
+    unit(id).expect("every default unit is in UNITS")
+}
+
+/// The unit chosen for each dimension: the global switch fills it, a per-quantity choice changes
+/// one entry. Presentation only: the computed state is SI and never passes through it.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct UnitChoice([&'static Unit; ALL_DIMS.len()]);
+
+impl UnitChoice {
+    pub fn for_system(system: System) -> Self {
+        UnitChoice(ALL_DIMS.map(|d| default_unit(d, system)))
+    }
+    pub fn get(&self, dim: Dim) -> &'static Unit {
+        self.0[dim as usize]
+    }
+    pub fn set(&mut self, unit: &'static Unit) {
+        self.0[unit.dim as usize] = unit;
+    }
+}
+
+/// Why a typed number was refused, in plain words for the message beside the field.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub enum ParseError {
+    Empty,
+    NotANumber,
+    NotFinite,
+}
+
+impl std::fmt::Display for ParseError {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        f.write_str(match self {
+            ParseError::Empty => "enter a value",
+            ParseError::NotANumber => {
+                "not a number: use digits, one decimal point or comma, e.g. 60.3"
+            }
+            ParseError::NotFinite => "the number is too large to use",
+        })
+    }
+}
+
+/// Parse what a user typed: surrounding spaces allowed, a decimal point or a single decimal comma,
+/// an exponent (`1e-3`). "NaN", "inf", thousands separators and lists (`1,2,3`) are refused.
+pub fn parse_number(text: &str) -> Result<f64, ParseError> {
+    let t = text.trim();
+    if t.is_empty() {
+        return Err(ParseError::Empty);
+    }
+    let commas = t.matches(',').count();
+    let owned;
+    let t = if commas == 0 {
+        t
+    } else if commas == 1 && !t.contains('.') {
+        owned = t.replace(',', ".");
+        owned.as_str()
+    } else {
+        return Err(ParseError::NotANumber);
+    };
+    // Only digits, one sign, a point and an exponent: this refuses "inf", "NaN", "0x10", "1_000".
+    let ok_chars = t
+        .chars()
+        .all(|c| c.is_ascii_digit() || matches!(c, '.' | '-' | '+' | 'e' | 'E'));
+    if !ok_chars || !t.chars().any(|c| c.is_ascii_digit()) {
+        return Err(ParseError::NotANumber);
+    }
+    let v: f64 = t.parse().map_err(|_| ParseError::NotANumber)?;
+    if !v.is_finite() {
+        return Err(ParseError::NotFinite);
+    }
+    Ok(v)
+}
+
+/// Format with `sig` significant figures, no exponent for everyday magnitudes, no trailing noise.
+/// Never returns "NaN" or "inf": a non-finite value shows as an em dash.
+pub fn format_sig(v: f64, sig: usize) -> String {
+    if !v.is_finite() {
+        return "—".to_string();
+    }
+    if v == 0.0 {
+        return "0".to_string();
+    }
+    let sig = sig.clamp(1, 17);
+    let mag = v.abs().log10().floor() as i32;
+    if !(-4..9).contains(&mag) {
+        let s = format!("{:.*e}", sig - 1, v);
+        // "1.230e5" -> "1.23e5"
+        if let Some((m, e)) = s.split_once('e') {
+            let m = trim_zeros(m);
+            return format!("{m}e{e}");
+        }
+        return s;
+    }
+    let decimals = (sig as i32 - 1 - mag).max(0) as usize;
+    let s = format!("{:.*}", decimals, v);
+    let s = trim_zeros(&s);
+    if s == "-0" {
+        "0".to_string()
+    } else {
+        s
+    }
+}
+
+fn trim_zeros(s: &str) -> String {
+    if s.contains('.') {
+        s.trim_end_matches('0').trim_end_matches('.').to_string()
+    } else {
+        s.to_string()
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    fn close(a: f64, b: f64, rel: f64) -> bool {
+        (a - b).abs() <= rel * b.abs().max(1e-300)
+    }
+
+    #[test]
+    fn exact_definitions_nist_sp811() {
+        // NIST SP 811 (2008) Appendix B.8/B.9 factors.
+        assert!(close(unit("in").unwrap().to_si(1.0), 0.0254, 1e-15));
+        assert!(close(unit("ft").unwrap().to_si(1.0), 0.3048, 1e-15));
+        assert!(close(unit("mph").unwrap().to_si(1.0), 0.44704, 1e-15));
+        assert!(close(
+            unit("psi").unwrap().to_si(1.0),
+            6894.757293168,
+            1e-12
+        ));
+        // SP 811 B.9: Btu_IT/(h·ft²·°F) = 5.678263 W/(m²·K), Btu_IT·ft/(h·ft²·°F) = 1.730735
+        // W/(m·K), Btu_IT/h = 0.2930711 W (so Btu_IT/(h·ft) × 1 ft = 0.2930711 W).
+        assert!(close(unit("Btu/hft2F").unwrap().to_si(1.0), 5.678263, 1e-6));
+        assert!(close(unit("Btu/hftF").unwrap().to_si(1.0), 1.730735, 1e-6));
+        assert!(close(
+            unit("Btu/hft").unwrap().to_si(1.0) * 0.3048,
+            0.2930711,
+            1e-6
+        ));
+        assert!(close(unit("Btu/lbF").unwrap().to_si(1.0), 4186.8, 1e-12));
+        assert!(close(unit("km/h").unwrap().to_si(36.0), 10.0, 1e-15));
+    }
+
+    #[test]
+    fn temperature_points() {
+        let c = unit("C").unwrap();
+        let f = unit("F").unwrap();
+        assert!(close(c.to_si(0.0), 273.15, 1e-15));
+        assert!(close(f.to_si(32.0), 273.15, 1e-14));
+        assert!(close(f.to_si(212.0), 373.15, 1e-14));
+        assert!(close(f.to_si(-459.67), 0.0 + 1e-300, 1.0) || f.to_si(-459.67).abs() < 1e-12);
+        assert!(close(f.from_si(c.to_si(-40.0)), -40.0, 1e-13));
+    }
+
+    #[test]
+    fn round_trips_every_unit() {
+        for u in UNITS {
+            for &x in &[-1234.5, -1.0, 0.0, 1e-6, 0.37, 1.0, 42.0, 6.02e5] {
+                let back = u.from_si(u.to_si(x));
+                assert!(
+                    (back - x).abs() <= 1e-12 * x.abs().max(1.0),
+                    "{} {x} -> {back}",
+                    u.id
+                );
+            }
+        }
+    }
+
+    #[test]
+    fn every_dimension_has_both_defaults_and_an_si_first_unit() {
+        for u in UNITS {
+            for sys in [System::Si, System::Us] {
+                assert_eq!(default_unit(u.dim, sys).dim, u.dim);
+            }
+            let first = units_of(u.dim).next().unwrap();
+            assert_eq!((first.scale, first.offset), (1.0, 0.0), "{}", u.id);
+        }
+    }
+
+    #[test]
+    fn unit_choice_follows_the_switch_and_one_entry_changes_alone() {
+        for (i, d) in ALL_DIMS.iter().enumerate() {
+            assert_eq!(*d as usize, i, "ALL_DIMS must follow the enum's order");
+        }
+        let mut c = UnitChoice::for_system(System::Si);
+        assert_eq!(c.get(Dim::Temperature).id, "C");
+        c.set(unit("K").unwrap());
+        assert_eq!(c.get(Dim::Temperature).id, "K");
+        assert_eq!(c.get(Dim::Length).id, "mm");
+        assert_eq!(UnitChoice::for_system(System::Us).get(Dim::Speed).id, "mph");
+    }
+
+    #[test]
+    fn parsing_user_text() {
+        assert_eq!(parse_number(" 60.3 "), Ok(60.3));
+        assert_eq!(parse_number("60,3"), Ok(60.3));
+        assert_eq!(parse_number("-5"), Ok(-5.0));
+        assert_eq!(parse_number("1e-3"), Ok(1e-3));
+        assert_eq!(parse_number(""), Err(ParseError::Empty));
+        assert_eq!(parse_number("   "), Err(ParseError::Empty));
+        for bad in [
+            "abc", "1,2,3", "1.2,3", "NaN", "nan", "inf", "Infinity", "-", ".", "e5", "1..2",
+            "0x10",
+        ] {
+            assert!(parse_number(bad).is_err(), "{bad}");
+        }
+        assert_eq!(parse_number("1e309"), Err(ParseError::NotFinite));
+        assert_eq!(parse_number("1e308"), Ok(1e308));
+    }
+
+    #[test]
+    fn formatting_significant_figures() {
+        assert_eq!(format_sig(96.0234, 3), "96");
+        assert_eq!(format_sig(96.0234, 4), "96.02");
+        assert_eq!(format_sig(0.026352, 3), "0.0264");
+        assert_eq!(format_sig(6071.4, 3), "6071");
+        assert_eq!(format_sig(1.5e-5, 3), "1.5e-5");
+        assert_eq!(format_sig(2.5e12, 3), "2.5e12");
+        assert_eq!(format_sig(f64::NAN, 3), "—");
+        assert_eq!(format_sig(f64::INFINITY, 3), "—");
+        assert_eq!(format_sig(-0.0001, 1), "-0.0001");
+        assert_eq!(format_sig(-0.00001, 1), "-1e-5");
+    }
+}

@@ -1,0 +1,377 @@
+//! Browser tests: the built page (dist/) in headless Debian Chromium through ChromeDriver.
+//!
+//! They need `dist/` (built by `./setup.sh build` or `./setup.sh test`) and /usr/bin/chromedriver.
+//! `./setup.sh test` sets LEEWARD_REQUIRE_BROWSER=1, which turns a missing prerequisite into a
+//! failure; a plain `cargo test` without them says it skipped them.
+
+use std::io::{BufRead, BufReader};
+use std::net::TcpListener;
+use std::path::PathBuf;
+use std::process::{Child, Command, Stdio};
+use std::sync::Mutex;
+use std::time::{Duration, Instant};
+
+use fantoccini::{Client, ClientBuilder, Locator};
+use leeward::engine::scenario::{self, Scenario, DEMO};
+use serde_json::json;
+
+/// One browser at a time: two cores.
+static BROWSER: Mutex<()> = Mutex::new(());
+
+const CHROMEDRIVER: &str = "/usr/bin/chromedriver";
+const CHROMIUM: &str = "/usr/bin/chromium";
+
+fn dist() -> PathBuf {
+    PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("dist")
+}
+
+/// Whether the prerequisites are there; panics when they are required and missing.
+fn ready() -> bool {
+    let have = dist().join("leeward.html").is_file()
+        && dist().join("index.html").is_file()
+        && std::path::Path::new(CHROMEDRIVER).exists();
+    if !have {
+        if std::env::var_os("LEEWARD_REQUIRE_BROWSER").is_some() {
+            panic!("browser tests required but dist/ or {CHROMEDRIVER} is missing: run ./setup.sh build");
+        }
+        eprintln!(
+            "SKIPPED browser test: dist/ or {CHROMEDRIVER} missing (./setup.sh test runs it)"
+        );
+    }
+    have
+}
+
+struct Killed(Child);
+impl Drop for Killed {
+    fn drop(&mut self) {
+        let _ = self.0.kill();
+        let _ = self.0.wait();
+    }
+}
+
+fn free_port() -> u16 {
+    TcpListener::bind("127.0.0.1:0")
+        .unwrap()
+        .local_addr()
+        .unwrap()
+        .port()
+}
+
+fn wait_for_port(port: u16) {
+    let t0 = Instant::now();
+    while std::net::TcpStream::connect(("127.0.0.1", port)).is_err() {
+        assert!(
+            t0.elapsed() < Duration::from_secs(20),
+            "port {port} never opened"
+        );
+        std::thread::sleep(Duration::from_millis(50));
+    }
+}
+
+/// Serve dist/ on a loopback port with the project's own server; returns it and its base URL.
+fn serve() -> (Killed, String) {
+    let mut child = Command::new(env!("CARGO_BIN_EXE_leeward-serve"))
+        .arg(dist())
+        .arg("127.0.0.1:0")
+        .stdout(Stdio::piped())
+        .spawn()
+        .expect("start leeward-serve");
+    let mut line = String::new();
+    BufReader::new(child.stdout.take().unwrap())
+        .read_line(&mut line)
+        .unwrap();
+    let url = line
+        .trim()
+        .strip_prefix("listening on ")
+        .expect("server banner")
+        .to_string();
+    (Killed(child), url)
+}
+
+async fn browser() -> (Killed, Client) {
+    let port = free_port();
+    let driver = Killed(
+        Command::new(CHROMEDRIVER)
+            .arg(format!("--port={port}"))
+            .stdout(Stdio::null())
+            .stderr(Stdio::null())
+            .spawn()
+            .expect("start chromedriver"),
+    );
+    wait_for_port(port);
+    let profile = std::env::temp_dir().join(format!("leeward-chrome-{port}"));
+    let caps = json!({
+        "goog:chromeOptions": {
+            "binary": CHROMIUM,
+            "args": [
+                "--headless=new", "--no-sandbox", "--disable-gpu", "--disable-quic",
+                "--no-first-run", "--disable-background-networking", "--disable-component-update",
+                "--disable-sync", "--window-size=768,1024",
+                format!("--user-data-dir={}", profile.display()),
+            ]
+        }
+    });
+    let caps = caps.as_object().unwrap().clone();
+    let client = ClientBuilder::new(hyper_util::client::legacy::connect::HttpConnector::new())
+        .capabilities(caps)
+        .connect(&format!("http://127.0.0.1:{port}"))
+        .await
+        .expect("connect to chromedriver");
+    (driver, client)
+}
+
+async fn js(c: &Client, script: &str) -> serde_json::Value {
+    c.execute(script, vec![]).await.expect(script)
+}
+
+/// Wait until the app has rendered its results.
+async fn wait_rendered(c: &Client) {
+    let t0 = Instant::now();
+    loop {
+        let v = js(c, "const e = document.querySelector('[data-quantity=h]'); return e ? e.getAttribute('data-si') : null;").await;
+        if v.as_str().is_some_and(|s| !s.is_empty()) {
+            return;
+        }
+        assert!(
+            t0.elapsed() < Duration::from_secs(20),
+            "the page never showed a result"
+        );
+        tokio::time::sleep(Duration::from_millis(50)).await;
+    }
+}
+
+async fn si(c: &Client, quantity: &str) -> f64 {
+    let v = js(
+        c,
+        &format!(
+            "return document.querySelector('[data-quantity={quantity}]').getAttribute('data-si');"
+        ),
+    )
+    .await;
+    v.as_str()
+        .unwrap()
+        .parse()
+        .unwrap_or_else(|_| panic!("{quantity}: data-si = {v}"))
+}
+
+/// Replace a field's text as a user would: clear it, then type key by key.
+async fn type_into(c: &Client, key: &str, text: &str) {
+    let el = c.find(Locator::Css(&format!("#in-{key}"))).await.unwrap();
+    el.clear().await.unwrap();
+    el.send_keys(text).await.unwrap();
+}
+
+/// Replace a field's text in one input event, as a paste does (typing key by key would pass
+/// through valid prefixes such as the "1" of "1,2,3").
+async fn paste_into(c: &Client, key: &str, text: &str) {
+    let args = vec![json!(format!("#in-{key}")), json!(text)];
+    c.execute(
+        "const e = document.querySelector(arguments[0]); e.value = arguments[1]; e.dispatchEvent(new Event('input', {bubbles: true}));",
+        args,
+    )
+    .await
+    .unwrap();
+}
+
+async fn text_of(c: &Client, css: &str) -> String {
+    let v = js(
+        c,
+        &format!("const e = document.querySelector('{css}'); return e ? e.textContent : '';"),
+    )
+    .await;
+    v.as_str().unwrap_or_default().to_string()
+}
+
+fn close(a: f64, b: f64) -> bool {
+    // wasm and native use different maths libraries: agreement to 1e-9 relative.
+    (a - b).abs() <= 1e-9 * b.abs()
+}
+
+fn expect(s: &Scenario) -> scenario::Outcome {
+    scenario::evaluate(s).unwrap()
+}
+
+/// Every resource the page loaded came from its own origin (or is inline data).
+async fn assert_no_foreign_requests(c: &Client) {
+    let v = js(c, "return [location.origin, location.protocol, performance.getEntriesByType('resource').map(e => e.name)];").await;
+    let origin = v[0].as_str().unwrap().to_string();
+    let protocol = v[1].as_str().unwrap().to_string();
+    for name in v[2].as_array().unwrap() {
+        let name = name.as_str().unwrap();
+        let own = if protocol == "file:" {
+            name.starts_with("file://") || name.starts_with("data:")
+        } else {
+            name.starts_with(&origin)
+        };
+        assert!(own, "request left the page's origin: {name}");
+    }
+}
+
+async fn assert_no_nan_shown(c: &Client) {
+    let body = text_of(c, "body").await;
+    for bad in ["NaN", "Infinity", "inf "] {
+        assert!(!body.contains(bad), "page shows {bad}: {body}");
+    }
+}
+
+/// The checks both forms of the page must pass.
+async fn exercise(c: &Client, base: &str) {
+    c.goto(base).await.unwrap();
+    wait_rendered(c).await;
+    assert!(
+        close(si(c, "h").await, expect(&DEMO).h),
+        "demo h differs from the engine"
+    );
+    assert!(text_of(c, "[data-demo]").await.contains("Demo"));
+
+    // Typing, with a decimal comma: the result follows the engine.
+    type_into(c, "D", "33,4").await;
+    let mut s = DEMO;
+    s.diameter = 0.0334;
+    let want = expect(&s);
+    assert!(close(si(c, "h").await, want.h));
+    assert!(close(si(c, "q_per_length").await, want.q_per_length));
+    assert!(close(si(c, "reynolds").await, want.reynolds));
+
+    // Unit switch: shown values convert, the computed state does not move.
+    c.find(Locator::Css("[data-system=us]"))
+        .await
+        .unwrap()
+        .click()
+        .await
+        .unwrap();
+    let shown_d = js(c, "return document.querySelector('#in-D').value;").await;
+    assert_eq!(shown_d.as_str().unwrap(), "1.31496", "33.4 mm in inches");
+    assert!(text_of(c, "[data-quantity=q_per_length] + .unit")
+        .await
+        .contains("Btu"));
+    assert!(
+        close(si(c, "h").await, want.h),
+        "unit switch changed the result"
+    );
+    c.find(Locator::Css("[data-system=si]"))
+        .await
+        .unwrap()
+        .click()
+        .await
+        .unwrap();
+    assert_eq!(
+        js(c, "return document.querySelector('#in-D').value;")
+            .await
+            .as_str()
+            .unwrap(),
+        "33.4"
+    );
+
+    // Bad input: a message beside the field, last good result kept and marked stale, no NaN.
+    for (key, bad) in [
+        ("D", ""),
+        ("D", "abc"),
+        ("D", "0"),
+        ("D", "-5"),
+        ("D", "1,2,3"),
+        ("D", "NaN"),
+        ("Ta", "-300"),
+        ("U", "1e999"),
+    ] {
+        paste_into(c, key, bad).await;
+        let msg = text_of(c, &format!("[data-msg-for={key}]")).await;
+        assert!(
+            !msg.trim().is_empty(),
+            "no message beside {key} for {bad:?}"
+        );
+        assert!(
+            !text_of(c, "[data-stale]").await.is_empty(),
+            "not marked stale for {key}={bad:?}"
+        );
+        assert!(
+            close(si(c, "h").await, want.h),
+            "last good result lost for {key}={bad:?}"
+        );
+        assert_no_nan_shown(c).await;
+        // Put the good value back.
+        let good = match key {
+            "D" => "33.4",
+            "Ta" => "5",
+            _ => "7",
+        };
+        type_into(c, key, good).await;
+        assert!(text_of(c, &format!("[data-msg-for={key}]"))
+            .await
+            .trim()
+            .is_empty());
+    }
+    // Equal temperatures: said beside the surface temperature, no division by zero.
+    type_into(c, "Ts", "5").await;
+    assert!(text_of(c, "[data-msg-for=Ts]").await.contains("no heat"));
+    assert_no_nan_shown(c).await;
+    type_into(c, "Ts", "65").await;
+    assert!(close(si(c, "h").await, want.h));
+
+    // The link carries the scenario: load it fresh and get the same numbers.
+    let url = c.current_url().await.unwrap().to_string();
+    assert!(url.contains("D=0.0334"), "link not updated: {url}");
+    c.goto("about:blank").await.unwrap();
+    c.goto(&url).await.unwrap();
+    wait_rendered(c).await;
+    assert!(
+        close(si(c, "h").await, want.h),
+        "link did not reproduce the calculation"
+    );
+
+    // A hostile link: message, demo shown, nothing injected.
+    let hostile = format!(
+        "{}#v=1&D=%3Cimg%20src=x%20onerror=alert(1)%3E",
+        base.split('#').next().unwrap()
+    );
+    c.goto("about:blank").await.unwrap();
+    c.goto(&hostile).await.unwrap();
+    wait_rendered(c).await;
+    assert!(
+        !text_of(c, "[data-notice=link]").await.is_empty(),
+        "no message for a bad link"
+    );
+    assert_eq!(
+        js(c, "return document.querySelectorAll('img').length;").await,
+        json!(0)
+    );
+    assert!(close(si(c, "h").await, expect(&DEMO).h));
+
+    assert_no_foreign_requests(c).await;
+}
+
+fn run(f: impl std::future::Future<Output = ()>) {
+    tokio::runtime::Builder::new_current_thread()
+        .enable_all()
+        .build()
+        .unwrap()
+        .block_on(f);
+}
+
+#[test]
+fn single_file_page_computes_from_file_url() {
+    if !ready() {
+        return;
+    }
+    let _one = BROWSER.lock().unwrap_or_else(|e| e.into_inner());
+    run(async {
+        let (_driver, c) = browser().await;
+        let url = format!("file://{}", dist().join("leeward.html").display());
+        exercise(&c, &url).await;
+        c.close().await.unwrap();
+    });
+}
+
+#[test]
+fn hosted_page_computes_over_loopback_http() {
+    if !ready() {
+        return;
+    }
+    let _one = BROWSER.lock().unwrap_or_else(|e| e.into_inner());
+    let (_server, base) = serve();
+    run(async {
+        let (_driver, c) = browser().await;
+        exercise(&c, &base).await;
+        c.close().await.unwrap();
+    });
+}
