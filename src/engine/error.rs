@@ -16,6 +16,14 @@ pub enum EngineError {
     },
     /// The surface and the stream are at the same temperature: there is no heat flow to compute.
     NoTemperatureDifference { value: f64, unit: &'static str },
+    /// A fluid asked for in a phase it is not in at that state; `boundary` is the temperature of
+    /// the phase change (saturation or freezing), K.
+    WrongPhase {
+        asked: &'static str,
+        t: f64,
+        boundary: f64,
+        why: &'static str,
+    },
     /// A result came out non-finite (an input of absurd magnitude somewhere).
     NonFiniteResult { quantity: &'static str },
 }
@@ -34,6 +42,19 @@ impl fmt::Display for EngineError {
                 f,
                 "surface and stream are both at {value} {unit}: no heat flows, so there is nothing to compute"
             ),
+            EngineError::WrongPhase {
+                asked,
+                t,
+                boundary,
+                why,
+            } => write!(
+                f,
+                "{asked} at {} K ({} °C): {why}; the phase changes at {} K ({} °C)",
+                fmt4(*t),
+                fmt4(t - 273.15),
+                fmt4(*boundary),
+                fmt4(boundary - 273.15)
+            ),
             EngineError::NonFiniteResult { quantity } => write!(
                 f,
                 "{quantity} came out too large to represent; check the inputs' magnitudes"
@@ -43,6 +64,10 @@ impl fmt::Display for EngineError {
 }
 
 impl std::error::Error for EngineError {}
+
+fn fmt4(v: f64) -> String {
+    crate::engine::units::format_sig(v, 5)
+}
 
 /// Reject NaN and infinities up front.
 pub fn finite(quantity: &'static str, v: f64) -> Result<f64, EngineError> {

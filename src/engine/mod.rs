@@ -4,6 +4,7 @@
 //! `--no-default-features`, so the compiler keeps the boundary. Everything is SI `f64` inside;
 //! only [`units`] converts.
 
+pub mod atmosphere;
 pub mod correlations;
 pub mod error;
 pub mod props;

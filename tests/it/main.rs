@@ -3,3 +3,4 @@
 mod air_reference;
 mod browser;
 mod fixture;
+mod fluid_reference;

@@ -1,6 +1,14 @@
 //! Fluid properties at (T, p), each with the range flags of the formulation behind it.
 
 pub mod air;
+pub mod glycol;
+pub mod humid_air;
+pub mod user;
+pub mod water;
+
+pub use glycol::Glycol;
+pub use humid_air::Humidity;
+pub use user::UserFluid;
 
 use crate::engine::error::EngineError;
 use crate::engine::validity::Flag;
@@ -60,23 +68,44 @@ impl Properties {
     }
 }
 
-/// The fluids the engine knows.
+/// The fluids the engine knows. One interface for all: [`Fluid::at`].
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub enum Fluid {
     DryAir,
+    HumidAir(Humidity),
+    Water,
+    Steam,
+    /// A glycol–water mixture at a mass fraction 0–0.6.
+    Glycol(Glycol, f64),
+    User(UserFluid),
 }
 
 impl Fluid {
     pub fn name(&self) -> &'static str {
         match self {
             Fluid::DryAir => "dry air",
+            Fluid::HumidAir(_) => "humid air",
+            Fluid::Water => "liquid water",
+            Fluid::Steam => "steam",
+            Fluid::Glycol(g, _) => g.name(),
+            Fluid::User(_) => "user fluid",
         }
+    }
+
+    /// Whether the fluid is a gas (for the choice of correlation and its ranges).
+    pub fn is_gas(&self) -> bool {
+        matches!(self, Fluid::DryAir | Fluid::HumidAir(_) | Fluid::Steam)
     }
 
     /// Properties at temperature `t` (K) and pressure `p` (Pa).
     pub fn at(&self, t: f64, p: f64) -> Result<Properties, EngineError> {
         match self {
             Fluid::DryAir => air::properties(t, p),
+            Fluid::HumidAir(h) => humid_air::properties(t, p, *h),
+            Fluid::Water => water::liquid(t, p),
+            Fluid::Steam => water::steam(t, p),
+            Fluid::Glycol(g, x) => glycol::properties(*g, *x, t, p),
+            Fluid::User(u) => user::properties(u, t, p),
         }
     }
 }
