@@ -42,8 +42,18 @@ mod tests {
     /// 5000 m 54 020 Pa, 11 000 m 22 632 Pa (printed to five figures).
     #[test]
     fn icao_table_values_from_memory() {
-        for (h, p) in [(0.0, 101_325.0), (1000.0, 89_875.0), (2000.0, 79_495.0), (5000.0, 54_020.0), (11_000.0, 22_632.0)] {
-            assert!(((pressure_at(h) - p) / p).abs() < 5e-5, "{h} m: {}", pressure_at(h));
+        for (h, p) in [
+            (0.0, 101_325.0),
+            (1000.0, 89_875.0),
+            (2000.0, 79_495.0),
+            (5000.0, 54_020.0),
+            (11_000.0, 22_632.0),
+        ] {
+            assert!(
+                ((pressure_at(h) - p) / p).abs() < 5e-5,
+                "{h} m: {}",
+                pressure_at(h)
+            );
         }
         assert!((temperature_at(11_000.0) - 216.65).abs() < 1e-9);
     }

@@ -5,6 +5,8 @@
 //! only [`units`] converts.
 
 pub mod atmosphere;
+pub mod body;
+pub mod chart;
 pub mod correlations;
 pub mod error;
 pub mod props;

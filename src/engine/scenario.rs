@@ -1,44 +1,166 @@
 //! A whole calculation: the inputs a user gives, their hard limits, the evaluation with its
 //! working, and the link format that carries it.
 //!
-//! Today's scenario is a circular cylinder (a bare pipe, rod or wire) in a cross-flow of dry air.
+//! The scenario is a body in a cross-flow of a fluid: the choices (shape, axis, wind direction,
+//! fluid, how pressure and humidity are given) and the numbers, all SI.
 
-use crate::engine::correlations::cylinder;
+use crate::engine::atmosphere;
+use crate::engine::body::{self, Analysis, Body};
+pub use crate::engine::body::{Axis, Shape, Wind};
 use crate::engine::error::{finite_result, EngineError};
-use crate::engine::props::{Fluid, Properties};
+use crate::engine::props::{Fluid, Glycol, Humidity, Properties, UserFluid};
 use crate::engine::units::{self, format_sig, Dim, System, Unit};
 use crate::engine::validity::Flag;
 
-/// The inputs, SI: diameter m, speed m/s, temperatures K, pressure Pa.
-#[derive(Debug, Clone, Copy, PartialEq)]
-pub struct Scenario {
-    pub diameter: f64,
-    pub speed: f64,
-    pub air_temp: f64,
-    pub surface_temp: f64,
-    pub pressure: f64,
+/// The fluid of the stream.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum FluidKind {
+    DryAir,
+    HumidAir,
+    Water,
+    Steam,
+    EthyleneGlycol,
+    PropyleneGlycol,
+    User,
 }
 
-/// The demo that opens by default (invented): a bare 2-inch line (60.3 mm outside diameter) with
-/// its surface at 65 °C, crossing a roof in a 7 m/s wind of 5 °C air at sea-level pressure.
+impl FluidKind {
+    pub const ALL: [FluidKind; 7] = [
+        FluidKind::DryAir,
+        FluidKind::HumidAir,
+        FluidKind::Water,
+        FluidKind::Steam,
+        FluidKind::EthyleneGlycol,
+        FluidKind::PropyleneGlycol,
+        FluidKind::User,
+    ];
+    /// Stable id in links.
+    pub fn id(&self) -> &'static str {
+        match self {
+            FluidKind::DryAir => "air",
+            FluidKind::HumidAir => "humid",
+            FluidKind::Water => "water",
+            FluidKind::Steam => "steam",
+            FluidKind::EthyleneGlycol => "eg",
+            FluidKind::PropyleneGlycol => "pg",
+            FluidKind::User => "user",
+        }
+    }
+    pub fn label(&self) -> &'static str {
+        match self {
+            FluidKind::DryAir => "Dry air",
+            FluidKind::HumidAir => "Humid air",
+            FluidKind::Water => "Liquid water",
+            FluidKind::Steam => "Steam",
+            FluidKind::EthyleneGlycol => "Ethylene glycol–water",
+            FluidKind::PropyleneGlycol => "Propylene glycol–water",
+            FluidKind::User => "My own fluid (constant properties)",
+        }
+    }
+    pub fn from_id(id: &str) -> Option<FluidKind> {
+        FluidKind::ALL.into_iter().find(|f| f.id() == id)
+    }
+}
+
+/// How the stream's pressure is given.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum PressureInput {
+    Absolute,
+    /// From the site elevation through the standard atmosphere.
+    Elevation,
+}
+
+/// How humid air's moisture is given.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum HumidityInput {
+    Relative,
+    DewPoint,
+}
+
+/// The inputs, SI: lengths m, speed m/s, temperatures K, pressure Pa, elevation m, fractions 0–1,
+/// user-fluid properties in SI.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Scenario {
+    pub shape: Shape,
+    pub axis: Axis,
+    pub wind: Wind,
+    pub fluid: FluidKind,
+    pub pressure_input: PressureInput,
+    pub humidity_input: HumidityInput,
+    pub diameter: f64,
+    /// Length along the axis (the height when upright), m; not used for a sphere.
+    pub length: f64,
+    pub speed: f64,
+    pub fluid_temp: f64,
+    pub surface_temp: f64,
+    pub pressure: f64,
+    pub elevation: f64,
+    pub relative_humidity: f64,
+    pub dew_point: f64,
+    pub glycol_fraction: f64,
+    pub user_rho: f64,
+    pub user_mu: f64,
+    pub user_k: f64,
+    pub user_cp: f64,
+    pub user_beta: f64,
+}
+
+/// The demo that opens by default (invented): a bare 2-inch line (60.3 mm outside diameter), a
+/// 12 m horizontal run with its surface at 65 °C, crossing a roof in a 7 m/s wind of 5 °C air at
+/// sea-level pressure, 70 % relative humidity.
 pub const DEMO: Scenario = Scenario {
+    shape: Shape::Cylinder,
+    axis: Axis::Horizontal,
+    wind: Wind::Horizontal,
+    fluid: FluidKind::HumidAir,
+    pressure_input: PressureInput::Absolute,
+    humidity_input: HumidityInput::Relative,
     diameter: 0.0603,
+    length: 12.0,
     speed: 7.0,
-    air_temp: 278.15,
+    fluid_temp: 278.15,
     surface_temp: 338.15,
     pressure: 101_325.0,
+    elevation: 0.0,
+    relative_humidity: 0.7,
+    dew_point: 273.15,
+    glycol_fraction: 0.3,
+    // A light mineral oil near 40 °C (invented round values, typical magnitudes).
+    user_rho: 860.0,
+    user_mu: 0.03,
+    user_k: 0.13,
+    user_cp: 2000.0,
+    user_beta: 7e-4,
 };
 
 pub const DEMO_TITLE: &str = "Demo: a bare 2-inch line on a windy roof";
 
-/// Which input a value belongs to.
+/// Which numeric input a value belongs to.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
 pub enum Field {
     Diameter,
+    Length,
     Speed,
-    AirTemp,
+    FluidTemp,
     SurfaceTemp,
     Pressure,
+    Elevation,
+    RelativeHumidity,
+    DewPoint,
+    GlycolFraction,
+    UserRho,
+    UserMu,
+    UserK,
+    UserCp,
+    UserBeta,
+}
+
+/// The group a field is shown in.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum Group {
+    Body,
+    Stream,
+    Surface,
 }
 
 /// An input's label, dimension, link key and hard limits. The limits are where the computation
@@ -46,6 +168,7 @@ pub enum Field {
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct FieldSpec {
     pub field: Field,
+    pub group: Group,
     /// Key in the link fragment.
     pub key: &'static str,
     pub label: &'static str,
@@ -57,57 +180,164 @@ pub struct FieldSpec {
     pub help: &'static str,
 }
 
-pub const FIELDS: [FieldSpec; 5] = [
+const fn f(
+    field: Field,
+    group: Group,
+    key: &'static str,
+    label: &'static str,
+    dim: Dim,
+    (min, min_open, max): (f64, bool, f64),
+    help: &'static str,
+) -> FieldSpec {
     FieldSpec {
-        field: Field::Diameter,
-        key: "D",
-        label: "Outside diameter",
-        dim: Dim::Length,
-        min: 0.0,
-        min_open: true,
-        max: 100.0,
-        help: "of the bare surface the air touches",
-    },
-    FieldSpec {
-        field: Field::Speed,
-        key: "U",
-        label: "Air speed",
-        dim: Dim::Speed,
-        min: 0.0,
-        min_open: false,
-        max: 300.0,
-        help: "across the pipe axis",
-    },
-    FieldSpec {
-        field: Field::AirTemp,
-        key: "Ta",
-        label: "Air temperature",
-        dim: Dim::Temperature,
-        min: 0.0,
-        min_open: true,
-        max: 3000.0,
-        help: "of the approaching air",
-    },
-    FieldSpec {
-        field: Field::SurfaceTemp,
-        key: "Ts",
-        label: "Surface temperature",
-        dim: Dim::Temperature,
-        min: 0.0,
-        min_open: true,
-        max: 3000.0,
-        help: "of the outer surface",
-    },
-    FieldSpec {
-        field: Field::Pressure,
-        key: "p",
-        label: "Air pressure",
-        dim: Dim::Pressure,
-        min: 0.0,
-        min_open: true,
-        max: 100e6,
-        help: "absolute, at the site",
-    },
+        field,
+        group,
+        key,
+        label,
+        dim,
+        min,
+        min_open,
+        max,
+        help,
+    }
+}
+
+pub const FIELDS: [FieldSpec; 15] = [
+    f(
+        Field::Diameter,
+        Group::Body,
+        "D",
+        "Size D",
+        Dim::Length,
+        (0.0, true, 100.0),
+        "as drawn: the width across the stream",
+    ),
+    f(
+        Field::Length,
+        Group::Body,
+        "L",
+        "Length",
+        Dim::Length,
+        (0.0, true, 10_000.0),
+        "along the axis; the height when upright",
+    ),
+    f(
+        Field::Speed,
+        Group::Stream,
+        "U",
+        "Stream speed",
+        Dim::Speed,
+        (0.0, false, 300.0),
+        "across the axis; 0 for still air",
+    ),
+    f(
+        Field::FluidTemp,
+        Group::Stream,
+        "Ta",
+        "Stream temperature",
+        Dim::Temperature,
+        (0.0, true, 3000.0),
+        "of the approaching fluid",
+    ),
+    f(
+        Field::Pressure,
+        Group::Stream,
+        "p",
+        "Pressure",
+        Dim::Pressure,
+        (0.0, true, 100e6),
+        "absolute, at the site",
+    ),
+    f(
+        Field::Elevation,
+        Group::Stream,
+        "z",
+        "Site elevation",
+        Dim::Elevation,
+        (-500.0, false, 11_000.0),
+        "above sea level; standard atmosphere",
+    ),
+    f(
+        Field::RelativeHumidity,
+        Group::Stream,
+        "rh",
+        "Relative humidity",
+        Dim::Fraction,
+        (0.0, false, 1.0),
+        "to water above 0 °C, to ice below",
+    ),
+    f(
+        Field::DewPoint,
+        Group::Stream,
+        "td",
+        "Dew point",
+        Dim::Temperature,
+        (0.0, true, 3000.0),
+        "frost point below 0 °C",
+    ),
+    f(
+        Field::GlycolFraction,
+        Group::Stream,
+        "xg",
+        "Glycol content",
+        Dim::Fraction,
+        (0.0, false, 0.6),
+        "by mass, 0–60 %",
+    ),
+    f(
+        Field::UserRho,
+        Group::Stream,
+        "ur",
+        "Density",
+        Dim::Density,
+        (0.0, true, 1e5),
+        "of your fluid",
+    ),
+    f(
+        Field::UserMu,
+        Group::Stream,
+        "um",
+        "Viscosity",
+        Dim::DynamicViscosity,
+        (0.0, true, 1e3),
+        "dynamic, of your fluid",
+    ),
+    f(
+        Field::UserK,
+        Group::Stream,
+        "uk",
+        "Thermal conductivity",
+        Dim::ThermalConductivity,
+        (0.0, true, 1e4),
+        "of your fluid",
+    ),
+    f(
+        Field::UserCp,
+        Group::Stream,
+        "uc",
+        "Heat capacity",
+        Dim::SpecificHeat,
+        (0.0, true, 1e6),
+        "isobaric, of your fluid",
+    ),
+    f(
+        Field::UserBeta,
+        Group::Stream,
+        "ub",
+        "Expansion coefficient β",
+        Dim::ExpansionCoefficient,
+        (0.0, false, 1.0),
+        "volumetric; 0 if unknown",
+    ),
+    f(
+        Field::SurfaceTemp,
+        Group::Surface,
+        "Ts",
+        "Surface temperature",
+        Dim::Temperature,
+        (0.0, true, 3000.0),
+        "of the outer surface",
+    ),
 ];
 
 pub fn spec(field: Field) -> &'static FieldSpec {
@@ -121,19 +351,99 @@ impl Scenario {
     pub fn get(&self, f: Field) -> f64 {
         match f {
             Field::Diameter => self.diameter,
+            Field::Length => self.length,
             Field::Speed => self.speed,
-            Field::AirTemp => self.air_temp,
+            Field::FluidTemp => self.fluid_temp,
             Field::SurfaceTemp => self.surface_temp,
             Field::Pressure => self.pressure,
+            Field::Elevation => self.elevation,
+            Field::RelativeHumidity => self.relative_humidity,
+            Field::DewPoint => self.dew_point,
+            Field::GlycolFraction => self.glycol_fraction,
+            Field::UserRho => self.user_rho,
+            Field::UserMu => self.user_mu,
+            Field::UserK => self.user_k,
+            Field::UserCp => self.user_cp,
+            Field::UserBeta => self.user_beta,
         }
     }
+
     pub fn set(&mut self, f: Field, v: f64) {
+        let slot = match f {
+            Field::Diameter => &mut self.diameter,
+            Field::Length => &mut self.length,
+            Field::Speed => &mut self.speed,
+            Field::FluidTemp => &mut self.fluid_temp,
+            Field::SurfaceTemp => &mut self.surface_temp,
+            Field::Pressure => &mut self.pressure,
+            Field::Elevation => &mut self.elevation,
+            Field::RelativeHumidity => &mut self.relative_humidity,
+            Field::DewPoint => &mut self.dew_point,
+            Field::GlycolFraction => &mut self.glycol_fraction,
+            Field::UserRho => &mut self.user_rho,
+            Field::UserMu => &mut self.user_mu,
+            Field::UserK => &mut self.user_k,
+            Field::UserCp => &mut self.user_cp,
+            Field::UserBeta => &mut self.user_beta,
+        };
+        *slot = v;
+    }
+
+    /// Whether a field takes part in this scenario (the page hides the others).
+    pub fn uses(&self, f: Field) -> bool {
+        use FluidKind as K;
         match f {
-            Field::Diameter => self.diameter = v,
-            Field::Speed => self.speed = v,
-            Field::AirTemp => self.air_temp = v,
-            Field::SurfaceTemp => self.surface_temp = v,
-            Field::Pressure => self.pressure = v,
+            Field::Length => self.shape != Shape::Sphere,
+            Field::Pressure => self.pressure_input == PressureInput::Absolute,
+            Field::Elevation => self.pressure_input == PressureInput::Elevation,
+            Field::RelativeHumidity => {
+                self.fluid == K::HumidAir && self.humidity_input == HumidityInput::Relative
+            }
+            Field::DewPoint => {
+                self.fluid == K::HumidAir && self.humidity_input == HumidityInput::DewPoint
+            }
+            Field::GlycolFraction => {
+                matches!(self.fluid, K::EthyleneGlycol | K::PropyleneGlycol)
+            }
+            Field::UserRho | Field::UserMu | Field::UserK | Field::UserCp | Field::UserBeta => {
+                self.fluid == K::User
+            }
+            _ => true,
+        }
+    }
+
+    /// The absolute pressure, Pa, whichever way it was given.
+    pub fn pressure_pa(&self) -> f64 {
+        match self.pressure_input {
+            PressureInput::Absolute => self.pressure,
+            PressureInput::Elevation => atmosphere::pressure_at(self.elevation),
+        }
+    }
+
+    /// Whether the wind direction matters (it does not for an upright prism: any wind crosses it).
+    pub fn uses_wind(&self) -> bool {
+        self.shape == Shape::Sphere || self.axis == Axis::Horizontal
+    }
+
+    /// The engine's fluid for this scenario.
+    pub fn fluid(&self) -> Fluid {
+        match self.fluid {
+            FluidKind::DryAir => Fluid::DryAir,
+            FluidKind::HumidAir => Fluid::HumidAir(match self.humidity_input {
+                HumidityInput::Relative => Humidity::Relative(self.relative_humidity),
+                HumidityInput::DewPoint => Humidity::DewPoint(self.dew_point),
+            }),
+            FluidKind::Water => Fluid::Water,
+            FluidKind::Steam => Fluid::Steam,
+            FluidKind::EthyleneGlycol => Fluid::Glycol(Glycol::Ethylene, self.glycol_fraction),
+            FluidKind::PropyleneGlycol => Fluid::Glycol(Glycol::Propylene, self.glycol_fraction),
+            FluidKind::User => Fluid::User(UserFluid {
+                rho: self.user_rho,
+                mu: self.user_mu,
+                k: self.user_k,
+                cp: self.user_cp,
+                beta: (self.user_beta > 0.0).then_some(self.user_beta),
+            }),
         }
     }
 }
@@ -174,6 +484,25 @@ pub fn read_field(spec: &FieldSpec, text: &str, shown: &Unit) -> Result<f64, Str
     check_field(spec, shown.to_si(v), shown)
 }
 
+/// Where an evaluation error belongs on the page.
+pub fn error_field(e: &EngineError) -> Option<Field> {
+    match e {
+        EngineError::NoTemperatureDifference { .. } => Some(Field::SurfaceTemp),
+        EngineError::WrongPhase { .. } => Some(Field::FluidTemp),
+        EngineError::NonFiniteResult { quantity } if quantity.contains("opposing") => {
+            Some(Field::Speed)
+        }
+        EngineError::Undefined { quantity, .. } => match *quantity {
+            "expansion coefficient β" => Some(Field::UserBeta),
+            "relative humidity" | "vapour pressure" => Some(Field::RelativeHumidity),
+            "dew point" => Some(Field::DewPoint),
+            "glycol concentration" => Some(Field::GlycolFraction),
+            _ => None,
+        },
+        _ => None,
+    }
+}
+
 /// One step of the working, written so it can be checked by hand.
 #[derive(Debug, Clone, PartialEq)]
 pub struct Step {
@@ -181,147 +510,328 @@ pub struct Step {
     pub text: String,
 }
 
-/// The flow regime around the cylinder at this Reynolds number.
-pub fn regime_note(re: f64) -> &'static str {
-    if re < 2e5 {
-        "Subcritical (Re below about 2×10⁵): the laminar boundary layer separates near 80° from the front stagnation point; the wake drives the heat transfer at the rear."
-    } else {
-        "Critical or beyond (Re above about 2×10⁵): the boundary layer turns turbulent before it separates, further back; here the correlations disagree most."
-    }
+/// The properties used at one temperature, and why that temperature.
+#[derive(Debug, Clone, PartialEq)]
+pub struct PropertyRow {
+    pub role: &'static str,
+    pub props: Properties,
 }
 
 /// Everything the page shows for one evaluation, SI.
 #[derive(Debug, Clone, PartialEq)]
 pub struct Outcome {
+    pub shape: Shape,
+    pub fluid: &'static str,
+    pub pressure: f64,
     pub film_temp: f64,
-    pub props: Properties,
+    /// Dew point of humid air, K.
+    pub dew_point: Option<f64>,
+    pub properties: Vec<PropertyRow>,
+    /// Re and Pr of the recommended forced correlation, at its reference temperature.
     pub reynolds: f64,
     pub prandtl: f64,
+    /// Nu = h·D/k of the answer, k at the film temperature.
     pub nusselt: f64,
-    /// Mean convective heat-transfer coefficient, W/(m²·K).
+    /// The answer: mean convective heat-transfer coefficient, W/(m²·K).
     pub h: f64,
-    /// Heat flow per metre of length, W/m (positive from surface to air).
-    pub q_per_length: f64,
+    /// Heat flow per metre of length, W/m (positive from surface to fluid); none for a sphere.
+    pub q_per_length: Option<f64>,
+    /// Heat flow from the whole body (over the length L for a prism), W.
+    pub q_total: f64,
+    /// The recommended forced correlation's name.
     pub method: &'static str,
     pub regime: &'static str,
+    pub analysis: Analysis,
+    /// Flags on the answer: properties, the recommended correlation, natural convection, blend.
     pub flags: Vec<Flag>,
     pub working: Vec<Step>,
 }
 
 /// Evaluate a scenario. Errors only where nothing meaningful can be computed.
 pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
-    for spec in &FIELDS {
+    for spec in FIELDS.iter().filter(|sp| s.uses(sp.field)) {
         let v = s.get(spec.field);
-        check_field(spec, v, units::units_of(spec.dim).next().expect("SI unit")).map_err(|_| {
-            EngineError::Undefined {
-                quantity: spec.label,
-                value: v,
-                unit: units::units_of(spec.dim)
-                    .next()
-                    .map(|u| u.symbol)
-                    .unwrap_or(""),
-                why: "outside the physical limits of the input",
-            }
+        let si_unit = units::units_of(spec.dim).next().expect("SI unit");
+        check_field(spec, v, si_unit).map_err(|_| EngineError::Undefined {
+            quantity: spec.label,
+            value: v,
+            unit: si_unit.symbol,
+            why: "outside the physical limits of the input",
         })?;
     }
-    if s.surface_temp == s.air_temp {
+    if s.surface_temp == s.fluid_temp {
         return Err(EngineError::NoTemperatureDifference {
-            value: s.air_temp,
+            value: s.fluid_temp,
             unit: "K",
         });
     }
-    let film = 0.5 * (s.surface_temp + s.air_temp);
-    let props = Fluid::DryAir.at(film, s.pressure)?;
-    let re = finite_result("Reynolds number", s.speed * s.diameter / props.nu)?;
-    let pr = props.pr;
-    let cb = cylinder::churchill_bernstein(re, pr);
-    let nu = finite_result("Nusselt number", cb.value)?;
-    let h = finite_result("heat-transfer coefficient", nu * props.k / s.diameter)?;
-    let dt = s.surface_temp - s.air_temp;
-    let q = finite_result(
-        "heat flow per length",
-        h * std::f64::consts::PI * s.diameter * dt,
-    )?;
+    let p = s.pressure_pa();
+    let fluid = s.fluid();
+    let mut flags = Vec::new();
+    if s.pressure_input == PressureInput::Elevation {
+        flags.extend(atmosphere::TROPOSPHERE.check("standard atmosphere", s.elevation, false));
+    }
+    let dew_point = match fluid {
+        Fluid::HumidAir(h) => {
+            Some(crate::engine::props::humid_air::moisture(s.fluid_temp, p, h)?.dew_point)
+        }
+        _ => None,
+    };
+    let a = body::analyse(&Body {
+        shape: s.shape,
+        axis: s.axis,
+        wind: if s.uses_wind() {
+            s.wind
+        } else {
+            Wind::Horizontal
+        },
+        d: s.diameter,
+        length: s.length,
+        speed: s.speed,
+        t_inf: s.fluid_temp,
+        t_s: s.surface_temp,
+        p,
+        fluid,
+    })?;
+    let film = a.film.t;
+    let rec = a.recommended().clone();
+    let h = a.h;
+    let dt = s.surface_temp - s.fluid_temp;
+    let (q_per_length, q_total) = match s.shape.perimeter_over_d() {
+        Some(k) => {
+            let q = finite_result("heat flow per length", h * k * s.diameter * dt)?;
+            (Some(q), finite_result("heat flow", q * s.length)?)
+        }
+        None => (
+            None,
+            finite_result(
+                "heat flow",
+                h * std::f64::consts::PI * s.diameter * s.diameter * dt,
+            )?,
+        ),
+    };
+    let nusselt = finite_result("Nusselt number", h * s.diameter / a.film.k)?;
 
-    let mut flags = props.flags.clone();
-    flags.extend(cb.flags);
+    for props in [&a.film, &a.free, &a.surface] {
+        for f in &props.flags {
+            if !flags.contains(f) {
+                flags.push(f.clone());
+            }
+        }
+    }
+    flags.extend(rec.flags.iter().cloned());
+    if let Some(n) = &a.natural {
+        flags.extend(n.flags.iter().cloned());
+    }
+    flags.extend(a.flags.iter().cloned());
 
-    let g = |v: f64| format_sig(v, 5);
-    let working = vec![
-        Step {
-            title: "Reference temperature",
-            text: format!(
-                "Churchill–Bernstein takes properties at the {}: Tf = ({} K + {} K)/2 = {} K",
-                cylinder::CHURCHILL_BERNSTEIN_REFERENCE.describe(),
-                g(s.surface_temp),
-                g(s.air_temp),
-                g(film)
-            ),
-        },
-        Step {
-            title: "Air properties at Tf",
-            text: format!(
-                "ρ = {} kg/m³, μ = {} Pa·s, k = {} W/(m·K), cp = {} J/(kg·K); ν = μ/ρ = {} m²/s",
-                g(props.rho),
-                g(props.mu),
-                g(props.k),
-                g(props.cp),
-                g(props.nu)
-            ),
-        },
-        Step {
-            title: "Reynolds and Prandtl numbers",
-            text: format!(
-                "Re = U·D/ν = {} m/s × {} m / {} m²/s = {}; Pr = μ·cp/k = {}",
-                g(s.speed),
-                g(s.diameter),
-                g(props.nu),
-                g(re),
-                g(pr)
-            ),
-        },
-        Step {
-            title: "Nusselt number (Churchill–Bernstein 1977)",
-            text: format!(
-                "Nu = 0.3 + 0.62·Re^½·Pr^⅓ / [1 + (0.4/Pr)^⅔]^¼ · [1 + (Re/282000)^⅝]^⅘ = {}",
-                g(nu)
-            ),
-        },
-        Step {
-            title: "Heat-transfer coefficient",
-            text: format!(
-                "h = Nu·k/D = {} × {} W/(m·K) / {} m = {} W/(m²·K)",
-                g(nu),
-                g(props.k),
-                g(s.diameter),
-                g(h)
-            ),
-        },
-        Step {
-            title: "Heat flow per metre",
-            text: format!(
-                "q′ = h·π·D·(Ts − T∞) = {} × π × {} m × {} K = {} W/m",
-                g(h),
-                g(s.diameter),
-                g(dt),
-                g(q)
-            ),
-        },
-    ];
-
+    let working = working(s, &a, p, dew_point, fluid.name(), q_per_length, q_total);
+    let role = |r: &str| -> &'static str {
+        match r {
+            "film" => "film temperature Tf: Churchill–Bernstein, Hilpert, Ranz–Marshall, Jakob, natural convection",
+            "free" => "free stream T∞: Zukauskas, Whitaker, Gnielinski",
+            _ => "surface Ts: Pr_s and μs of the corrections",
+        }
+    };
     Ok(Outcome {
+        shape: s.shape,
+        fluid: fluid.name(),
+        pressure: p,
         film_temp: film,
-        props,
-        reynolds: re,
-        prandtl: pr,
-        nusselt: nu,
+        dew_point,
+        properties: vec![
+            PropertyRow {
+                role: role("film"),
+                props: a.film.clone(),
+            },
+            PropertyRow {
+                role: role("free"),
+                props: a.free.clone(),
+            },
+            PropertyRow {
+                role: role("surface"),
+                props: a.surface.clone(),
+            },
+        ],
+        reynolds: rec.groups.re,
+        prandtl: rec.groups.pr,
+        nusselt,
         h,
-        q_per_length: q,
-        method: cylinder::CHURCHILL_BERNSTEIN,
-        regime: regime_note(re),
+        q_per_length,
+        q_total,
+        method: rec.name,
+        regime: s.shape.regime(rec.groups.re),
+        analysis: a,
         flags,
         working,
     })
+}
+
+fn working(
+    s: &Scenario,
+    a: &Analysis,
+    p: f64,
+    dew_point: Option<f64>,
+    fluid: &str,
+    q_per_length: Option<f64>,
+    q_total: f64,
+) -> Vec<Step> {
+    let g = |v: f64| format_sig(v, 5);
+    let rec = a.recommended();
+    let mut w = vec![Step {
+        title: "Temperatures",
+        text: format!(
+            "Free stream T∞ = {} K, surface Ts = {} K, film Tf = (Ts + T∞)/2 = {} K. Each correlation takes its properties where its authors did: {} at the {}.",
+            g(s.fluid_temp),
+            g(s.surface_temp),
+            g(a.film.t),
+            rec.name,
+            rec.reference.describe()
+        ),
+    }];
+    if s.pressure_input == PressureInput::Elevation {
+        w.push(Step {
+            title: "Pressure from elevation",
+            text: format!(
+                "ISO 2533 standard atmosphere at {} m: p = 101325 Pa × (1 − 0.0065 × {} / 288.15)^5.2559 = {} Pa",
+                g(s.elevation),
+                g(s.elevation),
+                g(p)
+            ),
+        });
+    }
+    if let Some(td) = dew_point {
+        w.push(Step {
+            title: "Moisture",
+            text: format!("Dew point of the stream: {} K", g(td)),
+        });
+    }
+    for (title, pr) in [
+        ("Properties at Tf", &a.film),
+        ("Properties at T∞", &a.free),
+        ("Properties at Ts", &a.surface),
+    ] {
+        w.push(Step {
+            title,
+            text: format!(
+                "{fluid} at {} K, {} Pa: ρ = {} kg/m³, μ = {} Pa·s, k = {} W/(m·K), cp = {} J/(kg·K); ν = μ/ρ = {} m²/s, Pr = {}",
+                g(pr.t),
+                g(pr.p),
+                g(pr.rho),
+                g(pr.mu),
+                g(pr.k),
+                g(pr.cp),
+                g(pr.nu),
+                g(pr.pr)
+            ),
+        });
+    }
+    let at = if rec.reference == crate::engine::correlations::Reference::Film {
+        &a.film
+    } else {
+        &a.free
+    };
+    w.push(Step {
+        title: "Reynolds and Prandtl numbers",
+        text: format!(
+            "Re = U·D/ν = {} m/s × {} m / {} m²/s = {}; Pr = {} (at {})",
+            g(s.speed),
+            g(s.diameter),
+            g(at.nu),
+            g(rec.groups.re),
+            g(rec.groups.pr),
+            rec.reference.short()
+        ),
+    });
+    w.push(Step {
+        title: "Forced convection (recommended correlation)",
+        text: format!(
+            "{}: {} = {}; h_F = Nu·k/D = {} × {} W/(m·K) / {} m = {} W/(m²·K)",
+            rec.name,
+            rec.formula,
+            g(rec.nu),
+            g(rec.nu),
+            g(rec.k),
+            g(s.diameter),
+            g(rec.h)
+        ),
+    });
+    match &a.natural {
+        Some(n) => {
+            w.push(Step {
+                title: "Natural convection",
+                text: format!(
+                    "Gr = g·β·|Ts − T∞|·L³/ν² = {} on L = {} m, Ra = Gr·Pr = {}; {}: {} = {}; h_N = {} W/(m²·K)",
+                    g(n.gr),
+                    g(n.length),
+                    g(n.ra),
+                    n.name,
+                    n.formula,
+                    g(n.nu),
+                    g(n.h)
+                ),
+            });
+            w.push(Step {
+                title: "Mixed convection",
+                text: format!(
+                    "Stream {}; Churchill's blend with n = {}: h = {} W/(m²·K). {}.",
+                    a.direction.describe(),
+                    g(a.exponent),
+                    g(a.h),
+                    a.mode()
+                ),
+            });
+        }
+        None => w.push(Step {
+            title: "Natural convection",
+            text: "Not included: the fluid's expansion coefficient β is not given.".into(),
+        }),
+    }
+    let dt = s.surface_temp - s.fluid_temp;
+    let text = match (q_per_length, s.shape.perimeter_over_d()) {
+        (Some(q), Some(k)) => format!(
+            "q′ = h·P·(Ts − T∞) = {} × {} m × {} K = {} W/m, P = {}·D; over L = {} m: Q = {} W",
+            g(a.h),
+            g(k * s.diameter),
+            g(dt),
+            g(q),
+            g(k),
+            g(s.length),
+            g(q_total)
+        ),
+        _ => format!(
+            "Q = h·π·D²·(Ts − T∞) = {} × π × ({} m)² × {} K = {} W",
+            g(a.h),
+            g(s.diameter),
+            g(dt),
+            g(q_total)
+        ),
+    };
+    w.push(Step {
+        title: "Heat flow",
+        text,
+    });
+    w
+}
+
+/// Surface temperature above which bare-skin contact can burn (about 45 °C for prolonged contact;
+/// common practice, not a standard's limit).
+pub const HOT_SURFACE: f64 = 318.15;
+
+/// The cautions that apply to this result: hot surface, condensation, freezing. Each defers to
+/// local codes and licensed practice.
+pub fn cautions(s: &Scenario, o: &Outcome) -> Vec<&'static str> {
+    let mut out = Vec::new();
+    if s.surface_temp >= HOT_SURFACE {
+        out.push("Hot surface: at this temperature bare skin can be burned on contact. Guard or insulate it and follow the personnel-protection rules of your local codes; verify with a contact thermometer before touching.");
+    }
+    if o.dew_point.is_some_and(|td| s.surface_temp <= td) {
+        out.push("The surface is at or below the stream's dew point: moisture will condense on it. Condensate wets insulation and corrodes steel; a vapour-tight design is a matter for a qualified designer and local codes.");
+    }
+    if s.surface_temp < 273.15 {
+        out.push("The surface is below freezing: frost or ice can form on it, and water inside a line this cold can freeze and burst it. Follow local codes and licensed practice for freeze protection.");
+    }
+    out
 }
 
 /// The link format's version. See README "Links".
@@ -330,10 +840,35 @@ pub const LINK_VERSION: u32 = 1;
 pub const LINK_MAX_LEN: usize = 2048;
 
 /// Encode a scenario and the unit system as a URL fragment (without the `#`). Values are SI at
-/// full precision (shortest round-trip form), so a link reproduces the calculation exactly.
+/// full precision (shortest round-trip form), so a link reproduces the calculation exactly. Only
+/// the fields the scenario uses are written.
 pub fn to_fragment(s: &Scenario, system: System) -> String {
-    let mut out = format!("v={LINK_VERSION}");
-    for spec in &FIELDS {
+    let mut out = format!("v={LINK_VERSION}&s={}", s.shape.id());
+    if s.shape != Shape::Sphere {
+        out.push_str(match s.axis {
+            Axis::Horizontal => "&ax=h",
+            Axis::Vertical => "&ax=v",
+        });
+    }
+    if s.uses_wind() {
+        out.push_str(match s.wind {
+            Wind::Horizontal => "&w=h",
+            Wind::Up => "&w=u",
+            Wind::Down => "&w=d",
+        });
+    }
+    out.push_str(&format!("&f={}", s.fluid.id()));
+    out.push_str(match s.pressure_input {
+        PressureInput::Absolute => "&pm=p",
+        PressureInput::Elevation => "&pm=z",
+    });
+    if s.fluid == FluidKind::HumidAir {
+        out.push_str(match s.humidity_input {
+            HumidityInput::Relative => "&hm=rh",
+            HumidityInput::DewPoint => "&hm=td",
+        });
+    }
+    for spec in FIELDS.iter().filter(|sp| s.uses(sp.field)) {
         out.push_str(&format!("&{}={}", spec.key, s.get(spec.field)));
     }
     out.push_str(match system {
@@ -344,7 +879,7 @@ pub fn to_fragment(s: &Scenario, system: System) -> String {
 }
 
 /// Read a fragment (with or without the leading `#`). Keys left out take the demo's value.
-/// Anything malformed refuses the whole link with a message; nothing of it is ever echoed as markup.
+/// Anything malformed refuses the whole link with a message; nothing of it is ever echoed.
 pub fn from_fragment(fragment: &str) -> Result<(Scenario, System), String> {
     let f = fragment.strip_prefix('#').unwrap_or(fragment);
     if f.len() > LINK_MAX_LEN {
@@ -368,6 +903,43 @@ pub fn from_fragment(fragment: &str) -> Result<(Scenario, System), String> {
                     "si" => System::Si,
                     "us" => System::Us,
                     _ => return Err("the link names an unknown unit system".into()),
+                }
+            }
+            "s" => {
+                s.shape = Shape::from_id(value)
+                    .ok_or_else(|| "the link names an unknown shape".to_string())?
+            }
+            "ax" => {
+                s.axis = match value {
+                    "h" => Axis::Horizontal,
+                    "v" => Axis::Vertical,
+                    _ => return Err("the link names an unknown axis direction".into()),
+                }
+            }
+            "w" => {
+                s.wind = match value {
+                    "h" => Wind::Horizontal,
+                    "u" => Wind::Up,
+                    "d" => Wind::Down,
+                    _ => return Err("the link names an unknown wind direction".into()),
+                }
+            }
+            "f" => {
+                s.fluid = FluidKind::from_id(value)
+                    .ok_or_else(|| "the link names an unknown fluid".to_string())?
+            }
+            "pm" => {
+                s.pressure_input = match value {
+                    "p" => PressureInput::Absolute,
+                    "z" => PressureInput::Elevation,
+                    _ => return Err("the link names an unknown way to give pressure".into()),
+                }
+            }
+            "hm" => {
+                s.humidity_input = match value {
+                    "rh" => HumidityInput::Relative,
+                    "td" => HumidityInput::DewPoint,
+                    _ => return Err("the link names an unknown way to give humidity".into()),
                 }
             }
             _ => {
@@ -399,39 +971,125 @@ mod tests {
     fn demo_evaluates_cleanly() {
         let o = evaluate(&DEMO).unwrap();
         assert!(o.flags.is_empty(), "{:?}", o.flags);
-        assert!(o.q_per_length > 0.0 && o.h > 0.0);
-        // Energy bookkeeping: q' = h·π·D·ΔT.
-        let q = o.h * std::f64::consts::PI * DEMO.diameter * (DEMO.surface_temp - DEMO.air_temp);
-        assert!((q - o.q_per_length).abs() <= 1e-12 * q);
+        let q_per_length = o.q_per_length.unwrap();
+        assert!(q_per_length > 0.0 && o.h > 0.0);
+        // Energy bookkeeping: q' = h·π·D·ΔT, Q = q'·L.
+        let q = o.h * std::f64::consts::PI * DEMO.diameter * (DEMO.surface_temp - DEMO.fluid_temp);
+        assert!((q - q_per_length).abs() <= 1e-12 * q);
+        assert!((o.q_total - q * DEMO.length).abs() <= 1e-12 * o.q_total);
+        assert!(o.dew_point.unwrap() < DEMO.fluid_temp);
+    }
+
+    #[test]
+    fn every_fluid_evaluates_at_a_sensible_state() {
+        for kind in FluidKind::ALL {
+            let mut s = DEMO;
+            s.fluid = kind;
+            if kind == FluidKind::Steam {
+                s.fluid_temp = 420.0;
+                s.surface_temp = 400.0;
+            } else if kind != FluidKind::DryAir && kind != FluidKind::HumidAir {
+                s.fluid_temp = 290.0;
+                s.surface_temp = 330.0;
+                s.speed = 0.5;
+            }
+            let o = evaluate(&s).unwrap_or_else(|e| panic!("{kind:?}: {e}"));
+            assert!(o.h.is_finite() && o.h > 0.0, "{kind:?}");
+        }
+    }
+
+    #[test]
+    fn elevation_lowers_pressure_and_density() {
+        let mut s = DEMO;
+        s.pressure_input = PressureInput::Elevation;
+        s.elevation = 2000.0;
+        let o = evaluate(&s).unwrap();
+        assert!((o.pressure - atmosphere::pressure_at(2000.0)).abs() < 1e-9);
+        let sea = evaluate(&DEMO).unwrap();
+        assert!(o.properties[0].props.rho < sea.properties[0].props.rho);
+    }
+
+    #[test]
+    fn boiling_at_the_film_is_a_clear_error() {
+        let mut s = DEMO;
+        s.fluid = FluidKind::Water;
+        s.fluid_temp = 300.0;
+        s.surface_temp = 480.0;
+        let e = evaluate(&s).unwrap_err();
+        assert!(matches!(e, EngineError::WrongPhase { .. }), "{e}");
+        assert!(e.to_string().contains("373.1"), "{e}");
     }
 
     #[test]
     fn heat_flows_into_a_cold_surface_with_a_negative_sign() {
         let mut s = DEMO;
         s.surface_temp = 263.15;
-        assert!(evaluate(&s).unwrap().q_per_length < 0.0);
+        let o = evaluate(&s).unwrap();
+        assert!(o.q_per_length.unwrap() < 0.0 && o.q_total < 0.0 && o.h > 0.0);
+    }
+
+    #[test]
+    fn cautions_follow_the_surface_temperature() {
+        let o = evaluate(&DEMO).unwrap();
+        assert_eq!(cautions(&DEMO, &o).len(), 1, "the 65 °C demo line is hot");
+        let mut cold = DEMO;
+        cold.surface_temp = 263.15;
+        let o = evaluate(&cold).unwrap();
+        // Below the dew point and below freezing; not hot.
+        assert_eq!(cautions(&cold, &o).len(), 2);
+        let mut mild = DEMO;
+        mild.surface_temp = 300.0;
+        assert!(cautions(&mild, &evaluate(&mild).unwrap()).is_empty());
     }
 
     #[test]
     fn equal_temperatures_say_no_heat_flow() {
         let mut s = DEMO;
-        s.surface_temp = s.air_temp;
-        assert!(matches!(
-            evaluate(&s),
-            Err(EngineError::NoTemperatureDifference { .. })
-        ));
+        s.surface_temp = s.fluid_temp;
+        let e = evaluate(&s).unwrap_err();
+        assert!(matches!(e, EngineError::NoTemperatureDifference { .. }));
+        assert_eq!(error_field(&e), Some(Field::SurfaceTemp));
     }
 
     #[test]
-    fn still_air_is_computed_and_flagged() {
+    fn still_air_gives_the_natural_answer() {
         let mut s = DEMO;
         s.speed = 0.0;
         let o = evaluate(&s).unwrap();
-        assert!((o.nusselt - 0.3).abs() < 1e-12);
+        let n = o.analysis.natural.as_ref().unwrap();
+        assert!((o.h - n.h).abs() <= 1e-12 * n.h);
+        assert!(o.analysis.mode().starts_with("natural"));
+        // The forced correlation is still shown, flagged outside its range.
         assert!(o
             .flags
             .iter()
-            .any(|f| f.method == cylinder::CHURCHILL_BERNSTEIN));
+            .any(|f| f.method == crate::engine::correlations::cylinder::CHURCHILL_BERNSTEIN));
+    }
+
+    #[test]
+    fn still_user_fluid_without_beta_is_an_error_at_beta() {
+        let mut s = DEMO;
+        s.fluid = FluidKind::User;
+        s.user_beta = 0.0;
+        s.speed = 0.0;
+        let e = evaluate(&s).unwrap_err();
+        assert_eq!(error_field(&e), Some(Field::UserBeta));
+        s.speed = 0.2;
+        assert!(evaluate(&s).unwrap().analysis.natural.is_none());
+    }
+
+    #[test]
+    fn every_shape_evaluates_and_sphere_has_no_per_length_figure() {
+        for shape in Shape::ALL {
+            let mut s = DEMO;
+            s.shape = shape;
+            let o = evaluate(&s).unwrap_or_else(|e| panic!("{shape:?}: {e}"));
+            assert!(o.h > 0.0 && o.q_total > 0.0);
+            assert_eq!(o.q_per_length.is_none(), shape == Shape::Sphere);
+            let mut v = s;
+            v.axis = Axis::Vertical;
+            assert!(evaluate(&v).unwrap().h > 0.0);
+        }
     }
 
     #[test]
@@ -441,9 +1099,10 @@ mod tests {
             (Field::Diameter, 0.0),
             (Field::Diameter, -1.0),
             (Field::Speed, -1.0),
-            (Field::AirTemp, -1.0),
+            (Field::FluidTemp, -1.0),
             (Field::Pressure, 1e308),
             (Field::Speed, f64::NAN),
+            (Field::RelativeHumidity, 1.5),
         ] {
             let mut s = DEMO;
             s.set(f, v);
@@ -454,7 +1113,7 @@ mod tests {
     #[test]
     fn field_messages_speak_the_users_unit() {
         let c = units::unit("C").unwrap();
-        let e = read_field(spec(Field::AirTemp), "-300", c).unwrap_err();
+        let e = read_field(spec(Field::FluidTemp), "-300", c).unwrap_err();
         assert!(e.contains("absolute zero") && e.contains("-273.1"), "{e}");
         let mm = units::unit("mm").unwrap();
         assert_eq!(read_field(spec(Field::Diameter), "60,3", mm), Ok(0.0603));
@@ -462,20 +1121,42 @@ mod tests {
             .unwrap_err()
             .contains("more than 0 mm"));
         assert!(read_field(spec(Field::Diameter), "", mm).is_err());
+        let pct = units::unit("%").unwrap();
+        assert!(read_field(spec(Field::RelativeHumidity), "120", pct)
+            .unwrap_err()
+            .contains("100 %"));
     }
 
     #[test]
     fn fragment_round_trips_exactly() {
-        let s = Scenario {
-            diameter: 0.0334,
-            speed: 1.0 / 3.0,
-            air_temp: 250.123456789,
-            surface_temp: 400.0,
-            pressure: 84_000.5,
-        };
+        let mut s = DEMO;
+        s.diameter = 0.0334;
+        s.speed = 1.0 / 3.0;
+        s.fluid_temp = 250.123456789;
+        s.surface_temp = 400.0;
+        s.pressure_input = PressureInput::Elevation;
+        s.elevation = 1234.5;
+        s.humidity_input = HumidityInput::DewPoint;
+        s.dew_point = 240.0;
+        s.wind = Wind::Up;
+        s.length = 3.25;
         let (back, sys) = from_fragment(&to_fragment(&s, System::Us)).unwrap();
         assert_eq!(back, s);
         assert_eq!(sys, System::Us);
+        for kind in FluidKind::ALL {
+            let mut s = DEMO;
+            s.fluid = kind;
+            assert_eq!(from_fragment(&to_fragment(&s, System::Si)).unwrap().0, s);
+        }
+        for shape in Shape::ALL {
+            let mut s = DEMO;
+            s.shape = shape;
+            s.axis = Axis::Vertical;
+            if shape == Shape::Sphere {
+                s.axis = Axis::Horizontal;
+            }
+            assert_eq!(from_fragment(&to_fragment(&s, System::Si)).unwrap().0, s);
+        }
     }
 
     #[test]
@@ -489,6 +1170,10 @@ mod tests {
             "v=1&D=NaN",
             "v=1&U",
             "v=1&u=imperial",
+            "v=1&f=<b>",
+            "v=1&pm=x",
+            "v=1&s=cube",
+            "v=1&w=sideways",
             long.as_str(),
         ] {
             let e = from_fragment(bad).unwrap_err();

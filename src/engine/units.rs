@@ -19,10 +19,16 @@ pub enum Dim {
     DynamicViscosity,
     Density,
     SpecificHeat,
+    /// Site elevation (its own dimension so that it can be in m while diameters are in mm).
+    Elevation,
+    /// Relative humidity, concentration.
+    Fraction,
+    HeatFlow,
+    ExpansionCoefficient,
 }
 
 /// Every dimension, in the order the page lists them.
-pub const ALL_DIMS: [Dim; 11] = [
+pub const ALL_DIMS: [Dim; 15] = [
     Dim::Temperature,
     Dim::Length,
     Dim::Speed,
@@ -34,6 +40,10 @@ pub const ALL_DIMS: [Dim; 11] = [
     Dim::DynamicViscosity,
     Dim::Density,
     Dim::SpecificHeat,
+    Dim::Elevation,
+    Dim::Fraction,
+    Dim::HeatFlow,
+    Dim::ExpansionCoefficient,
 ];
 
 /// A unit system for the global switch.
@@ -129,6 +139,15 @@ pub const UNITS: &[Unit] = &[
         BTU_IT / LB / RANKINE,
         0.0,
     ),
+    u("m-elev", "m", Dim::Elevation, 1.0, 0.0),
+    u("ft-elev", "ft", Dim::Elevation, FT, 0.0),
+    u("frac", "fraction", Dim::Fraction, 1.0, 0.0),
+    u("%", "%", Dim::Fraction, 0.01, 0.0),
+    u("W", "W", Dim::HeatFlow, 1.0, 0.0),
+    u("kW", "kW", Dim::HeatFlow, 1e3, 0.0),
+    u("Btu/h", "Btu/h", Dim::HeatFlow, BTU_IT / HOUR, 0.0),
+    u("1/K", "1/K", Dim::ExpansionCoefficient, 1.0, 0.0),
+    u("1/F", "1/°F", Dim::ExpansionCoefficient, 1.0 / RANKINE, 0.0),
 ];
 
 impl Unit {
@@ -175,6 +194,13 @@ pub fn default_unit(dim: Dim, system: System) -> &'static Unit {
         (Dim::Density, System::Us) => "lb/ft3",
         (Dim::SpecificHeat, System::Si) => "J/kgK",
         (Dim::SpecificHeat, System::Us) => "Btu/lbF",
+        (Dim::Elevation, System::Si) => "m-elev",
+        (Dim::Elevation, System::Us) => "ft-elev",
+        (Dim::Fraction, _) => "%",
+        (Dim::HeatFlow, System::Si) => "W",
+        (Dim::HeatFlow, System::Us) => "Btu/h",
+        (Dim::ExpansionCoefficient, System::Si) => "1/K",
+        (Dim::ExpansionCoefficient, System::Us) => "1/F",
     };
     unit(id).expect("every default unit is in UNITS")
 }
@@ -315,6 +341,8 @@ mod tests {
         ));
         assert!(close(unit("Btu/lbF").unwrap().to_si(1.0), 4186.8, 1e-12));
         assert!(close(unit("km/h").unwrap().to_si(36.0), 10.0, 1e-15));
+        assert!(close(unit("Btu/h").unwrap().to_si(1.0), 0.2930711, 1e-6));
+        assert!(close(unit("1/F").unwrap().to_si(1.0), 1.8, 1e-15));
     }
 
     #[test]

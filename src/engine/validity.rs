@@ -103,6 +103,55 @@ impl Range {
     }
 }
 
+/// A table of constants by bands of one quantity (e.g. C and m by Reynolds band). `edges` are the
+/// band limits in increasing order: band `i` runs from `edges[i]` to `edges[i + 1]`.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Bands {
+    pub quantity: &'static str,
+    pub edges: &'static [f64],
+    pub source: &'static str,
+}
+
+impl Bands {
+    /// The whole published range, first edge to last.
+    pub fn range(&self) -> Range {
+        Range {
+            quantity: self.quantity,
+            lo: self.edges[0],
+            hi: self.edges[self.edges.len() - 1],
+            unit: "",
+            source: self.source,
+        }
+    }
+
+    /// The band a value falls in (the nearest band outside the range) and the flag it raises:
+    /// outside the whole range, or within [`NEAR_EDGE`] of an inner edge where the constants jump.
+    /// A value on an inner edge belongs to the upper band.
+    pub fn locate(&self, method: &'static str, value: f64) -> (usize, Option<Flag>) {
+        let n = self.edges.len() - 1;
+        let i = self.edges[1..n].iter().take_while(|&&e| value >= e).count();
+        let whole = self.range();
+        if let Some(f) = whole.check(method, value, false) {
+            return (i, Some(f));
+        }
+        let band = Range {
+            lo: self.edges[i],
+            hi: self.edges[i + 1],
+            ..whole
+        };
+        let inner_near =
+            |edge: f64, inner: bool| inner && ((value - edge) / edge).abs() < NEAR_EDGE;
+        let near = inner_near(band.lo, i > 0) || inner_near(band.hi, i + 1 < n);
+        let flag = near.then_some(Flag {
+            kind: FlagKind::NearEdge,
+            method,
+            range: band,
+            value,
+        });
+        (i, flag)
+    }
+}
+
 /// A value with the range flags raised while computing it.
 #[derive(Debug, Clone, PartialEq)]
 pub struct Flagged<T> {
@@ -159,6 +208,31 @@ mod tests {
     fn near_edge_only_for_bands() {
         assert_eq!(R.check("m", 3950.0, true).unwrap().kind, FlagKind::NearEdge);
         assert_eq!(R.check("m", 3950.0, false), None);
+    }
+
+    const B: Bands = Bands {
+        quantity: "Re",
+        edges: &[1.0, 40.0, 1000.0],
+        source: "test",
+    };
+
+    #[test]
+    fn bands_locate_values_and_flag_only_inner_edges() {
+        assert_eq!(B.locate("m", 10.0), (0, None));
+        assert_eq!(B.locate("m", 40.0).0, 1);
+        let (i, f) = B.locate("m", 39.5);
+        assert_eq!(i, 0);
+        assert_eq!(f.unwrap().kind, FlagKind::NearEdge);
+        // Near an outer edge but inside: no flag (the constants do not jump there).
+        assert_eq!(B.locate("m", 990.0), (1, None));
+        let (i, f) = B.locate("m", 2000.0);
+        assert_eq!(i, 1);
+        let f = f.unwrap();
+        assert_eq!(
+            (f.kind, f.range.lo, f.range.hi),
+            (FlagKind::Outside, 1.0, 1000.0)
+        );
+        assert_eq!(B.locate("m", 0.5).0, 0);
     }
 
     #[test]

@@ -3,17 +3,22 @@
 
 use leptos::prelude::*;
 
-use crate::engine::scenario::{self, Field, FieldSpec, Outcome, Scenario, FIELDS};
+mod results;
+mod shapes;
+
+use crate::engine::scenario::{
+    self, Axis, Field, FieldSpec, FluidKind, Group, HumidityInput, Outcome, PressureInput,
+    Scenario, Shape, Wind, FIELDS,
+};
 use crate::engine::units::{self, format_sig, Dim, System, UnitChoice};
-use crate::engine::EngineError;
 
 /// What the results panel shows: the latest good outcome, and why it is stale if it is.
 #[derive(Debug, Clone, PartialEq)]
 struct Shown {
     outcome: Option<Outcome>,
     error: Option<String>,
-    /// The error belongs beside the surface-temperature field rather than in the results.
-    error_at_surface: bool,
+    /// The field the error belongs beside, if any (otherwise it shows in the results).
+    error_at: Option<Field>,
 }
 
 /// Read the scenario from the page's URL fragment, or the demo with a message.
@@ -98,7 +103,13 @@ pub fn App() -> impl IntoView {
         let t = text_of(spec.field);
         move || scenario::read_field(spec, &t.get(), choice.get().get(spec.dim)).err()
     };
-    let any_field_error = move || FIELDS.iter().any(|spec| field_error(spec)().is_some());
+    let any_field_error = move || {
+        let s = scenario.get();
+        FIELDS
+            .iter()
+            .filter(|spec| s.uses(spec.field))
+            .any(|spec| field_error(spec)().is_some())
+    };
 
     let shown = Memo::new(move |prev: Option<&Shown>| {
         let s = scenario.get();
@@ -106,11 +117,11 @@ pub fn App() -> impl IntoView {
             Ok(o) => Shown {
                 outcome: Some(o),
                 error: None,
-                error_at_surface: false,
+                error_at: None,
             },
             Err(e) => Shown {
                 outcome: prev.and_then(|p| p.outcome.clone()),
-                error_at_surface: matches!(e, EngineError::NoTemperatureDifference { .. }),
+                error_at: scenario::error_field(&e),
                 error: Some(e.to_string()),
             },
         }
@@ -126,70 +137,244 @@ pub fn App() -> impl IntoView {
         }
     });
 
-    let field_views = FIELDS
-        .iter()
-        .map(|spec| {
-            let t = text_of(spec.field);
-            let err = field_error(spec);
-            let err2 = field_error(spec);
-            let surface = spec.field == Field::SurfaceTemp;
-            let extra = move || {
-                if surface {
-                    shown.with(|s| {
-                        if s.error_at_surface {
-                            s.error.clone()
-                        } else {
-                            None
-                        }
-                    })
+    let field_view = move |spec: &'static FieldSpec| {
+        let t = text_of(spec.field);
+        let err = field_error(spec);
+        let err2 = field_error(spec);
+        let extra = move || {
+            shown.with(|s| {
+                if s.error_at == Some(spec.field) {
+                    s.error.clone()
                 } else {
                     None
                 }
-            };
-            let input_id = format!("in-{}", spec.key);
-            let msg_id = format!("msg-{}", spec.key);
-            let on_input = move |ev: leptos::ev::Event| {
-                let v = event_target_value(&ev);
-                t.set(v.clone());
-                let u = choice.get_untracked().get(spec.dim);
-                if let Ok(si) = scenario::read_field(spec, &v, u) {
-                    scenario.update(|s| s.set(spec.field, si));
-                }
-            };
-            view! {
-                <div class="field" class:invalid=move || err2().is_some()>
-                    <label for=input_id.clone()>{spec.label}<small>{spec.help}</small></label>
-                    <div class="entry">
-                        <input
-                            id=input_id
-                            type="text"
-                            inputmode="decimal"
-                            autocomplete="off"
-                            spellcheck="false"
-                            data-field=spec.key
-                            aria-describedby=msg_id.clone()
-                            prop:value=move || t.get()
-                            on:input=on_input
-                        />
-                        <UnitSelect dim=spec.dim choice=choice on_pick=set_unit/>
-                    </div>
-                    <p class="field-msg" id=msg_id role="status" data-msg-for=spec.key>
-                        {move || err().or_else(extra).map(|m| format!("⚠ {m}"))}
-                    </p>
+            })
+        };
+        let input_id = format!("in-{}", spec.key);
+        let msg_id = format!("msg-{}", spec.key);
+        let on_input = move |ev: leptos::ev::Event| {
+            let v = event_target_value(&ev);
+            t.set(v.clone());
+            let u = choice.get_untracked().get(spec.dim);
+            if let Ok(si) = scenario::read_field(spec, &v, u) {
+                scenario.update(|s| s.set(spec.field, si));
+            }
+        };
+        view! {
+            <div
+                class="field"
+                class:invalid=move || err2().is_some()
+                class:hidden=move || !scenario.with(|s| s.uses(spec.field))
+                data-field-box=spec.key
+            >
+                <label for=input_id.clone()>{spec.label}<small>{spec.help}</small></label>
+                <div class="entry">
+                    <input
+                        id=input_id
+                        type="text"
+                        inputmode="decimal"
+                        autocomplete="off"
+                        spellcheck="false"
+                        data-field=spec.key
+                        aria-describedby=msg_id.clone()
+                        prop:value=move || t.get()
+                        on:input=on_input
+                    />
+                    <UnitSelect dim=spec.dim choice=choice on_pick=set_unit/>
                 </div>
+                <p class="field-msg" id=msg_id role="status" data-msg-for=spec.key>
+                    {move || err().or_else(extra).map(|m| format!("⚠ {m}"))}
+                </p>
+            </div>
+        }
+    };
+    let fields_of = move |g: Group| {
+        FIELDS
+            .iter()
+            .filter(|sp| sp.group == g)
+            .map(field_view)
+            .collect_view()
+    };
+
+    let fluid_options = FluidKind::ALL
+        .iter()
+        .map(|k| {
+            view! {
+                <option value=k.id() prop:selected=move || scenario.with(|s| s.fluid == *k)>
+                    {k.label()}
+                </option>
             }
         })
         .collect_view();
+    let pick_fluid = move |ev: leptos::ev::Event| {
+        if let Some(k) = FluidKind::from_id(&event_target_value(&ev)) {
+            scenario.update(|s| s.fluid = k);
+        }
+    };
+    let toggle = move |name: &'static str,
+                       label_a: &'static str,
+                       label_b: &'static str,
+                       is_a: fn(&Scenario) -> bool,
+                       set: fn(&mut Scenario, bool),
+                       shown_when: fn(&Scenario) -> bool| {
+        view! {
+            <div
+                class="toggle"
+                role="group"
+                aria-label=name
+                data-toggle=name
+                class:hidden=move || !scenario.with(shown_when)
+            >
+                <button type="button" aria-pressed=move || scenario.with(is_a).to_string()
+                    on:click=move |_| scenario.update(|s| set(s, true))>{label_a}</button>
+                <button type="button" aria-pressed=move || (!scenario.with(is_a)).to_string()
+                    on:click=move |_| scenario.update(|s| set(s, false))>{label_b}</button>
+            </div>
+        }
+    };
+    let pressure_toggle = toggle(
+        "pressure-input",
+        "Pressure",
+        "Elevation",
+        |s| s.pressure_input == PressureInput::Absolute,
+        |s, a| {
+            s.pressure_input = if a {
+                PressureInput::Absolute
+            } else {
+                PressureInput::Elevation
+            }
+        },
+        |_| true,
+    );
+    let humidity_toggle = toggle(
+        "humidity-input",
+        "Relative humidity",
+        "Dew point",
+        |s| s.humidity_input == HumidityInput::Relative,
+        |s, a| {
+            s.humidity_input = if a {
+                HumidityInput::Relative
+            } else {
+                HumidityInput::DewPoint
+            }
+        },
+        |s| s.fluid == FluidKind::HumidAir,
+    );
 
-    let out = move |quantity: &'static str, get: fn(&Outcome) -> f64, dim: Option<Dim>| {
+    let axis_toggle = toggle(
+        "axis",
+        "Axis level",
+        "Axis upright",
+        |s| s.axis == Axis::Horizontal,
+        |s, a| s.axis = if a { Axis::Horizontal } else { Axis::Vertical },
+        |s| s.shape != Shape::Sphere,
+    );
+    let wind_select = move || {
+        let opts = [
+            (Wind::Horizontal, "h", "Level (across the body)"),
+            (Wind::Up, "u", "Rising"),
+            (Wind::Down, "d", "Falling"),
+        ]
+        .into_iter()
+        .map(|(w, id, label)| {
+            view! { <option value=id prop:selected=move || scenario.with(|s| s.wind == w)>{label}</option> }
+        })
+        .collect_view();
+        view! {
+            <div class="field" class:hidden=move || !scenario.with(|s| s.uses_wind())>
+                <label for="in-wind">"Stream direction"<small>"rising or falling: with or against the rise of warm fluid"</small></label>
+                <select id="in-wind" class="wide" data-choice="wind" on:change=move |ev| {
+                    let w = match event_target_value(&ev).as_str() {
+                        "u" => Wind::Up,
+                        "d" => Wind::Down,
+                        _ => Wind::Horizontal,
+                    };
+                    scenario.update(|s| s.wind = w);
+                }>{opts}</select>
+            </div>
+        }
+    };
+    let shape_picker = move || {
+        let buttons = Shape::ALL
+            .into_iter()
+            .map(|sh| {
+                view! {
+                    <button type="button" class="shape-option" data-shape=sh.id()
+                        aria-pressed=move || scenario.with(|s| s.shape == sh).to_string()
+                        on:click=move |_| scenario.update(|s| s.shape = sh)>
+                        {shapes::drawing(sh, false)}
+                        <span>{sh.label()}</span>
+                    </button>
+                }
+            })
+            .collect_view();
+        view! {
+            <div class="shapes" role="group" aria-label="Shape" data-choice="shape">{buttons}</div>
+            <div class="shape-chosen">
+                {move || shapes::drawing(scenario.with(|s| s.shape), true)}
+                <p>{move || scenario.with(|s| s.shape.length_meaning())}<br/>
+                   <small>{move || scenario.with(|s| if s.shape == Shape::Sphere { "The stream comes from the left." } else { "The stream comes from the left, across the axis." })}</small></p>
+            </div>
+        }
+    };
+
+    let prop_table = move || {
+        shown.with(|s| {
+            s.outcome.as_ref().map(|o| {
+                let c = choice.get();
+                let cell = |v: f64, d: Dim| {
+                    let u = c.get(d);
+                    format!("{} {}", format_sig(u.from_si(v), 4), u.symbol)
+                };
+                let rows = o
+                    .properties
+                    .iter()
+                    .map(|r| {
+                        let p = &r.props;
+                        view! {
+                            <tr data-prop-row=r.role>
+                                <th scope="row">{r.role}<br/>{cell(p.t, Dim::Temperature)}</th>
+                                <td>{cell(p.rho, Dim::Density)}</td>
+                                <td>{cell(p.mu, Dim::DynamicViscosity)}</td>
+                                <td>{cell(p.k, Dim::ThermalConductivity)}</td>
+                                <td>{cell(p.cp, Dim::SpecificHeat)}</td>
+                                <td>{format_sig(p.pr, 4)}</td>
+                            </tr>
+                        }
+                    })
+                    .collect_view();
+                let sources = o
+                    .properties
+                    .first()
+                    .map(|r| {
+                        r.props
+                            .sources
+                            .iter()
+                            .map(|(q, src)| format!("{q}: {src}"))
+                            .collect::<Vec<_>>()
+                            .join(" · ")
+                    })
+                    .unwrap_or_default();
+                view! {
+                    <table class="props" data-props>
+                        <caption>{format!("Properties of {} used", o.fluid)}</caption>
+                        <thead><tr><th scope="col">"at"</th><th scope="col">"ρ"</th><th scope="col">"μ"</th><th scope="col">"k"</th><th scope="col">"cp"</th><th scope="col">"Pr"</th></tr></thead>
+                        <tbody>{rows}</tbody>
+                    </table>
+                    <p class="sources">{sources}</p>
+                }
+            })
+        })
+    };
+
+    let out = move |quantity: &'static str, get: fn(&Outcome) -> Option<f64>, dim: Option<Dim>| {
         view! {
             <output data-quantity=quantity data-si=move || {
-                shown.with(|s| s.outcome.as_ref().map(|o| format!("{}", get(o))).unwrap_or_default())
+                shown.with(|s| s.outcome.as_ref().and_then(get).map(|v| format!("{v}")).unwrap_or_default())
             }>
                 {move || {
-                    shown.with(|s| match &s.outcome {
-                        Some(o) => {
-                            let v = get(o);
+                    shown.with(|s| match s.outcome.as_ref().and_then(get) {
+                        Some(v) => {
                             match dim {
                                 Some(d) => format_sig(choice.get().get(d).from_si(v), 4),
                                 None => format_sig(v, 4),
@@ -206,7 +391,7 @@ pub fn App() -> impl IntoView {
     view! {
         <header class="bar">
             <h1>"Leeward"</h1>
-            <p class="tagline">"Heat loss from a pipe in the wind"</p>
+            <p class="tagline">"Heat transfer from a body in a cross-flow"</p>
             <div class="system" role="group" aria-label="Unit system">
                 <button
                     type="button"
@@ -224,33 +409,63 @@ pub fn App() -> impl IntoView {
         </header>
         <main class="layout">
             {link_message.map(|m| view! { <p class="notice" role="alert" data-notice="link">"⚠ "{m}</p> })}
-            <section class="inputs" aria-labelledby="inputs-title">
-                <h2 id="inputs-title">"Pipe and air"</h2>
+            <div class="inputs">
                 <p class="demo" data-demo>
                     {move || (scenario.get() == scenario::DEMO).then_some(scenario::DEMO_TITLE)}
                 </p>
-                {field_views}
-            </section>
+                <section aria-labelledby="body-title">
+                    <h2 id="body-title">"1 · Body"</h2>
+                    {shape_picker}
+                    {axis_toggle}
+                    {fields_of(Group::Body)}
+                </section>
+                <section aria-labelledby="stream-title">
+                    <h2 id="stream-title">"2 · Stream"</h2>
+                    <div class="field">
+                        <label for="in-fluid">"Fluid"</label>
+                        <select id="in-fluid" class="wide" data-choice="fluid" on:change=pick_fluid>
+                            {fluid_options}
+                        </select>
+                    </div>
+                    {wind_select}
+                    {pressure_toggle}
+                    {humidity_toggle}
+                    {fields_of(Group::Stream)}
+                </section>
+                <section aria-labelledby="surface-title">
+                    <h2 id="surface-title">"3 · Surface"</h2>
+                    {fields_of(Group::Surface)}
+                </section>
+            </div>
             <section class="results" class:stale=stale aria-labelledby="results-title" aria-live="polite">
                 <h2 id="results-title">"Results"</h2>
                 <p class="stale-note" data-stale=move || stale().to_string()>
                     {move || stale().then_some("⏸ Showing the last good result: fix the marked input to update.")}
                 </p>
-                {move || shown.with(|s| s.error.clone().filter(|_| !s.error_at_surface).map(|e| view! { <p class="error">"⚠ "{e}</p> }))}
+                {move || shown.with(|s| s.error.clone().filter(|_| s.error_at.is_none()).map(|e| view! { <p class="error" data-error>"⚠ "{e}</p> }))}
                 <dl class="figures">
-                    <div class="main"><dt>"Heat loss per length"</dt><dd>{out("q_per_length", |o| o.q_per_length, Some(Dim::HeatFlowPerLength))}</dd></div>
-                    <div class="main"><dt>"Heat-transfer coefficient h"</dt><dd>{out("h", |o| o.h, Some(Dim::HeatTransferCoefficient))}</dd></div>
-                    <div><dt>"Nusselt number Nu"</dt><dd>{out("nusselt", |o| o.nusselt, None)}</dd></div>
-                    <div><dt>"Reynolds number Re"</dt><dd>{out("reynolds", |o| o.reynolds, None)}</dd></div>
-                    <div><dt>"Prandtl number Pr"</dt><dd>{out("prandtl", |o| o.prandtl, None)}</dd></div>
-                    <div><dt>"Film temperature"</dt><dd>{out("film_temperature", |o| o.film_temp, Some(Dim::Temperature))}</dd></div>
+                    <div class="main" class:hidden=move || shown.with(|s| s.outcome.as_ref().is_some_and(|o| o.q_per_length.is_none()))><dt>"Heat loss per length"</dt><dd>{out("q_per_length", |o| o.q_per_length, Some(Dim::HeatFlowPerLength))}</dd></div>
+                    <div class="main"><dt>{move || if scenario.with(|s| s.shape == Shape::Sphere) { "Heat loss from the body" } else { "Heat loss over the length L" }}</dt><dd>{out("q_total", |o| Some(o.q_total), Some(Dim::HeatFlow))}</dd></div>
+                    <div class="main"><dt>"Heat-transfer coefficient h"</dt><dd>{out("h", |o| Some(o.h), Some(Dim::HeatTransferCoefficient))}</dd></div>
+                    <div><dt>"Nusselt number Nu = h·D/k"</dt><dd>{out("nusselt", |o| Some(o.nusselt), None)}</dd></div>
+                    <div><dt>"Reynolds number Re (★)"</dt><dd>{out("reynolds", |o| Some(o.reynolds), None)}</dd></div>
+                    <div><dt>"Prandtl number Pr (★)"</dt><dd>{out("prandtl", |o| Some(o.prandtl), None)}</dd></div>
+                    <div><dt>"Film temperature"</dt><dd>{out("film_temperature", |o| Some(o.film_temp), Some(Dim::Temperature))}</dd></div>
+                    <div><dt>"Pressure used"</dt><dd>{out("pressure", |o| Some(o.pressure), Some(Dim::Pressure))}</dd></div>
+                    <div class:hidden=move || shown.with(|s| s.outcome.as_ref().is_none_or(|o| o.dew_point.is_none()))><dt>"Dew point of the stream"</dt><dd>{out("dew_point", |o| o.dew_point, Some(Dim::Temperature))}</dd></div>
                 </dl>
-                <p class="method">{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Method: {} (typical uncertainty of such correlations ±20 %, common practice). {}", o.method, o.regime)))}</p>
+                <p class="spread" data-spread>{move || shown.with(|s| s.outcome.as_ref().map(|o| spread_text(o, &choice.get())))}</p>
+                <p class="method">{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Recommended: {} ({}). {} {}", o.method, o.analysis.mode(), o.regime, o.analysis.notes.join(" "))))}</p>
+                <ul class="cautions" data-cautions>
+                    {move || shown.with(|s| s.outcome.as_ref().map(|o| scenario::cautions(&scenario.get(), o).into_iter().map(|c| view! { <li class="caution">"⚠ "{c}</li> }).collect_view()))}
+                </ul>
                 <ul class="flags" data-flags>
                     {move || shown.with(|s| s.outcome.as_ref().map(|o| o.flags.iter().map(|f| view! {
                         <li class="flag" data-flag=f.method>"⚠ "{f.message()}</li>
                     }).collect_view()))}
                 </ul>
+                {move || shown.with(|s| s.outcome.as_ref().map(|o| results::table(o, &choice.get())))}
+                <p class="rule">{move || scenario.with(|s| format!("How the recommendation is chosen: {}", s.shape.rule()))}</p>
                 <details class="working">
                     <summary>"How this was worked out"</summary>
                     <ol>
@@ -258,16 +473,36 @@ pub fn App() -> impl IntoView {
                             <li><strong>{st.title}</strong><br/>{st.text.clone()}</li>
                         }).collect_view()))}
                     </ol>
-                    <p class="sources">{move || shown.with(|s| s.outcome.as_ref().map(|o| {
-                        o.props.sources.iter().map(|(q, src)| format!("{q}: {src}")).collect::<Vec<_>>().join(" · ")
-                    }))}</p>
+                    {prop_table}
                 </details>
+            </section>
+            <section class="plots" aria-labelledby="plots-title">
+                <h2 id="plots-title">"Compare the correlations"</h2>
+                {move || shown.with(|s| s.outcome.as_ref().map(results::nu_re_plot))}
+                {move || shown.with(|s| s.outcome.as_ref().and_then(results::front_plot))}
             </section>
             <footer class="standing">
                 "Results are engineering estimates from published correlations. Check them before you rely on them; local codes and licensed practice govern any decision about safety."
             </footer>
         </main>
     }
+}
+
+/// The spread of the correlations inside their ranges and the usual uncertainty, in words.
+fn spread_text(o: &Outcome, c: &UnitChoice) -> String {
+    let u = c.get(Dim::HeatTransferCoefficient);
+    let f = |v: f64| format_sig(u.from_si(v), 3);
+    let total = o.analysis.forced.len();
+    let band = match o.analysis.spread {
+        Some((lo, hi, n)) if n > 1 => format!(
+            "{n} of {total} forced correlations are inside their ranges here; they give h_F from {} to {} {}.",
+            f(lo), f(hi), u.symbol
+        ),
+        Some(_) if total > 1 => format!("Only one of {total} forced correlations is inside its range here."),
+        Some(_) => "One published correlation covers this shape.".to_string(),
+        None => "No forced correlation is inside its range here: every value below is an extrapolation.".to_string(),
+    };
+    format!("{band} Correlations of this kind are good to about ±20–25 % (common practice).")
 }
 
 /// The unit picker for one dimension; changing it changes that dimension everywhere on the page.

@@ -12,7 +12,7 @@ use std::sync::Mutex;
 use std::time::{Duration, Instant};
 
 use fantoccini::{Client, ClientBuilder, Locator};
-use leeward::engine::scenario::{self, Scenario, DEMO};
+use leeward::engine::scenario::{self, FluidKind, Scenario, Shape, DEMO};
 use serde_json::json;
 
 /// One browser at a time: two cores.
@@ -173,6 +173,30 @@ async fn paste_into(c: &Client, key: &str, text: &str) {
     .unwrap();
 }
 
+/// Choose an option of a select as a user would.
+async fn pick(c: &Client, css: &str, value: &str) {
+    let args = vec![json!(css), json!(value)];
+    c.execute(
+        "const e = document.querySelector(arguments[0]); e.value = arguments[1]; e.dispatchEvent(new Event('change', {bubbles: true}));",
+        args,
+    )
+    .await
+    .unwrap();
+}
+
+/// Whether a field's box is hidden.
+async fn hidden(c: &Client, key: &str) -> bool {
+    js(
+        c,
+        &format!(
+            "return document.querySelector('[data-field-box={key}]').classList.contains('hidden');"
+        ),
+    )
+    .await
+    .as_bool()
+    .unwrap()
+}
+
 async fn text_of(c: &Client, css: &str) -> String {
     let v = js(
         c,
@@ -230,7 +254,11 @@ async fn exercise(c: &Client, base: &str) {
     s.diameter = 0.0334;
     let want = expect(&s);
     assert!(close(si(c, "h").await, want.h));
-    assert!(close(si(c, "q_per_length").await, want.q_per_length));
+    assert!(close(
+        si(c, "q_per_length").await,
+        want.q_per_length.unwrap()
+    ));
+    assert!(close(si(c, "q_total").await, want.q_total));
     assert!(close(si(c, "reynolds").await, want.reynolds));
 
     // Unit switch: shown values convert, the computed state does not move.
@@ -306,6 +334,119 @@ async fn exercise(c: &Client, base: &str) {
     assert!(text_of(c, "[data-msg-for=Ts]").await.contains("no heat"));
     assert_no_nan_shown(c).await;
     type_into(c, "Ts", "65").await;
+    assert!(close(si(c, "h").await, want.h));
+
+    // The fluid choice: liquid water computes with water's properties and hides the humidity.
+    pick(c, "#in-fluid", "water").await;
+    let mut w = s;
+    w.fluid = FluidKind::Water;
+    assert!(
+        close(si(c, "h").await, expect(&w).h),
+        "water h differs from the engine"
+    );
+    assert!(text_of(c, "[data-props] caption")
+        .await
+        .contains("liquid water"));
+    assert!(hidden(c, "rh").await && hidden(c, "xg").await);
+    pick(c, "#in-fluid", "eg").await;
+    assert!(
+        !hidden(c, "xg").await,
+        "glycol content not shown for glycol"
+    );
+    paste_into(c, "xg", "75").await;
+    assert!(text_of(c, "[data-msg-for=xg]").await.contains("60"));
+    type_into(c, "xg", "30").await;
+    pick(c, "#in-fluid", "humid").await;
+    assert!(!hidden(c, "rh").await);
+    paste_into(c, "rh", "120").await;
+    assert!(text_of(c, "[data-msg-for=rh]").await.contains("100"));
+    type_into(c, "rh", "70").await;
+    assert!(
+        close(si(c, "h").await, want.h),
+        "back to the start: {}",
+        si(c, "h").await
+    );
+
+    // The correlations side by side: one row per forced correlation, each h from the engine,
+    // the recommended one marked; the plot draws a curve per correlation.
+    let rows = js(c, "return [...document.querySelectorAll('[data-table=correlations] tbody:first-of-type tr')].map(r => [r.dataset.correlation, r.dataset.h, r.classList.contains('recommended')]);").await;
+    let rows = rows.as_array().unwrap();
+    assert_eq!(rows.len(), want.analysis.forced.len());
+    for (row, e) in rows.iter().zip(&want.analysis.forced) {
+        assert_eq!(row[0].as_str().unwrap(), e.id);
+        assert!(
+            close(row[1].as_str().unwrap().parse().unwrap(), e.h),
+            "{} h",
+            e.id
+        );
+    }
+    assert_eq!(rows[want.analysis.recommended][2], json!(true));
+    assert_eq!(
+        js(
+            c,
+            "return document.querySelectorAll('[data-plot=nu-re] [data-curve]').length;"
+        )
+        .await,
+        json!(want.analysis.forced.len())
+    );
+    assert!(
+        js(c, "return document.querySelectorAll('[data-plot=nu-re] path.out').length > 0 && document.querySelectorAll('[data-plot=nu-re] path.in').length > 0;").await == json!(true),
+        "the plot should show solid and dashed parts"
+    );
+    assert_eq!(
+        js(
+            c,
+            "return document.querySelector('[data-separation]').dataset.separation;"
+        )
+        .await,
+        json!("80")
+    );
+    assert!(
+        !text_of(c, "[data-cautions]").await.is_empty(),
+        "no hot-surface caution at 65 °C"
+    );
+
+    // Another shape: a sphere computes as the engine does and has no per-length figure.
+    c.find(Locator::Css("[data-shape=sph]"))
+        .await
+        .unwrap()
+        .click()
+        .await
+        .unwrap();
+    let mut sph = s;
+    sph.shape = Shape::Sphere;
+    assert!(
+        close(si(c, "h").await, expect(&sph).h),
+        "sphere h differs from the engine"
+    );
+    assert!(close(si(c, "q_total").await, expect(&sph).q_total));
+    assert!(hidden(c, "L").await, "length shown for a sphere");
+    assert_eq!(
+        js(
+            c,
+            "return document.querySelectorAll('[data-plot=front]').length;"
+        )
+        .await,
+        json!(0)
+    );
+    // Still air is a valid input: the natural-convection answer.
+    type_into(c, "U", "0").await;
+    let mut still = sph;
+    still.speed = 0.0;
+    let want_still = expect(&still);
+    assert!(close(si(c, "h").await, want_still.h));
+    assert!(close(
+        want_still.h,
+        want_still.analysis.natural.as_ref().unwrap().h
+    ));
+    assert_no_nan_shown(c).await;
+    type_into(c, "U", "7").await;
+    c.find(Locator::Css("[data-shape=cyl]"))
+        .await
+        .unwrap()
+        .click()
+        .await
+        .unwrap();
     assert!(close(si(c, "h").await, want.h));
 
     // The link carries the scenario: load it fresh and get the same numbers.

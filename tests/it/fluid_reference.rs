@@ -21,16 +21,36 @@ fn water_and_steam_match_coolprop_if97_backend() {
         }
         .unwrap_or_else(|e| panic!("{temp} K {p} Pa: {e}"));
         // Issue budget: IF97 quantities to 1e-8.
-        assert!(rel(props.rho, r["rho"]) < 1e-8, "ρ {temp} {p}: {} vs {}", props.rho, r["rho"]);
-        assert!(rel(props.cp, r["cp"]) < 1e-8, "cp {temp} {p}: {} vs {}", props.cp, r["cp"]);
+        assert!(
+            rel(props.rho, r["rho"]) < 1e-8,
+            "ρ {temp} {p}: {} vs {}",
+            props.rho,
+            r["rho"]
+        );
+        assert!(
+            rel(props.cp, r["cp"]) < 1e-8,
+            "cp {temp} {p}: {} vs {}",
+            props.cp,
+            r["cp"]
+        );
         // Viscosity: the same formulation; CoolProp's critical enhancement is nil here.
-        assert!(rel(props.mu, r["mu"]) < 1e-6, "μ {temp} {p}: {} vs {}", props.mu, r["mu"]);
+        assert!(
+            rel(props.mu, r["mu"]) < 1e-6,
+            "μ {temp} {p}: {} vs {}",
+            props.mu,
+            r["mu"]
+        );
         // Conductivity: CoolProp adds R15-11's critical enhancement λ̄2, which Leeward leaves
         // out (industrial form). Where λ̄2 is nil the two agree to rounding; in hot liquid and
         // in steam near saturation it is worth up to 0.8 %, the documented cost of leaving it out.
         let nil_enhancement = r["phase"] == 1.0 && temp <= 400.0;
         let tol = if nil_enhancement { 1e-10 } else { 8e-3 };
-        assert!(rel(props.k, r["k"]) < tol, "k {temp} {p}: {} vs {}", props.k, r["k"]);
+        assert!(
+            rel(props.k, r["k"]) < tol,
+            "k {temp} {p}: {} vs {}",
+            props.k,
+            r["k"]
+        );
     }
 }
 
@@ -38,7 +58,11 @@ fn water_and_steam_match_coolprop_if97_backend() {
 fn glycol_water_matches_coolprop_incomp() {
     let t = fixture::load("glycol_coolprop.csv");
     for r in &t.rows {
-        let g = if r["fluid"] == 1.0 { Glycol::Ethylene } else { Glycol::Propylene };
+        let g = if r["fluid"] == 1.0 {
+            Glycol::Ethylene
+        } else {
+            Glycol::Propylene
+        };
         let (x, temp) = (r["x"], r["T"]);
         let props = glycol::properties(g, x, temp, 101_325.0).unwrap();
         for (name, got, want) in [
@@ -49,7 +73,10 @@ fn glycol_water_matches_coolprop_incomp() {
             ("freezing point", glycol::freezing_point(g, x), r["tfreeze"]),
         ] {
             // Issue budget: 1e-6.
-            assert!(rel(got, want) < 1e-6, "{g:?} {x} {temp} K {name}: {got} vs {want}");
+            assert!(
+                rel(got, want) < 1e-6,
+                "{g:?} {x} {temp} K {name}: {got} vs {want}"
+            );
         }
     }
 }

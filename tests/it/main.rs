@@ -2,5 +2,7 @@
 
 mod air_reference;
 mod browser;
+mod correlation_reference;
 mod fixture;
 mod fluid_reference;
+mod property_laws;

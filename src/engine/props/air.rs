@@ -139,6 +139,20 @@ pub fn conductivity_mwmk(t: f64, rho_mol: f64) -> f64 {
     l0 + residual(&LAMBDA_R, tau, rho_mol / RHO_C)
 }
 
+/// Viscosity (μPa·s) and conductivity (mW/(m·K)) together, sharing the dilute-gas viscosity.
+pub fn transport(t: f64, rho_mol: f64) -> (f64, f64) {
+    let tau = T_C / t;
+    let delta = rho_mol / RHO_C;
+    let eta0 = viscosity_dilute_upas(t);
+    let (n1, (n2, t2), (n3, t3)) = LAMBDA_0;
+    let ln_tau = tau.ln();
+    let l0 = n1 * eta0 + n2 * (t2 * ln_tau).exp() + n3 * (t3 * ln_tau).exp();
+    (
+        eta0 + residual(&ETA_R, tau, delta),
+        l0 + residual(&LAMBDA_R, tau, delta),
+    )
+}
+
 /// Ideal-gas part of the air Helmholtz energy, Lemmon et al. (2000) Table 12: the power terms
 /// N1..N3 (τ^-3, τ^-2, τ^-1), N6 (τ^1.5), N7 (ln τ), and the Planck–Einstein-like terms.
 const N_IG: [f64; 13] = [
@@ -214,8 +228,8 @@ pub fn properties(t: f64, p: f64) -> Result<Properties, EngineError> {
     let rho_mol = molar_density(t, p);
     let m = MOLAR_MASS * 1e-3;
     let rho = rho_mol * 1000.0 * m;
-    let mu = viscosity_upas(t, rho_mol) * 1e-6;
-    let k = conductivity_mwmk(t, rho_mol) * 1e-3;
+    let (eta, lambda) = transport(t, rho_mol);
+    let (mu, k) = (eta * 1e-6, lambda * 1e-3);
     let cp = cp0_over_r(t) * R_MOLAR / m;
     Ok(Properties::from_primaries(
         t,
@@ -259,6 +273,15 @@ mod tests {
                 let l = conductivity_mwmk(t, rho);
                 assert!(rel(l, lambda) < 5e-6, "λ({t}, {rho}) = {l}, table {lambda}");
             }
+        }
+    }
+
+    #[test]
+    fn shared_transport_equals_the_separate_functions() {
+        for (t, rho) in [(250.0, 0.05), (300.0, 5.0), (900.0, 0.01)] {
+            let (e, l) = transport(t, rho);
+            assert!(rel(e, viscosity_upas(t, rho)) < 1e-14);
+            assert!(rel(l, conductivity_mwmk(t, rho)) < 1e-14);
         }
     }
 

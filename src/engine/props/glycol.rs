@@ -222,7 +222,9 @@ mod tests {
     #[test]
     fn below_freezing_is_an_error_naming_the_point() {
         let e = properties(Glycol::Ethylene, 0.3, 250.0, 101_325.0).unwrap_err();
-        assert!(matches!(e, EngineError::WrongPhase { boundary, .. } if (boundary - 258.57).abs() < 0.05));
+        assert!(
+            matches!(e, EngineError::WrongPhase { boundary, .. } if (boundary - 258.57).abs() < 0.05)
+        );
         assert!(properties(Glycol::Ethylene, 0.7, 300.0, 101_325.0).is_err());
     }
 }

@@ -45,8 +45,14 @@ const HW_ICE: [f64; 7] = [
 /// Saturation pressure over ice, Pa (Hyland–Wexler).
 pub fn psat_ice(t: f64) -> f64 {
     let c = &HW_ICE;
-    (c[0] / t + c[1] + c[2] * t + c[3] * t * t + c[4] * t.powi(3) + c[5] * t.powi(4) + c[6] * t.ln())
-        .exp()
+    (c[0] / t
+        + c[1]
+        + c[2] * t
+        + c[3] * t * t
+        + c[4] * t.powi(3)
+        + c[5] * t.powi(4)
+        + c[6] * t.ln())
+    .exp()
 }
 
 /// Saturation pressure of water, Pa: over liquid at and above the triple point, over ice below.
@@ -79,10 +85,22 @@ pub fn dew_point(pv: f64) -> f64 {
 }
 
 pub const SOURCES: &[(&str, &str)] = &[
-    ("ρ, cp", "ideal-gas mixture: dry air (Lemmon et al. 2000) and vapour (IAPWS-IF97 region 2)"),
-    ("μ", "Wilke's rule: dry air (Lemmon & Jacobsen 2004), vapour (IAPWS R12-08)"),
-    ("k", "Wassiljewa–Mason–Saxena: dry air (Lemmon & Jacobsen 2004), vapour (IAPWS R15-11)"),
-    ("psat", "IAPWS-IF97 region 4 over water; Hyland–Wexler (ASHRAE) over ice"),
+    (
+        "ρ, cp",
+        "ideal-gas mixture: dry air (Lemmon et al. 2000) and vapour (IAPWS-IF97 region 2)",
+    ),
+    (
+        "μ",
+        "Wilke's rule: dry air (Lemmon & Jacobsen 2004), vapour (IAPWS R12-08)",
+    ),
+    (
+        "k",
+        "Wassiljewa–Mason–Saxena: dry air (Lemmon & Jacobsen 2004), vapour (IAPWS R15-11)",
+    ),
+    (
+        "psat",
+        "IAPWS-IF97 region 4 over water; Hyland–Wexler (ASHRAE) over ice",
+    ),
 ];
 
 pub const HW_ICE_T: Range = Range {
@@ -224,7 +242,12 @@ mod tests {
     /// tabulation): 5, 25, 50, 100 °C, printed to five or six figures; IF97 agrees to ~300 ppm.
     #[test]
     fn ashrae_saturation_pressures() {
-        for (tc, pa) in [(5.0, 872.6), (25.0, 3169.7), (50.0, 12351.3), (100.0, 101418.0)] {
+        for (tc, pa) in [
+            (5.0, 872.6),
+            (25.0, 3169.7),
+            (50.0, 12351.3),
+            (100.0, 101418.0),
+        ] {
             let p = psat(tc + 273.15);
             assert!(rel(p, pa) < 3e-4, "{tc} °C: {p} vs {pa}");
         }
@@ -235,7 +258,11 @@ mod tests {
     #[test]
     fn dew_point_at_25c_50_percent() {
         let m = moisture(298.15, 101_325.0, Humidity::Relative(0.5)).unwrap();
-        assert!((m.dew_point - 273.15 - 13.864).abs() < 0.01, "{}", m.dew_point - 273.15);
+        assert!(
+            (m.dew_point - 273.15 - 13.864).abs() < 0.01,
+            "{}",
+            m.dew_point - 273.15
+        );
     }
 
     #[test]

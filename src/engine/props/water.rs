@@ -159,21 +159,44 @@ struct Gibbs {
     g_pt: f64,
 }
 
+/// Powers x^0 ..= x^N by repeated multiplication (one pass instead of a powi per term).
+fn powers<const N: usize>(x: f64) -> [f64; N] {
+    let mut out = [1.0; N];
+    for k in 1..N {
+        out[k] = out[k - 1] * x;
+    }
+    out
+}
+
 /// Region 1, Eq. (7): π = p/16.53 MPa, τ = 1386 K/T.
 fn gibbs1(pi: f64, tau: f64) -> Gibbs {
     let a = 7.1 - pi;
     let b = tau - 1.222;
+    // I runs 0..=32; J runs −41..=17, and its derivatives need down to −43.
+    let pa: [f64; 33] = powers(a);
+    let pb: [f64; 18] = powers(b);
+    let pbi: [f64; 44] = powers(1.0 / b);
+    let bp = |j: i32| {
+        if j >= 0 {
+            pb[j as usize]
+        } else {
+            pbi[(-j) as usize]
+        }
+    };
     let mut out = Gibbs::default();
     for &(i, j, n) in &R1 {
         let (fi, fj) = (i as f64, j as f64);
-        let ai = a.powi(i);
-        let bj = b.powi(j);
+        let iu = i as usize;
+        let ai = pa[iu];
+        let ai1 = if i >= 1 { pa[iu - 1] } else { 0.0 };
+        let ai2 = if i >= 2 { pa[iu - 2] } else { 0.0 };
+        let (bj, bj1, bj2) = (bp(j), bp(j - 1), bp(j - 2));
         out.g += n * ai * bj;
-        out.g_p -= n * fi * a.powi(i - 1) * bj;
-        out.g_pp += n * fi * (fi - 1.0) * a.powi(i - 2) * bj;
-        out.g_t += n * ai * fj * b.powi(j - 1);
-        out.g_tt += n * ai * fj * (fj - 1.0) * b.powi(j - 2);
-        out.g_pt -= n * fi * a.powi(i - 1) * fj * b.powi(j - 1);
+        out.g_p -= n * fi * ai1 * bj;
+        out.g_pp += n * fi * (fi - 1.0) * ai2 * bj;
+        out.g_t += n * ai * fj * bj1;
+        out.g_tt += n * ai * fj * (fj - 1.0) * bj2;
+        out.g_pt -= n * fi * ai1 * fj * bj1;
     }
     out
 }
@@ -193,17 +216,25 @@ fn gibbs2(pi: f64, tau: f64) -> (Gibbs, Gibbs) {
         o.g_tt += n * fj * (fj - 1.0) * tau.powi(j - 2);
     }
     let b = tau - 0.5;
+    // I runs 1..=24, J 0..=58; derivatives use the powers one and two below, only where the
+    // exponent's own factor is not zero (so b = 0 never divides).
+    let pp: [f64; 25] = powers(pi);
+    let pb: [f64; 59] = powers(b);
     let mut r = Gibbs::default();
     for &(i, j, n) in &R2_RES {
         let (fi, fj) = (i as f64, j as f64);
-        let pi_i = pi.powi(i);
-        let bj = b.powi(j);
+        let (iu, ju) = (i as usize, j as usize);
+        let (pi_i, pi_i1) = (pp[iu], pp[iu - 1]);
+        let pi_i2 = if i >= 2 { pp[iu - 2] } else { 0.0 };
+        let bj = pb[ju];
+        let bj1 = if j >= 1 { pb[ju - 1] } else { 0.0 };
+        let bj2 = if j >= 2 { pb[ju - 2] } else { 0.0 };
         r.g += n * pi_i * bj;
-        r.g_p += n * fi * pi.powi(i - 1) * bj;
-        r.g_pp += n * fi * (fi - 1.0) * pi.powi(i - 2) * bj;
-        r.g_t += n * pi_i * fj * b.powi(j - 1);
-        r.g_tt += n * pi_i * fj * (fj - 1.0) * b.powi(j - 2);
-        r.g_pt += n * fi * pi.powi(i - 1) * fj * b.powi(j - 1);
+        r.g_p += n * fi * pi_i1 * bj;
+        r.g_pp += n * fi * (fi - 1.0) * pi_i2 * bj;
+        r.g_t += n * pi_i * fj * bj1;
+        r.g_tt += n * pi_i * fj * (fj - 1.0) * bj2;
+        r.g_pt += n * fi * pi_i1 * fj * bj1;
     }
     (o, r)
 }
@@ -226,8 +257,8 @@ pub fn region1(t: f64, p: f64) -> If97 {
     let (pi, tau) = (p / 16.53, 1386.0 / t);
     let g = gibbs1(pi, tau);
     let rt = R * t;
-    let w2 = 1e3 * rt * g.g_p * g.g_p
-        / ((g.g_p - tau * g.g_pt).powi(2) / (tau * tau * g.g_tt) - g.g_pp);
+    let w2 =
+        1e3 * rt * g.g_p * g.g_p / ((g.g_p - tau * g.g_pt).powi(2) / (tau * tau * g.g_tt) - g.g_pp);
     If97 {
         v: rt * pi * g.g_p / p * 1e-3,
         h: rt * tau * g.g_t,
@@ -288,10 +319,34 @@ pub fn p_b23_mpa(t: f64) -> f64 {
 /// R12-08 Table 1 (H0..H3) and Table 2 (H_ij, i = 0..5 by rows, j = 0..6 by columns).
 const H0: [f64; 4] = [1.677_52, 2.204_62, 0.636_656_4, -0.241_605];
 const H1: [[f64; 7]; 6] = [
-    [5.200_94e-1, 2.225_31e-1, -2.813_78e-1, 1.619_13e-1, -3.253_72e-2, 0.0, 0.0],
-    [8.508_95e-2, 9.991_15e-1, -9.068_51e-1, 2.573_99e-1, 0.0, 0.0, 0.0],
+    [
+        5.200_94e-1,
+        2.225_31e-1,
+        -2.813_78e-1,
+        1.619_13e-1,
+        -3.253_72e-2,
+        0.0,
+        0.0,
+    ],
+    [
+        8.508_95e-2,
+        9.991_15e-1,
+        -9.068_51e-1,
+        2.573_99e-1,
+        0.0,
+        0.0,
+        0.0,
+    ],
     [-1.083_74, 1.887_97, -7.724_79e-1, 0.0, 0.0, 0.0, 0.0],
-    [-2.895_55e-1, 1.266_13, -4.898_37e-1, 0.0, 6.984_52e-2, 0.0, -4.356_73e-3],
+    [
+        -2.895_55e-1,
+        1.266_13,
+        -4.898_37e-1,
+        0.0,
+        6.984_52e-2,
+        0.0,
+        -4.356_73e-3,
+    ],
     [0.0, 0.0, -2.570_40e-1, 0.0, 0.0, 8.721_02e-3, 0.0],
     [0.0, 1.205_73e-1, 0.0, 0.0, 0.0, 0.0, -5.932_64e-4],
 ];
@@ -328,11 +383,46 @@ const L0: [f64; 5] = [
     4.096_266e-4,
 ];
 const L1: [[f64; 6]; 5] = [
-    [1.603_973_57, -0.646_013_523, 0.111_443_906, 0.102_997_357, -0.050_412_363_4, 0.006_098_592_58],
-    [2.337_718_42, -2.788_437_78, 1.536_161_67, -0.463_045_512, 0.083_282_701_9, -0.007_192_012_45],
-    [2.196_505_29, -4.545_807_85, 3.557_772_44, -1.409_449_78, 0.275_418_278, -0.020_593_881_6],
-    [-1.210_513_78, 1.608_129_89, -0.621_178_141, 0.071_637_322_4, 0.0, 0.0],
-    [-2.720_337_0, 4.575_863_31, -3.183_692_45, 1.116_834_8, -0.192_683_05, 0.012_913_842],
+    [
+        1.603_973_57,
+        -0.646_013_523,
+        0.111_443_906,
+        0.102_997_357,
+        -0.050_412_363_4,
+        0.006_098_592_58,
+    ],
+    [
+        2.337_718_42,
+        -2.788_437_78,
+        1.536_161_67,
+        -0.463_045_512,
+        0.083_282_701_9,
+        -0.007_192_012_45,
+    ],
+    [
+        2.196_505_29,
+        -4.545_807_85,
+        3.557_772_44,
+        -1.409_449_78,
+        0.275_418_278,
+        -0.020_593_881_6,
+    ],
+    [
+        -1.210_513_78,
+        1.608_129_89,
+        -0.621_178_141,
+        0.071_637_322_4,
+        0.0,
+        0.0,
+    ],
+    [
+        -2.720_337_0,
+        4.575_863_31,
+        -3.183_692_45,
+        1.116_834_8,
+        -0.192_683_05,
+        0.012_913_842,
+    ],
 ];
 
 /// Thermal conductivity, W/(m·K), at T (K) and ρ (kg/m³): R15-11 Eqs. (15)–(17), no critical
@@ -420,7 +510,7 @@ fn check_state(t: f64, p: f64) -> Result<(), EngineError> {
 /// Saturation temperature at `p` (Pa), when p is below the critical pressure.
 fn saturation(p: f64) -> Option<f64> {
     let p_mpa = p * 1e-6;
-    (p_mpa < P_CRIT && p_mpa >= 611.213e-6).then(|| tsat_k(p_mpa))
+    (611.213e-6..P_CRIT).contains(&p_mpa).then(|| tsat_k(p_mpa))
 }
 
 /// Liquid water at T (K) and p (Pa). Above the saturation temperature at p it is an error that
@@ -530,14 +620,70 @@ mod tests {
     fn if97_verification_tables_5_and_15() {
         type Row = (f64, f64, [f64; 6]);
         let r1: [Row; 3] = [
-            (300.0, 3.0, [1.00215168e-3, 115.331273, 112.324818, 0.392294792, 4.17301218, 1507.73921]),
-            (300.0, 80.0, [9.71180894e-4, 184.142828, 106.448356, 0.368563852, 4.01008987, 1634.69054]),
-            (500.0, 3.0, [1.20241800e-3, 975.542239, 971.934985, 2.58041912, 4.65580682, 1240.71337]),
+            (
+                300.0,
+                3.0,
+                [
+                    1.00215168e-3,
+                    115.331273,
+                    112.324818,
+                    0.392294792,
+                    4.17301218,
+                    1507.73921,
+                ],
+            ),
+            (
+                300.0,
+                80.0,
+                [
+                    9.71180894e-4,
+                    184.142828,
+                    106.448356,
+                    0.368563852,
+                    4.01008987,
+                    1634.69054,
+                ],
+            ),
+            (
+                500.0,
+                3.0,
+                [
+                    1.20241800e-3,
+                    975.542239,
+                    971.934985,
+                    2.58041912,
+                    4.65580682,
+                    1240.71337,
+                ],
+            ),
         ];
         let r2: [Row; 3] = [
-            (300.0, 0.0035, [39.4913866, 2549.91145, 2411.69160, 8.52238967, 1.91300162, 427.920172]),
-            (700.0, 0.0035, [92.3015898, 3335.68375, 3012.62819, 10.1749996, 2.08141274, 644.289068]),
-            (700.0, 30.0, [5.42946619e-3, 2631.49474, 2468.61076, 5.17540298, 10.3505092, 480.386523]),
+            (
+                300.0,
+                0.0035,
+                [
+                    39.4913866, 2549.91145, 2411.69160, 8.52238967, 1.91300162, 427.920172,
+                ],
+            ),
+            (
+                700.0,
+                0.0035,
+                [
+                    92.3015898, 3335.68375, 3012.62819, 10.1749996, 2.08141274, 644.289068,
+                ],
+            ),
+            (
+                700.0,
+                30.0,
+                [
+                    5.42946619e-3,
+                    2631.49474,
+                    2468.61076,
+                    5.17540298,
+                    10.3505092,
+                    480.386523,
+                ],
+            ),
         ];
         for (f, rows) in [(region1 as fn(f64, f64) -> If97, r1), (region2, r2)] {
             for (t, p, want) in rows {
@@ -553,7 +699,11 @@ mod tests {
     /// IAPWS R7-97(2012) Tables 35 and 36 (region 4), to 1e-8.
     #[test]
     fn if97_verification_tables_35_and_36() {
-        for (t, p) in [(300.0, 3.53658941e-3), (500.0, 2.63889776), (600.0, 12.3443146)] {
+        for (t, p) in [
+            (300.0, 3.53658941e-3),
+            (500.0, 2.63889776),
+            (600.0, 12.3443146),
+        ] {
             assert!(rel(psat_mpa(t), p) < 1e-8, "psat({t})");
         }
         for (p, t) in [(0.1, 372.755919), (1.0, 453.035632), (10.0, 584.149488)] {

@@ -1,0 +1,507 @@
+//! A body in a stream: its shape, the correlations that apply to it, and the side-by-side analysis
+//! (every forced correlation at its own reference temperature, natural convection, the mixed
+//! blend, the recommended value and the spread).
+//!
+//! Recommendation rule (shown on the page as [`Shape::rule`]): each shape has a preference order;
+//! the recommended forced correlation is the first in that order whose published ranges all hold
+//! at the operating point, or the first of all when none holds (then flagged). The answer the page
+//! leads with is that forced value blended with natural convection (see
+//! [`crate::engine::correlations::mixed`]).
+
+use crate::engine::correlations::mixed::{self, Direction};
+use crate::engine::correlations::natural::{self, Length, Natural};
+use crate::engine::correlations::{bars, cylinder, sphere, Forced, Groups, Reference, G};
+use crate::engine::error::{finite_result, EngineError};
+use crate::engine::props::{Fluid, Properties};
+use crate::engine::validity::{Flag, FlagKind};
+use std::f64::consts::PI;
+
+/// The cross-section of the body (or a sphere).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum Shape {
+    Cylinder,
+    Sphere,
+    SquareFace,
+    SquareCorner,
+    HexFace,
+    HexCorner,
+    Plate,
+}
+
+impl Shape {
+    pub const ALL: [Shape; 7] = [
+        Shape::Cylinder,
+        Shape::Sphere,
+        Shape::SquareFace,
+        Shape::SquareCorner,
+        Shape::HexFace,
+        Shape::HexCorner,
+        Shape::Plate,
+    ];
+    /// Stable id in links and page attributes.
+    pub fn id(&self) -> &'static str {
+        match self {
+            Shape::Cylinder => "cyl",
+            Shape::Sphere => "sph",
+            Shape::SquareFace => "sqf",
+            Shape::SquareCorner => "sqc",
+            Shape::HexFace => "hxf",
+            Shape::HexCorner => "hxc",
+            Shape::Plate => "plt",
+        }
+    }
+    pub fn from_id(id: &str) -> Option<Shape> {
+        Shape::ALL.into_iter().find(|s| s.id() == id)
+    }
+    pub fn label(&self) -> &'static str {
+        match self {
+            Shape::Cylinder => "Round: pipe, rod, wire",
+            Shape::Sphere => "Sphere: ball, bulb, tank",
+            Shape::SquareFace => "Square bar, flat face to the stream",
+            Shape::SquareCorner => "Square bar, corner to the stream",
+            Shape::HexFace => "Hexagon bar, flat face to the stream",
+            Shape::HexCorner => "Hexagon bar, corner to the stream",
+            Shape::Plate => "Thin strip across the stream",
+        }
+    }
+    /// What D means for this shape (it is drawn on the page).
+    pub fn length_meaning(&self) -> &'static str {
+        match self {
+            Shape::Cylinder => "D: outside diameter",
+            Shape::Sphere => "D: diameter",
+            Shape::SquareFace => "D: side (the width across the stream)",
+            Shape::SquareCorner => "D: diagonal (the width across the stream)",
+            Shape::HexFace => "D: across the corners (the width across the stream)",
+            Shape::HexCorner => "D: across the flats (the width across the stream)",
+            Shape::Plate => "D: height of the strip (across the stream)",
+        }
+    }
+    /// Perimeter over D for a prism (heat per length = h·P·ΔT); `None` for the sphere. The strip
+    /// counts both faces and ignores its edges.
+    pub fn perimeter_over_d(&self) -> Option<f64> {
+        match self {
+            Shape::Cylinder => Some(PI),
+            Shape::Sphere => None,
+            Shape::SquareFace => Some(4.0),
+            Shape::SquareCorner => Some(2.0 * std::f64::consts::SQRT_2),
+            Shape::HexFace => Some(3.0),
+            Shape::HexCorner => Some(2.0 * 3f64.sqrt()),
+            Shape::Plate => Some(2.0),
+        }
+    }
+    /// The forced-convection correlations, in preference order.
+    pub fn forced(&self) -> &'static [Forced] {
+        match self {
+            Shape::Cylinder => &cylinder::FORCED,
+            Shape::Sphere => &sphere::FORCED,
+            Shape::SquareFace => &bars::SQUARE_FACE_FORCED,
+            Shape::SquareCorner => &bars::SQUARE_CORNER_FORCED,
+            Shape::HexFace => &bars::HEX_FACE_FORCED,
+            Shape::HexCorner => &bars::HEX_CORNER_FORCED,
+            Shape::Plate => &bars::PLATE_FORCED,
+        }
+    }
+    /// The recommendation rule, in words.
+    pub fn rule(&self) -> &'static str {
+        match self {
+            Shape::Cylinder => "Churchill–Bernstein is preferred: one equation for gases and liquids over all Re·Pr ≥ 0.2, smooth through the Reynolds bands where tabulated constants jump. Outside its range the next valid one is used, in the order Hilpert, Zukauskas, Gnielinski.",
+            Shape::Sphere => "Whitaker is preferred inside its fitted range (it carries the viscosity correction for liquids); outside it, Gnielinski's VDI form (the widest range, Nu → 2 in still fluid), then Ranz & Marshall (drops and small spheres).",
+            _ => "One published table (Jakob 1949) covers this section, for gases; it is used throughout, flagged outside its Reynolds band.",
+        }
+    }
+    pub fn is_sphere(&self) -> bool {
+        *self == Shape::Sphere
+    }
+    /// Flow-regime note for the operating point.
+    pub fn regime(&self, re: f64) -> &'static str {
+        match self {
+            Shape::Cylinder if re < 2e5 => "Subcritical (Re below about 2×10⁵): the laminar boundary layer separates near 80° from the front stagnation point; the wake drives the heat transfer at the rear.",
+            Shape::Cylinder => "Critical or beyond (Re above about 2×10⁵): the boundary layer turns turbulent before it separates, further back; here the correlations disagree most.",
+            Shape::Sphere if re < 3e5 => "Subcritical (Re below about 3×10⁵): the laminar boundary layer separates a little ahead of the equator; the wake governs the rear half.",
+            Shape::Sphere => "Critical or beyond (Re above about 3×10⁵): the boundary layer turns turbulent and separates further back; the correlations disagree most here.",
+            _ => "Sharp edges fix the separation at the front corners at any Reynolds number; the wake governs the side and rear faces.",
+        }
+    }
+}
+
+/// The axis of a prism.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum Axis {
+    Horizontal,
+    Vertical,
+}
+
+/// Which way the wind blows.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum Wind {
+    Horizontal,
+    Up,
+    Down,
+}
+
+/// Everything the analysis needs, SI.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Body {
+    pub shape: Shape,
+    pub axis: Axis,
+    pub wind: Wind,
+    /// Characteristic length D, m.
+    pub d: f64,
+    /// Length of the prism along its axis (the height when vertical), m.
+    pub length: f64,
+    pub speed: f64,
+    pub t_inf: f64,
+    pub t_s: f64,
+    pub p: f64,
+    pub fluid: Fluid,
+}
+
+/// One forced-convection correlation evaluated at the operating point.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Estimate {
+    pub id: &'static str,
+    pub name: &'static str,
+    pub formula: &'static str,
+    pub reference: Reference,
+    /// The groups it was evaluated with (Re on D at its reference temperature).
+    pub groups: Groups,
+    /// Mean Nu on D.
+    pub nu: f64,
+    /// Nu as Re → 0 for the blend.
+    pub nu_still: f64,
+    /// W/(m²·K), Nu·k/D with k at its reference temperature.
+    pub h: f64,
+    /// k at the reference temperature, W/(m·K).
+    pub k: f64,
+    pub flags: Vec<Flag>,
+}
+
+impl Estimate {
+    /// Inside every published range (near-edge notes allowed).
+    pub fn valid(&self) -> bool {
+        self.flags.iter().all(|f| f.kind != FlagKind::Outside)
+    }
+}
+
+/// Natural convection evaluated at the operating point.
+#[derive(Debug, Clone, PartialEq)]
+pub struct NaturalEstimate {
+    pub id: &'static str,
+    pub name: &'static str,
+    pub formula: &'static str,
+    /// The length Ra and Nu are based on, m, and what it is.
+    pub length: f64,
+    pub length_kind: Length,
+    pub gr: f64,
+    pub ra: f64,
+    /// Nu on its own length.
+    pub nu: f64,
+    pub h: f64,
+    /// Buoyant flow along the surface goes up (true) or down.
+    pub rises: bool,
+    pub flags: Vec<Flag>,
+}
+
+/// The whole analysis of one body at one operating point.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Analysis {
+    pub film: Properties,
+    pub free: Properties,
+    pub surface: Properties,
+    pub forced: Vec<Estimate>,
+    /// Index into `forced` of the recommended correlation.
+    pub recommended: usize,
+    /// Lowest and highest h among the correlations inside their ranges, and how many there are.
+    pub spread: Option<(f64, f64, usize)>,
+    pub natural: Option<NaturalEstimate>,
+    pub direction: Direction,
+    pub exponent: f64,
+    /// The answer: recommended forced blended with natural convection, W/(m²·K).
+    pub h: f64,
+    /// Gr/Re² on D (film properties): ≪ 1 forced, ≫ 1 natural.
+    pub richardson: Option<f64>,
+    pub flags: Vec<Flag>,
+    pub notes: Vec<&'static str>,
+}
+
+impl Analysis {
+    pub fn recommended(&self) -> &Estimate {
+        &self.forced[self.recommended]
+    }
+    /// Which mode dominates, in words (thresholds 0.1 and 10 on Gr/Re², common practice).
+    pub fn mode(&self) -> &'static str {
+        match self.richardson {
+            None => "forced convection only (natural convection needs the fluid's expansion coefficient β)",
+            Some(r) if r.is_infinite() || r > 10.0 => "natural convection dominates (Gr/Re² > 10)",
+            Some(r) if r < 0.1 => "forced convection dominates (Gr/Re² < 0.1)",
+            Some(_) => "mixed convection: both matter (0.1 ≤ Gr/Re² ≤ 10)",
+        }
+    }
+}
+
+/// Evaluate every correlation for the body.
+pub fn analyse(b: &Body) -> Result<Analysis, EngineError> {
+    let film_t = 0.5 * (b.t_s + b.t_inf);
+    let film = b.fluid.at(film_t, b.p)?;
+    let free = b.fluid.at(b.t_inf, b.p)?;
+    let surface = b.fluid.at(b.t_s, b.p)?;
+    let gas = b.fluid.is_gas();
+
+    let mut forced = Vec::with_capacity(4);
+    for c in b.shape.forced() {
+        let at = match c.reference {
+            Reference::Film => &film,
+            Reference::FreeStream => &free,
+        };
+        let groups = Groups {
+            re: b.speed * b.d / at.nu,
+            pr: at.pr,
+            pr_s: surface.pr,
+            mu_ratio: at.mu / surface.mu,
+            t_ratio: b.t_inf / b.t_s,
+            gas,
+        };
+        let nu = (c.nu)(&groups);
+        let value = finite_result("Nusselt number", nu.value)?;
+        forced.push(Estimate {
+            id: c.id,
+            name: c.name,
+            formula: c.formula,
+            reference: c.reference,
+            groups,
+            nu: value,
+            nu_still: (c.nu_still)(&groups),
+            h: finite_result("heat-transfer coefficient", value * at.k / b.d)?,
+            k: at.k,
+            flags: nu.flags,
+        });
+    }
+    let recommended = forced.iter().position(Estimate::valid).unwrap_or(0);
+    let valid: Vec<f64> = forced.iter().filter(|e| e.valid()).map(|e| e.h).collect();
+    let spread = (!valid.is_empty()).then(|| {
+        let lo = valid.iter().cloned().fold(f64::INFINITY, f64::min);
+        let hi = valid.iter().cloned().fold(f64::NEG_INFINITY, f64::max);
+        (lo, hi, valid.len())
+    });
+
+    let mut notes = Vec::new();
+    let natural = natural_estimate(b, &film, &mut notes)?;
+    let vertical_body = !b.shape.is_sphere() && b.axis == Axis::Vertical;
+    let direction = match (b.wind, &natural) {
+        (Wind::Horizontal, _) | (_, None) => Direction::Transverse,
+        _ if vertical_body => Direction::Transverse,
+        (w, Some(n)) => {
+            if (w == Wind::Up) == n.rises {
+                Direction::Assisting
+            } else {
+                Direction::Opposing
+            }
+        }
+    };
+    if vertical_body && b.wind != Wind::Horizontal {
+        notes.push("A vertical body in a vertical stream is flow along its axis, not cross-flow: the correlations here assume the stream crosses the axis, so the stream is treated as crossing it.");
+    }
+    let compact = b.shape.is_sphere() || !vertical_body;
+    let exponent = mixed::exponent(direction, compact && direction == Direction::Transverse);
+    let rec = &forced[recommended];
+    let mut flags = Vec::new();
+    let h = match &natural {
+        Some(n) => {
+            let floor = if b.shape.is_sphere() {
+                2.0 * film.k / b.d
+            } else {
+                0.0
+            };
+            let forced_part = rec.h - rec.nu_still * rec.k / b.d;
+            let (h, flag) = mixed::blend(forced_part, n.h - floor, floor, exponent, direction);
+            flags.extend(flag);
+            h
+        }
+        None => rec.h,
+    };
+    let h = finite_result("heat-transfer coefficient", h)?;
+    if h <= 0.0 {
+        return Err(EngineError::NonFiniteResult {
+            quantity: "heat-transfer coefficient (opposing flows cancel)",
+        });
+    }
+    let richardson = natural.as_ref().map(|n| {
+        let re = b.speed * b.d / film.nu;
+        let gr_d = n.gr * (b.d / n.length).powi(3);
+        gr_d / (re * re)
+    });
+    Ok(Analysis {
+        film,
+        free,
+        surface,
+        forced,
+        recommended,
+        spread,
+        natural,
+        direction,
+        exponent,
+        h,
+        richardson,
+        flags,
+        notes,
+    })
+}
+
+fn natural_estimate(
+    b: &Body,
+    film: &Properties,
+    notes: &mut Vec<&'static str>,
+) -> Result<Option<NaturalEstimate>, EngineError> {
+    if film.beta == 0.0 {
+        if b.speed == 0.0 {
+            return Err(EngineError::Undefined {
+                quantity: "expansion coefficient β",
+                value: 0.0,
+                unit: "1/K",
+                why: "in still fluid the answer is natural convection, which needs β",
+            });
+        }
+        notes
+            .push("Natural convection left out: the fluid's expansion coefficient β is not given.");
+        return Ok(None);
+    }
+    let vertical = !b.shape.is_sphere() && b.axis == Axis::Vertical;
+    let (corr, d_eq): (&Natural, f64) = match b.shape {
+        Shape::Sphere => (&natural::SPHERE, b.d),
+        Shape::Cylinder if !vertical => (&natural::HORIZONTAL_CYLINDER, b.d),
+        _ if vertical => (&natural::VERTICAL, b.d),
+        s => {
+            notes.push("No natural-convection correlation for this section is built in: the horizontal-cylinder one is applied to the diameter of equal perimeter, P/π (common practice).");
+            (
+                &natural::HORIZONTAL_CYLINDER,
+                b.d * s.perimeter_over_d().unwrap_or(PI) / PI,
+            )
+        }
+    };
+    let length = match corr.length {
+        Length::Diameter => d_eq,
+        Length::Height => b.length,
+    };
+    let dt = b.t_s - b.t_inf;
+    let gr = G * film.beta.abs() * dt.abs() * length.powi(3) / (film.nu * film.nu);
+    let ra = gr * film.pr;
+    let nu = (corr.nu)(ra, film.pr);
+    let mut flags = nu.flags;
+    if vertical {
+        let d_side = if b.shape == Shape::Cylinder {
+            b.d
+        } else {
+            b.d * b.shape.perimeter_over_d().unwrap_or(PI) / PI
+        };
+        let r = natural::thin_cylinder_range(gr);
+        flags.extend(r.check(corr.name, d_side / b.length, false));
+    }
+    let value = finite_result("Nusselt number (natural)", nu.value)?;
+    Ok(Some(NaturalEstimate {
+        id: corr.id,
+        name: corr.name,
+        formula: corr.formula,
+        length,
+        length_kind: corr.length,
+        gr: finite_result("Grashof number", gr)?,
+        ra: finite_result("Rayleigh number", ra)?,
+        nu: value,
+        h: finite_result(
+            "heat-transfer coefficient (natural)",
+            value * film.k / length,
+        )?,
+        rises: (film.beta * dt) > 0.0,
+        flags,
+    }))
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    fn demo_body(shape: Shape, speed: f64) -> Body {
+        Body {
+            shape,
+            axis: Axis::Horizontal,
+            wind: Wind::Horizontal,
+            d: 0.05,
+            length: 2.0,
+            speed,
+            t_inf: 283.15,
+            t_s: 333.15,
+            p: 101_325.0,
+            fluid: Fluid::DryAir,
+        }
+    }
+
+    #[test]
+    fn zero_wind_is_the_natural_answer() {
+        for shape in Shape::ALL {
+            let a = analyse(&demo_body(shape, 0.0)).unwrap();
+            let n = a.natural.as_ref().unwrap();
+            assert!(
+                (a.h - n.h).abs() <= 1e-12 * n.h,
+                "{shape:?}: {} vs {}",
+                a.h,
+                n.h
+            );
+        }
+    }
+
+    #[test]
+    fn strong_wind_tends_to_the_forced_answer() {
+        for shape in [Shape::Cylinder, Shape::Sphere] {
+            let a = analyse(&demo_body(shape, 60.0)).unwrap();
+            let f = a.recommended().h;
+            assert!((a.h / f - 1.0).abs() < 0.01, "{shape:?}: {} vs {f}", a.h);
+        }
+    }
+
+    #[test]
+    fn blend_is_continuous_from_still_air_to_wind() {
+        for shape in Shape::ALL {
+            let still = analyse(&demo_body(shape, 0.0)).unwrap().h;
+            let mut u = 1e-4;
+            let first = analyse(&demo_body(shape, u)).unwrap().h;
+            assert!(
+                (first / still - 1.0).abs() < 1e-3,
+                "{shape:?}: {still} → {first}"
+            );
+            let mut last = first;
+            while u < 30.0 {
+                u *= 1.01;
+                let h = analyse(&demo_body(shape, u)).unwrap().h;
+                // Between samples 1 % apart in speed h moves by well under 3 % (band tables may
+                // step by up to 3 %; switches of the recommended correlation are bounded too).
+                assert!(
+                    (h / last - 1.0).abs() < 0.03,
+                    "{shape:?} at {u}: {last} → {h}"
+                );
+                last = h;
+            }
+        }
+    }
+
+    #[test]
+    fn each_correlation_uses_its_own_reference_temperature() {
+        let a = analyse(&demo_body(Shape::Cylinder, 5.0)).unwrap();
+        let cb = &a.forced[0];
+        let zk = a.forced.iter().find(|e| e.id == "zukauskas").unwrap();
+        assert!((cb.groups.re - 5.0 * 0.05 / a.film.nu).abs() < 1e-9);
+        assert!((zk.groups.re - 5.0 * 0.05 / a.free.nu).abs() < 1e-9);
+        assert_eq!(zk.groups.pr_s, a.surface.pr);
+        assert_eq!(a.recommended, 0);
+    }
+
+    #[test]
+    fn assisting_beats_opposing() {
+        let mut up = demo_body(Shape::Cylinder, 0.3);
+        up.wind = Wind::Up;
+        let mut down = up;
+        down.wind = Wind::Down;
+        let (a, o) = (analyse(&up).unwrap(), analyse(&down).unwrap());
+        assert_eq!(a.direction, Direction::Assisting);
+        assert_eq!(o.direction, Direction::Opposing);
+        assert!(a.h > o.h);
+    }
+}

@@ -1,0 +1,183 @@
+//! Sphere in a stream: mean Nusselt number over the surface, on the diameter D.
+
+use super::cylinder::flat_plate_parts;
+use super::{Forced, Groups, Reference};
+use crate::engine::validity::{Flagged, Range};
+
+pub const WHITAKER: &str = "Whitaker (1972)";
+const WHITAKER_SRC: &str = "Whitaker (1972)";
+pub const WHITAKER_RE: Range = Range {
+    quantity: "Re",
+    lo: 3.5,
+    hi: 7.6e4,
+    unit: "",
+    source: WHITAKER_SRC,
+};
+pub const WHITAKER_PR: Range = Range {
+    quantity: "Pr",
+    lo: 0.71,
+    hi: 380.0,
+    unit: "",
+    source: WHITAKER_SRC,
+};
+pub const WHITAKER_MU: Range = Range {
+    quantity: "μ/μs",
+    lo: 1.0,
+    hi: 3.2,
+    unit: "",
+    source: WHITAKER_SRC,
+};
+
+/// S. Whitaker, "Forced Convection Heat Transfer Correlations for Flow in Pipes, Past Flat Plates,
+/// Single Cylinders, Single Spheres, and for Flow in Packed Beds and Tube Bundles", AIChE J. 18
+/// (1972) 361–371: Nu = 2 + (0.4·Re^½ + 0.06·Re^⅔)·Pr^0.4·(μ/μs)^¼, properties at the free
+/// stream, μs at the surface. Fitted on 3.5 ≤ Re ≤ 7.6×10⁴, 0.71 ≤ Pr ≤ 380, 1 ≤ μ/μs ≤ 3.2.
+pub fn whitaker(g: &Groups) -> Flagged<f64> {
+    let nu = 2.0
+        + (0.4 * g.re.sqrt() + 0.06 * g.re.powf(2.0 / 3.0))
+            * g.pr.powf(0.4)
+            * g.mu_ratio.powf(0.25);
+    let mut out = Flagged::new(nu);
+    out.check(WHITAKER, &WHITAKER_RE, g.re);
+    out.check(WHITAKER, &WHITAKER_PR, g.pr);
+    out.check(WHITAKER, &WHITAKER_MU, g.mu_ratio);
+    out
+}
+
+pub const RANZ_MARSHALL: &str = "Ranz & Marshall (1952)";
+/// The drops of Ranz & Marshall's experiments covered Re up to about 200 (from memory).
+pub const RANZ_MARSHALL_RE: Range = Range {
+    quantity: "Re",
+    lo: 0.0,
+    hi: 200.0,
+    unit: "",
+    source: "Ranz & Marshall (1952), from memory",
+};
+
+/// W. E. Ranz and W. R. Marshall, "Evaporation from Drops", Chem. Eng. Prog. 48 (1952) 141–146
+/// and 173–180: Nu = 2 + 0.6·Re^½·Pr^⅓, for drops and small spheres; film temperature.
+pub fn ranz_marshall(g: &Groups) -> Flagged<f64> {
+    let mut out = Flagged::new(2.0 + 0.6 * g.re.sqrt() * g.pr.cbrt());
+    out.check(RANZ_MARSHALL, &RANZ_MARSHALL_RE, g.re);
+    out
+}
+
+pub const GNIELINSKI_SPHERE: &str = "Gnielinski, sphere (VDI Heat Atlas)";
+/// Range of the single-sphere form as recalled from the Atlas: 1 ≤ Re ≤ 10⁷, 0.7 ≤ Pr ≤ 600
+/// (from memory). Below Re = 1 the form still tends to the still-fluid limit Nu = 2.
+pub const GNIELINSKI_SPHERE_RE: Range = Range {
+    quantity: "Re",
+    lo: 1.0,
+    hi: 1e7,
+    unit: "",
+    source: "VDI Heat Atlas G6, from memory",
+};
+pub const GNIELINSKI_SPHERE_PR: Range = Range {
+    quantity: "Pr",
+    lo: 0.7,
+    hi: 600.0,
+    unit: "",
+    source: "VDI Heat Atlas G6, from memory",
+};
+
+/// V. Gnielinski, single sphere, VDI Heat Atlas (chapter G6): Nu = 2 + √(Nu_lam² + Nu_turb²)
+/// with the flat-plate parts of [`flat_plate_parts`] on Re = U·D/ν; Nu → 2 in still fluid.
+/// Properties at the free stream (the Atlas's mean fluid temperature).
+pub fn gnielinski_sphere(g: &Groups) -> Flagged<f64> {
+    let (lam, turb) = flat_plate_parts(g.re, g.pr);
+    let mut out = Flagged::new(2.0 + lam.hypot(turb));
+    out.check(GNIELINSKI_SPHERE, &GNIELINSKI_SPHERE_RE, g.re);
+    out.check(GNIELINSKI_SPHERE, &GNIELINSKI_SPHERE_PR, g.pr);
+    out
+}
+
+fn two(_: &Groups) -> f64 {
+    2.0
+}
+
+/// The forced-convection correlations for a sphere, recommended one first (see
+/// `body::recommend` for the rule).
+pub const FORCED: [Forced; 3] = [
+    Forced {
+        id: "whitaker",
+        name: WHITAKER,
+        reference: Reference::FreeStream,
+        formula: "Nu = 2 + (0.4·Re^½ + 0.06·Re^⅔)·Pr^0.4·(μ/μs)^¼",
+        nu: whitaker,
+        nu_still: two,
+    },
+    Forced {
+        id: "gnielinski-sphere",
+        name: GNIELINSKI_SPHERE,
+        reference: Reference::FreeStream,
+        formula: "Nu = 2 + √(Nu_lam² + Nu_turb²), Nu_lam = 0.664·Re^½·Pr^⅓, Nu_turb = 0.037·Re^0.8·Pr/(1 + 2.443·Re^−0.1·(Pr^⅔ − 1))",
+        nu: gnielinski_sphere,
+        nu_still: two,
+    },
+    Forced {
+        id: "ranz-marshall",
+        name: RANZ_MARSHALL,
+        reference: Reference::Film,
+        formula: "Nu = 2 + 0.6·Re^½·Pr^⅓",
+        nu: ranz_marshall,
+        nu_still: two,
+    },
+];
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    /// Worked example, from memory: Incropera & DeWitt, 6th ed., Example 7.6 — a 10 mm sphere in
+    /// 23 °C air at 10 m/s; free-stream properties at 296 K (ν = 15.36×10⁻⁶ m²/s, Pr = 0.709,
+    /// μ = 181.6×10⁻⁷ N·s/m²) and μs = 197.8×10⁻⁷ N·s/m² at 328 K give Re = 6510 and Nu = 47.4.
+    #[test]
+    fn whitaker_incropera_example_7_6_from_memory() {
+        let re = 10.0 * 0.01 / 15.36e-6;
+        let g = Groups {
+            re,
+            pr: 0.709,
+            pr_s: 0.709,
+            mu_ratio: 181.6 / 197.8,
+            t_ratio: 1.0,
+            gas: true,
+        };
+        let nu = whitaker(&g);
+        assert!((nu.value - 47.4).abs() < 0.05, "{}", nu.value);
+        // Pr = 0.709 is just below Whitaker's 0.71, and μ/μs < 1 (a hot sphere in a gas) lies
+        // outside the fitted 1–3.2: both flagged, value still computed.
+        let ranges: Vec<_> = nu.flags.iter().map(|f| f.range).collect();
+        assert_eq!(ranges, vec![WHITAKER_PR, WHITAKER_MU]);
+    }
+
+    /// Every sphere form tends to the conduction limit Nu = 2 in still fluid.
+    #[test]
+    fn still_fluid_gives_two() {
+        for c in FORCED {
+            let nu = (c.nu)(&Groups::uniform(0.0, 0.7, true)).value;
+            assert!((nu - 2.0).abs() < 1e-12, "{}: {nu}", c.name);
+            assert_eq!((c.nu_still)(&Groups::uniform(0.0, 0.7, true)), 2.0);
+        }
+    }
+
+    #[test]
+    fn ranz_marshall_value() {
+        // 2 + 0.6·√100·0.7^⅓ = 2 + 6·0.887904 = 7.327424 (hand arithmetic).
+        let nu = ranz_marshall(&Groups::uniform(100.0, 0.7, true)).value;
+        assert!((nu - 7.327_424).abs() < 1e-6, "{nu}");
+    }
+
+    #[test]
+    fn increase_with_reynolds() {
+        for c in FORCED {
+            let mut last = 0.0;
+            let mut re = 0.1;
+            while re < 1e7 {
+                let nu = (c.nu)(&Groups::uniform(re, 0.71, true)).value;
+                assert!(nu > last, "{} at {re}", c.name);
+                last = nu;
+                re *= 1.3;
+            }
+        }
+    }
+}

@@ -1,0 +1,87 @@
+//! Criterion benchmarks of the engine: `cargo bench --bench engine`.
+//! Budgets (README, Performance): one property set ≤ 1 µs; all correlations of one shape for one
+//! state, properties included, ≤ 1 µs; a full scenario evaluation (with its working) recorded.
+
+use criterion::{black_box, criterion_group, criterion_main, Criterion};
+use leeward::engine::props::{air, glycol, humid_air, water, Glycol, Humidity};
+use leeward::engine::scenario::{evaluate, DEMO};
+
+fn properties(c: &mut Criterion) {
+    c.bench_function("air property set (T, p)", |b| {
+        b.iter(|| air::properties(black_box(310.0), black_box(101_325.0)).unwrap())
+    });
+    c.bench_function("liquid water property set (T, p)", |b| {
+        b.iter(|| water::liquid(black_box(330.0), black_box(101_325.0)).unwrap())
+    });
+    c.bench_function("steam property set (T, p)", |b| {
+        b.iter(|| water::steam(black_box(450.0), black_box(101_325.0)).unwrap())
+    });
+    c.bench_function("humid air property set (T, p, RH)", |b| {
+        b.iter(|| {
+            humid_air::properties(
+                black_box(300.0),
+                black_box(101_325.0),
+                Humidity::Relative(0.6),
+            )
+            .unwrap()
+        })
+    });
+    c.bench_function("glycol-water property set (T, x)", |b| {
+        b.iter(|| {
+            glycol::properties(
+                Glycol::Ethylene,
+                black_box(0.3),
+                black_box(290.0),
+                101_325.0,
+            )
+            .unwrap()
+        })
+    });
+}
+
+/// All correlations of one shape for one state, the three property sets (film, free stream,
+/// surface) included: budget 1 µs native.
+fn correlations(c: &mut Criterion) {
+    use leeward::engine::body::{analyse, Axis, Body, Shape, Wind};
+    use leeward::engine::props::Fluid;
+    for (name, shape, fluid) in [
+        (
+            "cylinder in air: every correlation, properties included",
+            Shape::Cylinder,
+            Fluid::DryAir,
+        ),
+        (
+            "sphere in air: every correlation, properties included",
+            Shape::Sphere,
+            Fluid::DryAir,
+        ),
+        (
+            "cylinder in water: every correlation, properties included",
+            Shape::Cylinder,
+            Fluid::Water,
+        ),
+    ] {
+        let b = Body {
+            shape,
+            axis: Axis::Horizontal,
+            wind: Wind::Horizontal,
+            d: 0.0603,
+            length: 12.0,
+            speed: 3.0,
+            t_inf: 288.15,
+            t_s: 338.15,
+            p: 101_325.0,
+            fluid,
+        };
+        c.bench_function(name, |bch| bch.iter(|| analyse(black_box(&b)).unwrap()));
+    }
+}
+
+fn scenario(c: &mut Criterion) {
+    c.bench_function("demo scenario, full evaluation", |b| {
+        b.iter(|| evaluate(black_box(&DEMO)).unwrap())
+    });
+}
+
+criterion_group!(benches, properties, correlations, scenario);
+criterion_main!(benches);

@@ -1,0 +1,169 @@
+//! Property-based tests of the fluid layer over named input domains.
+
+use leeward::engine::props::{air, glycol, humid_air, water, Fluid, Glycol, Humidity};
+use proptest::prelude::*;
+
+/// Field conditions for air: the tool's working range.
+fn air_state() -> impl Strategy<Value = (f64, f64)> {
+    (200.0..1000.0f64, 50e3..500e3f64)
+}
+
+proptest! {
+    #![proptest_config(ProptestConfig::with_cases(2000))]
+
+    #[test]
+    fn saturation_pressure_strictly_increases(t in 180.0..646.0f64, dt in 1e-3..1.0f64) {
+        prop_assert!(humid_air::psat(t + dt) > humid_air::psat(t));
+    }
+
+    #[test]
+    fn dew_point_never_exceeds_dry_bulb(t in 240.0..360.0f64, rh in 0.0..=1.0f64, p in 60e3..200e3f64) {
+        if let Ok(m) = humid_air::moisture(t, p, Humidity::Relative(rh)) {
+            prop_assert!(m.dew_point <= t + 1e-9, "dew {} > {}", m.dew_point, t);
+        }
+    }
+
+    #[test]
+    fn prandtl_is_exactly_mu_cp_over_k((t, p) in air_state(), rh in 0.0..=1.0f64) {
+        for f in [Fluid::DryAir, Fluid::HumidAir(Humidity::Relative(rh))] {
+            if let Ok(s) = f.at(t, p) {
+                prop_assert_eq!(s.pr, s.mu * s.cp / s.k);
+                prop_assert!(s.rho > 0.0 && s.mu > 0.0 && s.k > 0.0 && s.cp > 0.0);
+            }
+        }
+    }
+
+    #[test]
+    fn air_properties_are_continuous((t, p) in air_state()) {
+        let a = air::properties(t, p).unwrap();
+        let b = air::properties(t * (1.0 + 1e-9), p).unwrap();
+        for (x, y) in [(a.mu, b.mu), (a.k, b.k), (a.cp, b.cp), (a.rho, b.rho)] {
+            prop_assert!(((x - y) / x).abs() < 1e-7);
+        }
+    }
+
+    #[test]
+    fn liquid_water_is_finite_below_boiling(t in 273.15..372.0f64, p in 101_325.0..10e6f64) {
+        let s = water::liquid(t, p).unwrap();
+        prop_assert!(s.rho > 900.0 && s.rho < 1010.0 && s.mu > 0.0 && s.k > 0.5 && s.cp > 4000.0);
+        prop_assert_eq!(s.pr, s.mu * s.cp / s.k);
+    }
+
+    #[test]
+    fn glycol_is_finite_and_continuous_above_freezing(x in 0.0..=0.6f64, dt in 0.5..90.0f64, eg in any::<bool>()) {
+        let g = if eg { Glycol::Ethylene } else { Glycol::Propylene };
+        let t = glycol::freezing_point(g, x) + dt;
+        if t <= 373.15 {
+            let a = glycol::properties(g, x, t, 101_325.0).unwrap();
+            let b = glycol::properties(g, x, t + 1e-7, 101_325.0).unwrap();
+            prop_assert!(a.rho > 900.0 && a.mu > 0.0 && a.k > 0.0 && a.cp > 2000.0);
+            prop_assert!(((a.mu - b.mu) / a.mu).abs() < 1e-6);
+        }
+    }
+}
+
+/// The over-ice and over-water saturation formulas meet at the triple point within 0.1 %, so the
+/// humid-air properties do not jump there.
+#[test]
+fn humid_air_is_continuous_across_the_triple_point() {
+    let below =
+        humid_air::properties(water::T_TRIPLE - 1e-6, 101_325.0, Humidity::Relative(1.0)).unwrap();
+    let above =
+        humid_air::properties(water::T_TRIPLE + 1e-6, 101_325.0, Humidity::Relative(1.0)).unwrap();
+    for (x, y) in [
+        (below.mu, above.mu),
+        (below.k, above.k),
+        (below.rho, above.rho),
+        (below.cp, above.cp),
+    ] {
+        assert!(((x - y) / x).abs() < 1e-4, "{x} vs {y}");
+    }
+}
+
+/// Correlation domain: Re over 0.1–10⁷ (the plot's range and beyond), Pr over gases to oils.
+fn groups() -> impl Strategy<Value = (f64, f64, f64)> {
+    (-1.0..7.0f64, 0.6..500.0f64, 1.0001..1.5f64)
+}
+
+/// Field domain for a body in a stream: every shape, both axes, any wind, air, water or glycol.
+fn body() -> impl Strategy<Value = leeward::engine::body::Body> {
+    use leeward::engine::body::{Axis, Body, Shape, Wind};
+    (
+        0..7usize,
+        any::<bool>(),
+        0..3usize,
+        (1e-4..3.0f64, 0.05..50.0f64, 0.0..40.0f64),
+        (250.0..330.0f64, -60.0..200.0f64),
+        0..3usize,
+    )
+        .prop_filter_map(
+            "ΔT = 0, or a liquid out of its phase",
+            |(s, vert, w, (d, l, u), (t_inf, dt), f)| {
+                let fluid = [
+                    Fluid::DryAir,
+                    Fluid::Water,
+                    Fluid::Glycol(Glycol::Ethylene, 0.3),
+                ][f];
+                let t_s = t_inf + dt;
+                if dt.abs() < 1e-3 || (f > 0 && (t_inf < 280.0 || !(280.0..=365.0).contains(&t_s)))
+                {
+                    return None;
+                }
+                Some(Body {
+                    shape: Shape::ALL[s],
+                    axis: if vert {
+                        Axis::Vertical
+                    } else {
+                        Axis::Horizontal
+                    },
+                    wind: [Wind::Horizontal, Wind::Up, Wind::Down][w],
+                    d,
+                    length: l,
+                    speed: u,
+                    t_inf,
+                    t_s,
+                    p: 101_325.0,
+                    fluid,
+                })
+            },
+        )
+}
+
+proptest! {
+    #![proptest_config(ProptestConfig::with_cases(3000))]
+
+    /// Nu rises with Re for every forced correlation of every shape; tables of constants by band
+    /// may step down at a band edge, by at most 3 % (Zukauskas at Re = 40: 2 %).
+    #[test]
+    fn nusselt_increases_with_reynolds((log_re, pr, step) in groups()) {
+        use leeward::engine::body::Shape;
+        use leeward::engine::correlations::Groups;
+        let re = 10f64.powf(log_re);
+        for shape in Shape::ALL {
+            for c in shape.forced() {
+                let lo = (c.nu)(&Groups::uniform(re, pr, pr < 2.0)).value;
+                let hi = (c.nu)(&Groups::uniform(re * step, pr, pr < 2.0)).value;
+                prop_assert!(hi > 0.97 * lo, "{} falls from Re {} to {}", c.name, re, re * step);
+                let banded = c.name.contains("Hilpert") || c.name.contains("Zukauskas") || c.name.contains("Jakob");
+                if !banded {
+                    prop_assert!(hi > lo, "{} not increasing at Re {}", c.name, re);
+                }
+            }
+        }
+    }
+
+    /// h is finite and positive wherever the inputs are physical (opposing flows that cancel
+    /// exactly are the one refusal, and they name themselves).
+    #[test]
+    fn h_is_finite_and_positive(b in body()) {
+        match leeward::engine::body::analyse(&b) {
+            Ok(a) => {
+                prop_assert!(a.h.is_finite() && a.h > 0.0, "{:?}: h = {}", b, a.h);
+                for e in &a.forced {
+                    prop_assert!(e.h.is_finite() && e.h > 0.0 || b.speed == 0.0, "{}: {}", e.name, e.h);
+                }
+            }
+            Err(e) => prop_assert!(e.to_string().contains("opposing"), "{:?}: {}", b, e),
+        }
+    }
+}
