@@ -66,9 +66,20 @@ pub fn blend(
     direction: Direction,
 ) -> (f64, Option<Flag>) {
     let (a, b) = (forced.max(0.0), natural.max(0.0));
+    // n is 3 or 4: integer powers and roots, exact and cheaper than powf.
+    let pow = |x: f64| match n as u32 {
+        4 if n == 4.0 => (x * x) * (x * x),
+        3 if n == 3.0 => x * x * x,
+        _ => x.powf(n),
+    };
+    let root = |x: f64| match n as u32 {
+        4 if n == 4.0 => x.sqrt().sqrt(),
+        3 if n == 3.0 => x.cbrt(),
+        _ => x.powf(1.0 / n),
+    };
     let sum = match direction {
-        Direction::Opposing => (a.powf(n) - b.powf(n)).abs(),
-        _ => a.powf(n) + b.powf(n),
+        Direction::Opposing => (pow(a) - pow(b)).abs(),
+        _ => pow(a) + pow(b),
     };
     let flag =
         (direction == Direction::Opposing && b > 0.0 && a / b >= 0.5 && a / b < 2.0).then(|| {
@@ -79,7 +90,7 @@ pub fn blend(
                 value: a / b,
             }
         });
-    (floor + sum.powf(1.0 / n), flag)
+    (floor + root(sum), flag)
 }
 
 #[cfg(test)]

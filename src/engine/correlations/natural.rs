@@ -35,7 +35,7 @@ pub const CHURCHILL_CHU_CYLINDER_RA: Range = Range {
 /// Nu_D = {0.60 + 0.387·Ra_D^⅙ / [1 + (0.559/Pr)^(9/16)]^(8/27)}², 10⁻⁵ ≤ Ra_D ≤ 10¹².
 pub fn horizontal_cylinder(ra: f64, pr: f64) -> Flagged<f64> {
     let f = (1.0 + (0.559 / pr).powf(9.0 / 16.0)).powf(8.0 / 27.0);
-    let root = 0.60 + 0.387 * ra.powf(1.0 / 6.0) / f;
+    let root = 0.60 + 0.387 * ra.sqrt().cbrt() / f;
     let mut out = Flagged::new(root * root);
     out.check(CHURCHILL_CHU_CYLINDER, &CHURCHILL_CHU_CYLINDER_RA, ra);
     out
@@ -83,7 +83,7 @@ pub const CHURCHILL_CHU_PLATE_RA: Range = Range {
 /// Nu_L = {0.825 + 0.387·Ra_L^⅙ / [1 + (0.492/Pr)^(9/16)]^(8/27)}², on the height L.
 pub fn vertical_plate(ra: f64, pr: f64) -> Flagged<f64> {
     let f = (1.0 + (0.492 / pr).powf(9.0 / 16.0)).powf(8.0 / 27.0);
-    let root = 0.825 + 0.387 * ra.powf(1.0 / 6.0) / f;
+    let root = 0.825 + 0.387 * ra.sqrt().cbrt() / f;
     let mut out = Flagged::new(root * root);
     out.check(CHURCHILL_CHU_PLATE, &CHURCHILL_CHU_PLATE_RA, ra);
     out

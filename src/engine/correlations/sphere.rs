@@ -34,9 +34,9 @@ pub const WHITAKER_MU: Range = Range {
 /// stream, μs at the surface. Fitted on 3.5 ≤ Re ≤ 7.6×10⁴, 0.71 ≤ Pr ≤ 380, 1 ≤ μ/μs ≤ 3.2.
 pub fn whitaker(g: &Groups) -> Flagged<f64> {
     let nu = 2.0
-        + (0.4 * g.re.sqrt() + 0.06 * g.re.powf(2.0 / 3.0))
+        + (0.4 * g.re.sqrt() + 0.06 * g.re.cbrt().powi(2))
             * g.pr.powf(0.4)
-            * g.mu_ratio.powf(0.25);
+            * g.mu_ratio.sqrt().sqrt();
     let mut out = Flagged::new(nu);
     out.check(WHITAKER, &WHITAKER_RE, g.re);
     out.check(WHITAKER, &WHITAKER_PR, g.pr);
