@@ -9,8 +9,12 @@ pub mod body;
 pub mod chart;
 pub mod correlations;
 pub mod error;
+pub mod heatloss;
+pub mod job;
+pub mod layers;
 pub mod props;
 pub mod scenario;
+pub mod solve;
 pub mod units;
 pub mod validity;
 

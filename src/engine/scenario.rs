@@ -8,6 +8,10 @@ use crate::engine::atmosphere;
 use crate::engine::body::{self, Analysis, Body};
 pub use crate::engine::body::{Axis, Shape, Wind};
 use crate::engine::error::{finite_result, EngineError};
+use crate::engine::heatloss::{Job, SIGMA};
+use crate::engine::job::Targets;
+pub use crate::engine::job::{JobResult, Verdict, WallMaterial};
+use crate::engine::layers::{Conductivity, Construction, Geometry, Layer};
 use crate::engine::props::{Fluid, Glycol, Humidity, Properties, UserFluid};
 use crate::engine::units::{self, format_sig, Dim, System, Unit};
 use crate::engine::validity::Flag;
@@ -77,6 +81,13 @@ pub enum HumidityInput {
     DewPoint,
 }
 
+/// Whether the surface temperature is typed or solved from the process inside.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum SurfaceMode {
+    Given,
+    Solved,
+}
+
 /// The inputs, SI: lengths m, speed m/s, temperatures K, pressure Pa, elevation m, fractions 0–1,
 /// user-fluid properties in SI.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -103,6 +114,31 @@ pub struct Scenario {
     pub user_k: f64,
     pub user_cp: f64,
     pub user_beta: f64,
+    pub surface_mode: SurfaceMode,
+    pub wall: WallMaterial,
+    /// Insulation layers over the wall, 0–3.
+    pub layer_count: usize,
+    pub process_temp: f64,
+    /// Inside film coefficient, W/(m²·K); 0: not limiting.
+    pub h_inside: f64,
+    pub wall_thickness: f64,
+    pub wall_k: f64,
+    pub layer_t: [f64; 3],
+    /// Each layer's conductivity at the data sheet's mean temperatures A and B.
+    pub layer_ka: [f64; 3],
+    pub layer_kb: [f64; 3],
+    pub k_temp_a: f64,
+    pub k_temp_b: f64,
+    pub emissivity: f64,
+    pub t_surround: f64,
+    pub touch_limit: f64,
+    pub dew_margin: f64,
+    pub mass_flow: f64,
+    pub process_cp: f64,
+    pub hours: f64,
+    /// Price per joule.
+    pub price: f64,
+    pub efficiency: f64,
 }
 
 /// The demo that opens by default (invented): a bare 2-inch line (60.3 mm outside diameter), a
@@ -131,6 +167,32 @@ pub const DEMO: Scenario = Scenario {
     user_k: 0.13,
     user_cp: 2000.0,
     user_beta: 7e-4,
+    surface_mode: SurfaceMode::Given,
+    wall: WallMaterial::CarbonSteel,
+    layer_count: 1,
+    process_temp: 343.15,
+    h_inside: 0.0,
+    // 2-inch schedule 40 wall (ASME B36.10M, from memory).
+    wall_thickness: 0.00391,
+    wall_k: 45.0,
+    // An invented mineral-wool-like layer for the demo: 40 mm, k 0.036 at 10 °C, 0.045 at 100 °C.
+    layer_t: [0.04, 0.02, 0.02],
+    layer_ka: [0.036, 0.036, 0.036],
+    layer_kb: [0.045, 0.045, 0.045],
+    k_temp_a: 283.15,
+    k_temp_b: 373.15,
+    // Painted or oxidised steel (common practice).
+    emissivity: 0.9,
+    t_surround: 278.15,
+    // 60 °C: common practice for a short touch; local codes govern.
+    touch_limit: 333.15,
+    dew_margin: 2.0,
+    mass_flow: 0.0,
+    process_cp: 4180.0,
+    hours: 5000.0,
+    // 0.06 per kWh (invented for the demo).
+    price: 0.06 / 3.6e6,
+    efficiency: 0.8,
 };
 
 pub const DEMO_TITLE: &str = "Demo: a bare 2-inch line on a windy roof";
@@ -153,6 +215,30 @@ pub enum Field {
     UserK,
     UserCp,
     UserBeta,
+    ProcessTemp,
+    HInside,
+    WallThickness,
+    WallK,
+    Emissivity,
+    Surround,
+    Layer1T,
+    Layer1Ka,
+    Layer1Kb,
+    Layer2T,
+    Layer2Ka,
+    Layer2Kb,
+    Layer3T,
+    Layer3Ka,
+    Layer3Kb,
+    KTempA,
+    KTempB,
+    TouchLimit,
+    DewMargin,
+    MassFlow,
+    ProcessCp,
+    Hours,
+    Price,
+    Efficiency,
 }
 
 /// The group a field is shown in.
@@ -161,6 +247,8 @@ pub enum Group {
     Body,
     Stream,
     Surface,
+    Layers,
+    Job,
 }
 
 /// An input's label, dimension, link key and hard limits. The limits are where the computation
@@ -202,142 +290,47 @@ const fn f(
     }
 }
 
-pub const FIELDS: [FieldSpec; 15] = [
-    f(
-        Field::Diameter,
-        Group::Body,
-        "D",
-        "Size D",
-        Dim::Length,
-        (0.0, true, 100.0),
-        "as drawn: the width across the stream",
-    ),
-    f(
-        Field::Length,
-        Group::Body,
-        "L",
-        "Length",
-        Dim::Length,
-        (0.0, true, 10_000.0),
-        "along the axis; the height when upright",
-    ),
-    f(
-        Field::Speed,
-        Group::Stream,
-        "U",
-        "Stream speed",
-        Dim::Speed,
-        (0.0, false, 300.0),
-        "across the axis; 0 for still air",
-    ),
-    f(
-        Field::FluidTemp,
-        Group::Stream,
-        "Ta",
-        "Stream temperature",
-        Dim::Temperature,
-        (0.0, true, 3000.0),
-        "of the approaching fluid",
-    ),
-    f(
-        Field::Pressure,
-        Group::Stream,
-        "p",
-        "Pressure",
-        Dim::Pressure,
-        (0.0, true, 100e6),
-        "absolute, at the site",
-    ),
-    f(
-        Field::Elevation,
-        Group::Stream,
-        "z",
-        "Site elevation",
-        Dim::Elevation,
-        (-500.0, false, 11_000.0),
-        "above sea level; standard atmosphere",
-    ),
-    f(
-        Field::RelativeHumidity,
-        Group::Stream,
-        "rh",
-        "Relative humidity",
-        Dim::Fraction,
-        (0.0, false, 1.0),
-        "to water above 0 °C, to ice below",
-    ),
-    f(
-        Field::DewPoint,
-        Group::Stream,
-        "td",
-        "Dew point",
-        Dim::Temperature,
-        (0.0, true, 3000.0),
-        "frost point below 0 °C",
-    ),
-    f(
-        Field::GlycolFraction,
-        Group::Stream,
-        "xg",
-        "Glycol content",
-        Dim::Fraction,
-        (0.0, false, 0.6),
-        "by mass, 0–60 %",
-    ),
-    f(
-        Field::UserRho,
-        Group::Stream,
-        "ur",
-        "Density",
-        Dim::Density,
-        (0.0, true, 1e5),
-        "of your fluid",
-    ),
-    f(
-        Field::UserMu,
-        Group::Stream,
-        "um",
-        "Viscosity",
-        Dim::DynamicViscosity,
-        (0.0, true, 1e3),
-        "dynamic, of your fluid",
-    ),
-    f(
-        Field::UserK,
-        Group::Stream,
-        "uk",
-        "Thermal conductivity",
-        Dim::ThermalConductivity,
-        (0.0, true, 1e4),
-        "of your fluid",
-    ),
-    f(
-        Field::UserCp,
-        Group::Stream,
-        "uc",
-        "Heat capacity",
-        Dim::SpecificHeat,
-        (0.0, true, 1e6),
-        "isobaric, of your fluid",
-    ),
-    f(
-        Field::UserBeta,
-        Group::Stream,
-        "ub",
-        "Expansion coefficient β",
-        Dim::ExpansionCoefficient,
-        (0.0, false, 1.0),
-        "volumetric; 0 if unknown",
-    ),
-    f(
-        Field::SurfaceTemp,
-        Group::Surface,
-        "Ts",
-        "Surface temperature",
-        Dim::Temperature,
-        (0.0, true, 3000.0),
-        "of the outer surface",
-    ),
+#[rustfmt::skip]
+pub const FIELDS: [FieldSpec; 39] = [
+    f(Field::Diameter, Group::Body, "D", "Size D", Dim::Length, (0.0, true, 100.0), "as drawn: the width across the stream (bare outside diameter of a pipe)"),
+    f(Field::Length, Group::Body, "L", "Length", Dim::RunLength, (0.0, true, 10_000.0), "along the axis; the height when upright"),
+    f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air"),
+    f(Field::FluidTemp, Group::Stream, "Ta", "Stream temperature", Dim::Temperature, (0.0, true, 3000.0), "of the approaching fluid"),
+    f(Field::Pressure, Group::Stream, "p", "Pressure", Dim::Pressure, (0.0, true, 100e6), "absolute, at the site"),
+    f(Field::Elevation, Group::Stream, "z", "Site elevation", Dim::Elevation, (-500.0, false, 11_000.0), "above sea level; standard atmosphere"),
+    f(Field::RelativeHumidity, Group::Stream, "rh", "Relative humidity", Dim::Fraction, (0.0, false, 1.0), "to water above 0 °C, to ice below"),
+    f(Field::DewPoint, Group::Stream, "td", "Dew point", Dim::Temperature, (0.0, true, 3000.0), "frost point below 0 °C"),
+    f(Field::GlycolFraction, Group::Stream, "xg", "Glycol content", Dim::Fraction, (0.0, false, 0.6), "by mass, 0–60 %"),
+    f(Field::UserRho, Group::Stream, "ur", "Density", Dim::Density, (0.0, true, 1e5), "of your fluid"),
+    f(Field::UserMu, Group::Stream, "um", "Viscosity", Dim::DynamicViscosity, (0.0, true, 1e3), "dynamic, of your fluid"),
+    f(Field::UserK, Group::Stream, "uk", "Thermal conductivity", Dim::ThermalConductivity, (0.0, true, 1e4), "of your fluid"),
+    f(Field::UserCp, Group::Stream, "uc", "Heat capacity", Dim::SpecificHeat, (0.0, true, 1e6), "isobaric, of your fluid"),
+    f(Field::UserBeta, Group::Stream, "ub", "Expansion coefficient β", Dim::ExpansionCoefficient, (0.0, false, 1.0), "volumetric; 0 if unknown"),
+    f(Field::SurfaceTemp, Group::Surface, "Ts", "Surface temperature", Dim::Temperature, (0.0, true, 3000.0), "of the outer surface"),
+    f(Field::ProcessTemp, Group::Surface, "Tp", "Process temperature", Dim::Temperature, (0.0, true, 3000.0), "of the fluid inside"),
+    f(Field::HInside, Group::Surface, "hi", "Inside film coefficient", Dim::HeatTransferCoefficient, (0.0, false, 1e6), "0 if the bore sits at the process temperature"),
+    f(Field::WallThickness, Group::Surface, "tw", "Wall thickness", Dim::Length, (0.0, false, 1.0), "of the pipe or vessel"),
+    f(Field::WallK, Group::Surface, "kw", "Wall conductivity", Dim::ThermalConductivity, (0.0, true, 1e4), "of your wall material"),
+    f(Field::Emissivity, Group::Surface, "e", "Emissivity", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 painted or oxidised, 0.1 bright aluminium (common practice)"),
+    f(Field::Surround, Group::Surface, "Tr", "Surroundings temperature", Dim::Temperature, (0.0, true, 3000.0), "what the surface sees (sky, walls); the stream's if unsure"),
+    f(Field::Layer1T, Group::Layers, "t1", "Layer 1 thickness", Dim::Length, (0.0, false, 2.0), "innermost insulation"),
+    f(Field::Layer1Ka, Group::Layers, "ka1", "Layer 1 k at mean temperature A", Dim::ThermalConductivity, (0.0, true, 100.0), "from the data sheet"),
+    f(Field::Layer1Kb, Group::Layers, "kb1", "Layer 1 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k"),
+    f(Field::Layer2T, Group::Layers, "t2", "Layer 2 thickness", Dim::Length, (0.0, false, 2.0), "over layer 1"),
+    f(Field::Layer2Ka, Group::Layers, "ka2", "Layer 2 k at mean temperature A", Dim::ThermalConductivity, (0.0, true, 100.0), "from the data sheet"),
+    f(Field::Layer2Kb, Group::Layers, "kb2", "Layer 2 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k"),
+    f(Field::Layer3T, Group::Layers, "t3", "Layer 3 thickness", Dim::Length, (0.0, false, 2.0), "outermost"),
+    f(Field::Layer3Ka, Group::Layers, "ka3", "Layer 3 k at mean temperature A", Dim::ThermalConductivity, (0.0, true, 100.0), "from the data sheet"),
+    f(Field::Layer3Kb, Group::Layers, "kb3", "Layer 3 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k"),
+    f(Field::KTempA, Group::Layers, "Tka", "Mean temperature A", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's first k"),
+    f(Field::KTempB, Group::Layers, "Tkb", "Mean temperature B", Dim::Temperature, (0.0, true, 3000.0), "of its second k"),
+    f(Field::TouchLimit, Group::Job, "Tl", "Touch limit", Dim::Temperature, (0.0, true, 3000.0), "60 °C is common practice; local codes govern"),
+    f(Field::DewMargin, Group::Job, "dm", "Margin above the dew point", Dim::TemperatureDifference, (0.0, false, 50.0), "for cold surfaces in humid air"),
+    f(Field::MassFlow, Group::Job, "mf", "Flow through the pipe", Dim::MassFlow, (0.0, false, 1e4), "0 for still water (then the freezing times)"),
+    f(Field::ProcessCp, Group::Job, "cpp", "Heat capacity of the process fluid", Dim::SpecificHeat, (0.0, true, 1e6), "about 4180 J/(kg·K) for water"),
+    f(Field::Hours, Group::Job, "hy", "Operating hours", Dim::HoursPerYear, (0.0, false, 8784.0), "per year"),
+    f(Field::Price, Group::Job, "pe", "Energy price", Dim::EnergyPrice, (0.0, false, 1e-4), "of the fuel or power that makes up the loss"),
+    f(Field::Efficiency, Group::Job, "ef", "Heater or boiler efficiency", Dim::Fraction, (0.0, true, 1.0), "share of that energy that becomes heat"),
 ];
 
 pub fn spec(field: Field) -> &'static FieldSpec {
@@ -365,6 +358,30 @@ impl Scenario {
             Field::UserK => self.user_k,
             Field::UserCp => self.user_cp,
             Field::UserBeta => self.user_beta,
+            Field::ProcessTemp => self.process_temp,
+            Field::HInside => self.h_inside,
+            Field::WallThickness => self.wall_thickness,
+            Field::WallK => self.wall_k,
+            Field::Emissivity => self.emissivity,
+            Field::Surround => self.t_surround,
+            Field::Layer1T => self.layer_t[0],
+            Field::Layer1Ka => self.layer_ka[0],
+            Field::Layer1Kb => self.layer_kb[0],
+            Field::Layer2T => self.layer_t[1],
+            Field::Layer2Ka => self.layer_ka[1],
+            Field::Layer2Kb => self.layer_kb[1],
+            Field::Layer3T => self.layer_t[2],
+            Field::Layer3Ka => self.layer_ka[2],
+            Field::Layer3Kb => self.layer_kb[2],
+            Field::KTempA => self.k_temp_a,
+            Field::KTempB => self.k_temp_b,
+            Field::TouchLimit => self.touch_limit,
+            Field::DewMargin => self.dew_margin,
+            Field::MassFlow => self.mass_flow,
+            Field::ProcessCp => self.process_cp,
+            Field::Hours => self.hours,
+            Field::Price => self.price,
+            Field::Efficiency => self.efficiency,
         }
     }
 
@@ -385,6 +402,30 @@ impl Scenario {
             Field::UserK => &mut self.user_k,
             Field::UserCp => &mut self.user_cp,
             Field::UserBeta => &mut self.user_beta,
+            Field::ProcessTemp => &mut self.process_temp,
+            Field::HInside => &mut self.h_inside,
+            Field::WallThickness => &mut self.wall_thickness,
+            Field::WallK => &mut self.wall_k,
+            Field::Emissivity => &mut self.emissivity,
+            Field::Surround => &mut self.t_surround,
+            Field::Layer1T => &mut self.layer_t[0],
+            Field::Layer1Ka => &mut self.layer_ka[0],
+            Field::Layer1Kb => &mut self.layer_kb[0],
+            Field::Layer2T => &mut self.layer_t[1],
+            Field::Layer2Ka => &mut self.layer_ka[1],
+            Field::Layer2Kb => &mut self.layer_kb[1],
+            Field::Layer3T => &mut self.layer_t[2],
+            Field::Layer3Ka => &mut self.layer_ka[2],
+            Field::Layer3Kb => &mut self.layer_kb[2],
+            Field::KTempA => &mut self.k_temp_a,
+            Field::KTempB => &mut self.k_temp_b,
+            Field::TouchLimit => &mut self.touch_limit,
+            Field::DewMargin => &mut self.dew_margin,
+            Field::MassFlow => &mut self.mass_flow,
+            Field::ProcessCp => &mut self.process_cp,
+            Field::Hours => &mut self.hours,
+            Field::Price => &mut self.price,
+            Field::Efficiency => &mut self.efficiency,
         };
         *slot = v;
     }
@@ -408,6 +449,19 @@ impl Scenario {
             Field::UserRho | Field::UserMu | Field::UserK | Field::UserCp | Field::UserBeta => {
                 self.fluid == K::User
             }
+            Field::SurfaceTemp => !self.solved(),
+            Field::ProcessTemp | Field::HInside | Field::WallThickness => self.solved(),
+            Field::WallK => self.solved() && self.wall == WallMaterial::User,
+            Field::Layer1T | Field::Layer1Ka | Field::Layer1Kb | Field::KTempA | Field::KTempB => {
+                self.solved() && self.layer_count >= 1
+            }
+            Field::Layer2T | Field::Layer2Ka | Field::Layer2Kb => {
+                self.solved() && self.layer_count >= 2
+            }
+            Field::Layer3T | Field::Layer3Ka | Field::Layer3Kb => {
+                self.solved() && self.layer_count >= 3
+            }
+            Field::MassFlow | Field::ProcessCp => self.solved() && self.shape == Shape::Cylinder,
             _ => true,
         }
     }
@@ -417,6 +471,53 @@ impl Scenario {
         match self.pressure_input {
             PressureInput::Absolute => self.pressure,
             PressureInput::Elevation => atmosphere::pressure_at(self.elevation),
+        }
+    }
+
+    /// Whether the surface temperature is solved from the process inside (pipes and vessels only).
+    pub fn solved(&self) -> bool {
+        self.surface_mode == SurfaceMode::Solved
+            && matches!(self.shape, Shape::Cylinder | Shape::Sphere)
+    }
+
+    /// Conductivity of insulation layer `i` as k(θ) through the two data-sheet points.
+    pub fn layer_conductivity(&self, i: usize) -> Conductivity {
+        let (ta, tb) = (self.k_temp_a - 273.15, self.k_temp_b - 273.15);
+        let (ka, kb) = (self.layer_ka[i], self.layer_kb[i]);
+        let slope = if (tb - ta).abs() > 1e-9 {
+            (kb - ka) / (tb - ta)
+        } else {
+            0.0
+        };
+        Conductivity {
+            a: ka - slope * ta,
+            b: slope,
+            c: 0.0,
+        }
+    }
+
+    /// The construction from the bore outward: the wall, then the insulation layers.
+    pub fn construction(&self) -> Construction {
+        let geometry = if self.shape == Shape::Sphere {
+            Geometry::Sphere
+        } else {
+            Geometry::Cylinder
+        };
+        let k_wall = self.wall.properties().map(|p| p.0).unwrap_or(self.wall_k);
+        let mut layers = vec![Layer {
+            thickness: self.wall_thickness,
+            k: Conductivity::constant(k_wall),
+        }];
+        for i in 0..self.layer_count.min(3) {
+            layers.push(Layer {
+                thickness: self.layer_t[i],
+                k: self.layer_conductivity(i),
+            });
+        }
+        Construction {
+            geometry,
+            r_in: self.diameter / 2.0 - self.wall_thickness,
+            layers,
         }
     }
 
@@ -494,6 +595,10 @@ pub fn error_field(e: &EngineError) -> Option<Field> {
         }
         EngineError::Undefined { quantity, .. } => match *quantity {
             "expansion coefficient β" => Some(Field::UserBeta),
+            "bore radius" => Some(Field::WallThickness),
+            "layer conductivity" => Some(Field::Layer1Kb),
+            "mean temperature B" => Some(Field::KTempB),
+            "emissivity" => Some(Field::Emissivity),
             "relative humidity" | "vapour pressure" => Some(Field::RelativeHumidity),
             "dew point" => Some(Field::DewPoint),
             "glycol concentration" => Some(Field::GlycolFraction),
@@ -534,10 +639,27 @@ pub struct Outcome {
     pub nusselt: f64,
     /// The answer: mean convective heat-transfer coefficient, W/(m²·K).
     pub h: f64,
-    /// Heat flow per metre of length, W/m (positive from surface to fluid); none for a sphere.
+    /// Heat flow per metre of length, convection plus radiation, W/m (positive from the surface
+    /// outward); none for a sphere.
     pub q_per_length: Option<f64>,
     /// Heat flow from the whole body (over the length L for a prism), W.
     pub q_total: f64,
+    /// The convective and radiative parts of `q_total`, W.
+    pub q_conv_total: f64,
+    pub q_rad_total: f64,
+    /// Linearised radiation coefficient εσ(Ts² + Tsur²)(Ts + Tsur), W/(m²·K).
+    pub h_rad: f64,
+    /// Surface temperature: as typed, or solved from the process inside.
+    pub surface_temp: f64,
+    /// Outer diameter the stream sees (over the insulation when solved), m.
+    pub outer_d: f64,
+    /// The solved job (process inside, layers) when the surface temperature is worked out.
+    pub job: Option<JobResult>,
+    /// Verdict cards: touch, condensation, freezing, the run, insulated against bare.
+    pub verdicts: Vec<Verdict>,
+    /// Energy bought per year to make up the loss, J/yr, and its cost per year.
+    pub annual_energy: f64,
+    pub annual_cost: f64,
     /// The recommended forced correlation's name.
     pub method: &'static str,
     pub regime: &'static str,
@@ -559,7 +681,7 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
             why: "outside the physical limits of the input",
         })?;
     }
-    if s.surface_temp == s.fluid_temp {
+    if !s.solved() && s.surface_temp == s.fluid_temp {
         return Err(EngineError::NoTemperatureDifference {
             value: s.fluid_temp,
             unit: "K",
@@ -577,7 +699,7 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
         }
         _ => None,
     };
-    let a = body::analyse(&Body {
+    let stream = Body {
         shape: s.shape,
         axis: s.axis,
         wind: if s.uses_wind() {
@@ -592,25 +714,76 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
         t_s: s.surface_temp,
         p,
         fluid,
-    })?;
+    };
+    let targets = Targets {
+        touch_limit: s.touch_limit,
+        dew_point,
+        dew_margin: s.dew_margin,
+        hours: s.hours,
+        price: s.price,
+        efficiency: s.efficiency,
+        mass_flow: s.mass_flow,
+        process_cp: s.process_cp,
+        wall_heat_capacity: s.wall.properties().map(|(_, rho, cp)| {
+            let r1 = s.diameter / 2.0;
+            let r0 = r1 - s.wall_thickness;
+            rho * cp * std::f64::consts::PI * (r1 * r1 - r0 * r0)
+        }),
+    };
+    let (a, ts, outer_d, job_result) = if s.solved() {
+        if s.layer_count > 0 && (s.k_temp_a - s.k_temp_b).abs() < 1e-9 && s.layer_ka != s.layer_kb {
+            return Err(EngineError::Undefined {
+                quantity: "mean temperature B",
+                value: s.k_temp_b,
+                unit: "K",
+                why: "the two data-sheet mean temperatures must differ when the two k values do",
+            });
+        }
+        let job = Job {
+            stream,
+            process_temp: s.process_temp,
+            h_inside: (s.h_inside > 0.0).then_some(s.h_inside),
+            construction: s.construction(),
+            emissivity: s.emissivity,
+            t_surround: s.t_surround,
+        };
+        let r = crate::engine::job::evaluate(&job, &targets, s.layer_count)?;
+        let a = r
+            .solution
+            .loss
+            .analysis
+            .clone()
+            .ok_or(EngineError::NoTemperatureDifference {
+                value: s.fluid_temp,
+                unit: "K",
+            })?;
+        (a, r.solution.t_surface, r.solution.outer_d, Some(r))
+    } else {
+        (body::analyse(&stream)?, s.surface_temp, s.diameter, None)
+    };
     let film = a.film.t;
     let rec = a.recommended().clone();
     let h = a.h;
-    let dt = s.surface_temp - s.fluid_temp;
-    let (q_per_length, q_total) = match s.shape.perimeter_over_d() {
-        Some(k) => {
-            let q = finite_result("heat flow per length", h * k * s.diameter * dt)?;
-            (Some(q), finite_result("heat flow", q * s.length)?)
-        }
-        None => (
-            None,
-            finite_result(
-                "heat flow",
-                h * std::f64::consts::PI * s.diameter * s.diameter * dt,
-            )?,
-        ),
+    let dt = ts - s.fluid_temp;
+    let h_rad =
+        s.emissivity * SIGMA * (ts * ts + s.t_surround * s.t_surround) * (ts + s.t_surround);
+    let rad_flux = s.emissivity * SIGMA * (ts.powi(4) - s.t_surround.powi(4));
+    let (area_unit, run) = match s.shape.perimeter_over_d() {
+        Some(k) => (k * outer_d, s.length),
+        None => (std::f64::consts::PI * outer_d * outer_d, 1.0),
     };
-    let nusselt = finite_result("Nusselt number", h * s.diameter / a.film.k)?;
+    let q_conv_unit = finite_result("convective heat flow", h * area_unit * dt)?;
+    let q_rad_unit = finite_result("radiative heat flow", area_unit * rad_flux)?;
+    let q_unit = q_conv_unit + q_rad_unit;
+    let q_per_length = s.shape.perimeter_over_d().map(|_| q_unit);
+    let q_total = finite_result("heat flow", q_unit * run)?;
+    let annual_energy = q_total.abs() * s.hours * 3600.0 / s.efficiency;
+    let annual_cost = annual_energy * s.price;
+    let verdicts = match &job_result {
+        Some(r) => r.verdicts.clone(),
+        None => given_verdicts(s, ts, dew_point),
+    };
+    let nusselt = finite_result("Nusselt number", h * outer_d / a.film.k)?;
 
     for props in [&a.film, &a.free, &a.surface] {
         for f in &props.flags {
@@ -625,7 +798,19 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
     }
     flags.extend(a.flags.iter().cloned());
 
-    let working = working(s, &a, p, dew_point, fluid.name(), q_per_length, q_total);
+    let w = WorkingInputs {
+        p,
+        dew_point,
+        fluid: fluid.name(),
+        ts,
+        outer_d,
+        q_conv_unit,
+        q_rad_unit,
+        h_rad,
+        q_total,
+        job: job_result.as_ref(),
+    };
+    let working = working(s, &a, &w);
     let role = |r: &str| -> &'static str {
         match r {
             "film" => "film temperature Tf: Churchill–Bernstein, Hilpert, Ranz–Marshall, Jakob, natural convection",
@@ -659,6 +844,15 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
         h,
         q_per_length,
         q_total,
+        q_conv_total: q_conv_unit * run,
+        q_rad_total: q_rad_unit * run,
+        h_rad,
+        surface_temp: ts,
+        outer_d,
+        job: job_result,
+        verdicts,
+        annual_energy,
+        annual_cost,
         method: rec.name,
         regime: s.shape.regime(rec.groups.re),
         analysis: a,
@@ -667,41 +861,103 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
     })
 }
 
-fn working(
-    s: &Scenario,
-    a: &Analysis,
+struct WorkingInputs<'a> {
     p: f64,
     dew_point: Option<f64>,
-    fluid: &str,
-    q_per_length: Option<f64>,
+    fluid: &'a str,
+    ts: f64,
+    outer_d: f64,
+    q_conv_unit: f64,
+    q_rad_unit: f64,
+    h_rad: f64,
     q_total: f64,
-) -> Vec<Step> {
+    job: Option<&'a JobResult>,
+}
+
+/// Touch and condensation verdicts for a typed surface temperature (no thickness to offer).
+fn given_verdicts(s: &Scenario, ts: f64, dew_point: Option<f64>) -> Vec<Verdict> {
+    use crate::engine::job::{DEW_CAUTION, TOUCH_CAUTION};
+    let mut out = Vec::new();
+    if ts > s.touch_limit {
+        out.push(Verdict {
+            id: "touch",
+            title: "Touch",
+            ok: false,
+            summary: "The surface is above the touch limit. Work out the surface from the process temperature with an insulation layer to see the thickness that meets it.".into(),
+            figures: vec![("surface", ts, Dim::Temperature), ("limit", s.touch_limit, Dim::Temperature)],
+            caution: Some(TOUCH_CAUTION),
+        });
+    }
+    if let Some(td) = dew_point {
+        if ts < td + s.dew_margin {
+            out.push(Verdict {
+                id: "dew",
+                title: "Condensation",
+                ok: false,
+                summary: "The surface is below the dew point plus the margin: it will sweat."
+                    .into(),
+                figures: vec![
+                    ("surface", ts, Dim::Temperature),
+                    ("dew point", td, Dim::Temperature),
+                    ("margin", s.dew_margin, Dim::TemperatureDifference),
+                ],
+                caution: Some(DEW_CAUTION),
+            });
+        }
+    }
+    out
+}
+
+fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step> {
     let g = |v: f64| format_sig(v, 5);
     let rec = a.recommended();
-    let mut w = vec![Step {
+    let mut out = Vec::new();
+    if let Some(j) = w.job {
+        let sol = &j.solution;
+        let temps = sol
+            .interfaces
+            .iter()
+            .map(|t| format!("{} K", g(*t)))
+            .collect::<Vec<_>>()
+            .join(" → ");
+        out.push(Step {
+            title: "Surface temperature (energy balance)",
+            text: format!(
+                "Process {} K inside; conduction through the wall and {} insulation layer(s) (integral-mean k) equals convection plus radiation outside. Solved for the heat flow by bracketed regula falsi (Anderson–Björck) in {} iterations, residual {} W/m (or W); outer diameter {} m. Bore {} K, then {}.",
+                g(s.process_temp),
+                s.layer_count,
+                sol.iterations,
+                format_sig(sol.residual, 2),
+                g(sol.outer_d),
+                g(sol.t_bore),
+                temps
+            ),
+        });
+    }
+    out.push(Step {
         title: "Temperatures",
         text: format!(
             "Free stream T∞ = {} K, surface Ts = {} K, film Tf = (Ts + T∞)/2 = {} K. Each correlation takes its properties where its authors did: {} at the {}.",
             g(s.fluid_temp),
-            g(s.surface_temp),
+            g(w.ts),
             g(a.film.t),
             rec.name,
             rec.reference.describe()
         ),
-    }];
+    });
     if s.pressure_input == PressureInput::Elevation {
-        w.push(Step {
+        out.push(Step {
             title: "Pressure from elevation",
             text: format!(
                 "ISO 2533 standard atmosphere at {} m: p = 101325 Pa × (1 − 0.0065 × {} / 288.15)^5.2559 = {} Pa",
                 g(s.elevation),
                 g(s.elevation),
-                g(p)
+                g(w.p)
             ),
         });
     }
-    if let Some(td) = dew_point {
-        w.push(Step {
+    if let Some(td) = w.dew_point {
+        out.push(Step {
             title: "Moisture",
             text: format!("Dew point of the stream: {} K", g(td)),
         });
@@ -711,10 +967,11 @@ fn working(
         ("Properties at T∞", &a.free),
         ("Properties at Ts", &a.surface),
     ] {
-        w.push(Step {
+        out.push(Step {
             title,
             text: format!(
-                "{fluid} at {} K, {} Pa: ρ = {} kg/m³, μ = {} Pa·s, k = {} W/(m·K), cp = {} J/(kg·K); ν = μ/ρ = {} m²/s, Pr = {}",
+                "{} at {} K, {} Pa: ρ = {} kg/m³, μ = {} Pa·s, k = {} W/(m·K), cp = {} J/(kg·K); ν = μ/ρ = {} m²/s, Pr = {}",
+                w.fluid,
                 g(pr.t),
                 g(pr.p),
                 g(pr.rho),
@@ -731,19 +988,19 @@ fn working(
     } else {
         &a.free
     };
-    w.push(Step {
+    out.push(Step {
         title: "Reynolds and Prandtl numbers",
         text: format!(
             "Re = U·D/ν = {} m/s × {} m / {} m²/s = {}; Pr = {} (at {})",
             g(s.speed),
-            g(s.diameter),
+            g(w.outer_d),
             g(at.nu),
             g(rec.groups.re),
             g(rec.groups.pr),
             rec.reference.short()
         ),
     });
-    w.push(Step {
+    out.push(Step {
         title: "Forced convection (recommended correlation)",
         text: format!(
             "{}: {} = {}; h_F = Nu·k/D = {} × {} W/(m·K) / {} m = {} W/(m²·K)",
@@ -752,13 +1009,13 @@ fn working(
             g(rec.nu),
             g(rec.nu),
             g(rec.k),
-            g(s.diameter),
+            g(w.outer_d),
             g(rec.h)
         ),
     });
     match &a.natural {
         Some(n) => {
-            w.push(Step {
+            out.push(Step {
                 title: "Natural convection",
                 text: format!(
                     "Gr = g·β·|Ts − T∞|·L³/ν² = {} on L = {} m, Ra = Gr·Pr = {}; {}: {} = {}; h_N = {} W/(m²·K)",
@@ -771,7 +1028,7 @@ fn working(
                     g(n.h)
                 ),
             });
-            w.push(Step {
+            out.push(Step {
                 title: "Mixed convection",
                 text: format!(
                     "Stream {}; Churchill's blend with n = {}: h = {} W/(m²·K). {}.",
@@ -782,53 +1039,61 @@ fn working(
                 ),
             });
         }
-        None => w.push(Step {
+        None => out.push(Step {
             title: "Natural convection",
             text: "Not included: the fluid's expansion coefficient β is not given.".into(),
         }),
     }
-    let dt = s.surface_temp - s.fluid_temp;
-    let text = match (q_per_length, s.shape.perimeter_over_d()) {
-        (Some(q), Some(k)) => format!(
-            "q′ = h·P·(Ts − T∞) = {} × {} m × {} K = {} W/m, P = {}·D; over L = {} m: Q = {} W",
+    out.push(Step {
+        title: "Radiation",
+        text: format!(
+            "q_rad = ε·σ·(Ts⁴ − Tsur⁴) per m² with ε = {}, σ = 5.670374419×10⁻⁸ W/(m²·K⁴), Tsur = {} K; linearised h_rad = εσ(Ts² + Tsur²)(Ts + Tsur) = {} W/(m²·K)",
+            g(s.emissivity),
+            g(s.t_surround),
+            g(w.h_rad)
+        ),
+    });
+    let dt = w.ts - s.fluid_temp;
+    let text = match s.shape.perimeter_over_d() {
+        Some(k) => format!(
+            "q′ = h·P·(Ts − T∞) + q′_rad = {} × {} m × {} K + {} W/m = {} W/m, P = {}·D; over L = {} m: Q = {} W",
             g(a.h),
-            g(k * s.diameter),
+            g(k * w.outer_d),
             g(dt),
-            g(q),
+            g(w.q_rad_unit),
+            g(w.q_conv_unit + w.q_rad_unit),
             g(k),
             g(s.length),
-            g(q_total)
+            g(w.q_total)
         ),
-        _ => format!(
-            "Q = h·π·D²·(Ts − T∞) = {} × π × ({} m)² × {} K = {} W",
+        None => format!(
+            "Q = h·π·D²·(Ts − T∞) + Q_rad = {} × π × ({} m)² × {} K + {} W = {} W",
             g(a.h),
-            g(s.diameter),
+            g(w.outer_d),
             g(dt),
-            g(q_total)
+            g(w.q_rad_unit),
+            g(w.q_total)
         ),
     };
-    w.push(Step {
+    out.push(Step {
         title: "Heat flow",
         text,
     });
-    w
+    out
 }
 
-/// Surface temperature above which bare-skin contact can burn (about 45 °C for prolonged contact;
-/// common practice, not a standard's limit).
-pub const HOT_SURFACE: f64 = 318.15;
-
-/// The cautions that apply to this result: hot surface, condensation, freezing. Each defers to
-/// local codes and licensed practice.
+/// The cautions that apply to this result: hot surface (above the touch limit), condensation,
+/// freezing. Each defers to local codes and licensed practice.
 pub fn cautions(s: &Scenario, o: &Outcome) -> Vec<&'static str> {
     let mut out = Vec::new();
-    if s.surface_temp >= HOT_SURFACE {
+    let ts = o.surface_temp;
+    if ts >= s.touch_limit {
         out.push("Hot surface: at this temperature bare skin can be burned on contact. Guard or insulate it and follow the personnel-protection rules of your local codes; verify with a contact thermometer before touching.");
     }
-    if o.dew_point.is_some_and(|td| s.surface_temp <= td) {
+    if o.dew_point.is_some_and(|td| ts <= td) {
         out.push("The surface is at or below the stream's dew point: moisture will condense on it. Condensate wets insulation and corrodes steel; a vapour-tight design is a matter for a qualified designer and local codes.");
     }
-    if s.surface_temp < 273.15 {
+    if ts < 273.15 {
         out.push("The surface is below freezing: frost or ice can form on it, and water inside a line this cold can freeze and burst it. Follow local codes and licensed practice for freeze protection.");
     }
     out
@@ -858,6 +1123,15 @@ pub fn to_fragment(s: &Scenario, system: System) -> String {
         });
     }
     out.push_str(&format!("&f={}", s.fluid.id()));
+    if matches!(s.shape, Shape::Cylinder | Shape::Sphere) {
+        out.push_str(match s.surface_mode {
+            SurfaceMode::Given => "&sm=g",
+            SurfaceMode::Solved => "&sm=x",
+        });
+    }
+    if s.solved() {
+        out.push_str(&format!("&wm={}&nl={}", s.wall.id(), s.layer_count));
+    }
     out.push_str(match s.pressure_input {
         PressureInput::Absolute => "&pm=p",
         PressureInput::Elevation => "&pm=z",
@@ -924,6 +1198,26 @@ pub fn from_fragment(fragment: &str) -> Result<(Scenario, System), String> {
                     _ => return Err("the link names an unknown wind direction".into()),
                 }
             }
+            "sm" => {
+                s.surface_mode = match value {
+                    "g" => SurfaceMode::Given,
+                    "x" => SurfaceMode::Solved,
+                    _ => return Err("the link names an unknown way to give the surface".into()),
+                }
+            }
+            "wm" => {
+                s.wall = WallMaterial::from_id(value)
+                    .ok_or_else(|| "the link names an unknown wall material".to_string())?
+            }
+            "nl" => {
+                s.layer_count = match value {
+                    "0" => 0,
+                    "1" => 1,
+                    "2" => 2,
+                    "3" => 3,
+                    _ => return Err("the link's number of layers must be 0 to 3".into()),
+                }
+            }
             "f" => {
                 s.fluid = FluidKind::from_id(value)
                     .ok_or_else(|| "the link names an unknown fluid".to_string())?
@@ -973,8 +1267,10 @@ mod tests {
         assert!(o.flags.is_empty(), "{:?}", o.flags);
         let q_per_length = o.q_per_length.unwrap();
         assert!(q_per_length > 0.0 && o.h > 0.0);
-        // Energy bookkeeping: q' = h·π·D·ΔT, Q = q'·L.
-        let q = o.h * std::f64::consts::PI * DEMO.diameter * (DEMO.surface_temp - DEMO.fluid_temp);
+        // Energy bookkeeping: q' = h·π·D·ΔT + εσ(Ts⁴ − Tsur⁴)·π·D, Q = q'·L.
+        let pd = std::f64::consts::PI * DEMO.diameter;
+        let q = o.h * pd * (DEMO.surface_temp - DEMO.fluid_temp)
+            + DEMO.emissivity * SIGMA * (DEMO.surface_temp.powi(4) - DEMO.t_surround.powi(4)) * pd;
         assert!((q - q_per_length).abs() <= 1e-12 * q);
         assert!((o.q_total - q * DEMO.length).abs() <= 1e-12 * o.q_total);
         assert!(o.dew_point.unwrap() < DEMO.fluid_temp);
@@ -1026,6 +1322,51 @@ mod tests {
         s.surface_temp = 263.15;
         let o = evaluate(&s).unwrap();
         assert!(o.q_per_length.unwrap() < 0.0 && o.q_total < 0.0 && o.h > 0.0);
+    }
+
+    fn solved_demo() -> Scenario {
+        let mut s = DEMO;
+        s.surface_mode = SurfaceMode::Solved;
+        s
+    }
+
+    #[test]
+    fn solved_surface_closes_the_energy_balance_and_beats_bare() {
+        let s = solved_demo();
+        let o = evaluate(&s).unwrap();
+        let j = o.job.as_ref().unwrap();
+        let sol = &j.solution;
+        assert!((o.q_per_length.unwrap() - sol.q).abs() <= 1e-9 * sol.q);
+        assert!(sol.residual.abs() <= 1e-9 * sol.q.abs());
+        assert!(o.surface_temp < s.process_temp && o.surface_temp > s.fluid_temp);
+        assert!((o.outer_d - (s.diameter + 2.0 * s.layer_t[0])).abs() < 1e-12);
+        assert!(j.bare.as_ref().unwrap().q > sol.q);
+        assert!(o.verdicts.iter().any(|v| v.id == "saving"));
+        // The same line with no layers is the bare answer.
+        let mut b = s;
+        b.layer_count = 0;
+        let ob = evaluate(&b).unwrap();
+        assert!((ob.q_total - j.bare.as_ref().unwrap().q * s.length).abs() < 1e-9 * ob.q_total);
+    }
+
+    #[test]
+    fn mean_temperatures_must_differ_for_a_varying_k() {
+        let mut s = solved_demo();
+        s.k_temp_b = s.k_temp_a;
+        assert!(evaluate(&s).is_err());
+        s.layer_kb = s.layer_ka;
+        assert!(evaluate(&s).is_ok());
+    }
+
+    #[test]
+    fn solved_fragment_round_trips() {
+        let mut s = solved_demo();
+        s.layer_count = 3;
+        s.wall = WallMaterial::User;
+        s.wall_k = 0.4;
+        s.layer_t = [0.01, 0.02, 0.03];
+        let (back, _) = from_fragment(&to_fragment(&s, System::Si)).unwrap();
+        assert_eq!(back, s);
     }
 
     #[test]

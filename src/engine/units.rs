@@ -25,10 +25,27 @@ pub enum Dim {
     Fraction,
     HeatFlow,
     ExpansionCoefficient,
+    /// A run length (m or ft, while diameters and thicknesses are in mm or in).
+    RunLength,
+    /// A dimensionless ratio shown as such (emissivity).
+    Ratio,
+    /// A temperature difference (margins).
+    TemperatureDifference,
+    /// Time spans: freezing, cooling, time constants.
+    Duration,
+    /// Operating hours per year.
+    HoursPerYear,
+    /// Energy price per unit of energy (currency-neutral).
+    EnergyPrice,
+    /// Energy per year.
+    EnergyPerYear,
+    /// Money per year (currency-neutral).
+    MoneyPerYear,
+    MassFlow,
 }
 
 /// Every dimension, in the order the page lists them.
-pub const ALL_DIMS: [Dim; 15] = [
+pub const ALL_DIMS: [Dim; 24] = [
     Dim::Temperature,
     Dim::Length,
     Dim::Speed,
@@ -44,6 +61,15 @@ pub const ALL_DIMS: [Dim; 15] = [
     Dim::Fraction,
     Dim::HeatFlow,
     Dim::ExpansionCoefficient,
+    Dim::RunLength,
+    Dim::Ratio,
+    Dim::TemperatureDifference,
+    Dim::Duration,
+    Dim::HoursPerYear,
+    Dim::EnergyPrice,
+    Dim::EnergyPerYear,
+    Dim::MoneyPerYear,
+    Dim::MassFlow,
 ];
 
 /// A unit system for the global switch.
@@ -148,6 +174,45 @@ pub const UNITS: &[Unit] = &[
     u("Btu/h", "Btu/h", Dim::HeatFlow, BTU_IT / HOUR, 0.0),
     u("1/K", "1/K", Dim::ExpansionCoefficient, 1.0, 0.0),
     u("1/F", "1/°F", Dim::ExpansionCoefficient, 1.0 / RANKINE, 0.0),
+    u("m-run", "m", Dim::RunLength, 1.0, 0.0),
+    u("ft-run", "ft", Dim::RunLength, FT, 0.0),
+    u("ratio", "(0–1)", Dim::Ratio, 1.0, 0.0),
+    u("dK", "K", Dim::TemperatureDifference, 1.0, 0.0),
+    u("dF", "°F", Dim::TemperatureDifference, RANKINE, 0.0),
+    u("s", "s", Dim::Duration, 1.0, 0.0),
+    u("min", "min", Dim::Duration, 60.0, 0.0),
+    u("h", "h", Dim::Duration, HOUR, 0.0),
+    u("h/yr", "h/yr", Dim::HoursPerYear, 1.0, 0.0),
+    u("/J", "per J", Dim::EnergyPrice, 1.0, 0.0),
+    u("/kWh", "per kWh", Dim::EnergyPrice, 1.0 / (1e3 * HOUR), 0.0),
+    u(
+        "/MMBtu",
+        "per MMBtu",
+        Dim::EnergyPrice,
+        1.0 / (1e6 * BTU_IT),
+        0.0,
+    ),
+    u(
+        "/therm",
+        "per therm",
+        Dim::EnergyPrice,
+        1.0 / (1e5 * BTU_IT),
+        0.0,
+    ),
+    u("J/yr", "J/yr", Dim::EnergyPerYear, 1.0, 0.0),
+    u("kWh/yr", "kWh/yr", Dim::EnergyPerYear, 1e3 * HOUR, 0.0),
+    u("MWh/yr", "MWh/yr", Dim::EnergyPerYear, 1e6 * HOUR, 0.0),
+    u(
+        "MMBtu/yr",
+        "MMBtu/yr",
+        Dim::EnergyPerYear,
+        1e6 * BTU_IT,
+        0.0,
+    ),
+    u("/yr", "per yr", Dim::MoneyPerYear, 1.0, 0.0),
+    u("kg/s", "kg/s", Dim::MassFlow, 1.0, 0.0),
+    u("kg/h", "kg/h", Dim::MassFlow, 1.0 / HOUR, 0.0),
+    u("lb/h", "lb/h", Dim::MassFlow, LB / HOUR, 0.0),
 ];
 
 impl Unit {
@@ -201,6 +266,19 @@ pub fn default_unit(dim: Dim, system: System) -> &'static Unit {
         (Dim::HeatFlow, System::Us) => "Btu/h",
         (Dim::ExpansionCoefficient, System::Si) => "1/K",
         (Dim::ExpansionCoefficient, System::Us) => "1/F",
+        (Dim::RunLength, System::Si) => "m-run",
+        (Dim::RunLength, System::Us) => "ft-run",
+        (Dim::Ratio, _) => "ratio",
+        (Dim::TemperatureDifference, System::Si) => "dK",
+        (Dim::TemperatureDifference, System::Us) => "dF",
+        (Dim::Duration, _) => "h",
+        (Dim::HoursPerYear, _) => "h/yr",
+        (Dim::EnergyPrice, _) => "/kWh",
+        (Dim::EnergyPerYear, System::Si) => "kWh/yr",
+        (Dim::EnergyPerYear, System::Us) => "MMBtu/yr",
+        (Dim::MoneyPerYear, _) => "/yr",
+        (Dim::MassFlow, System::Si) => "kg/h",
+        (Dim::MassFlow, System::Us) => "lb/h",
     };
     unit(id).expect("every default unit is in UNITS")
 }
@@ -343,6 +421,20 @@ mod tests {
         assert!(close(unit("km/h").unwrap().to_si(36.0), 10.0, 1e-15));
         assert!(close(unit("Btu/h").unwrap().to_si(1.0), 0.2930711, 1e-6));
         assert!(close(unit("1/F").unwrap().to_si(1.0), 1.8, 1e-15));
+        // 1 MMBtu = 10⁶ Btu_IT = 1.05505585262 GJ; 1 lb/h = 0.45359237/3600 kg/s (NIST SP 811).
+        assert!(close(
+            unit("MMBtu/yr").unwrap().to_si(1.0),
+            1.055_055_852_62e9,
+            1e-15
+        ));
+        assert!(close(
+            unit("lb/h").unwrap().to_si(3600.0),
+            0.453_592_37,
+            1e-15
+        ));
+        assert!(close(unit("dF").unwrap().to_si(9.0), 5.0, 1e-15));
+        // A price per kWh and per J: 0.36 per kWh is 10⁻⁷ per J.
+        assert!(close(unit("/kWh").unwrap().to_si(0.36), 1e-7, 1e-15));
     }
 
     #[test]

@@ -8,7 +8,7 @@ mod shapes;
 
 use crate::engine::scenario::{
     self, Axis, Field, FieldSpec, FluidKind, Group, HumidityInput, Outcome, PressureInput,
-    Scenario, Shape, Wind, FIELDS,
+    Scenario, Shape, SurfaceMode, WallMaterial, Wind, FIELDS,
 };
 use crate::engine::units::{self, format_sig, Dim, System, UnitChoice};
 
@@ -318,6 +318,79 @@ pub fn App() -> impl IntoView {
         }
     };
 
+    let surface_toggle = toggle(
+        "surface-mode",
+        "Surface temperature known",
+        "Work it out from inside",
+        |s| s.surface_mode == SurfaceMode::Given,
+        |s, a| {
+            s.surface_mode = if a {
+                SurfaceMode::Given
+            } else {
+                SurfaceMode::Solved
+            }
+        },
+        |s| matches!(s.shape, Shape::Cylinder | Shape::Sphere),
+    );
+    let wall_select = move || {
+        let opts = WallMaterial::ALL
+            .into_iter()
+            .map(|m| view! { <option value=m.id() prop:selected=move || scenario.with(|s| s.wall == m)>{m.label()}</option> })
+            .collect_view();
+        view! {
+            <div class="field" class:hidden=move || !scenario.with(|s| s.solved())>
+                <label for="in-wall">"Wall material"<small>"k in W/(m·K) near 300 K, Incropera & DeWitt Table A.1"</small></label>
+                <select id="in-wall" class="wide" data-choice="wall" on:change=move |ev| {
+                    if let Some(m) = WallMaterial::from_id(&event_target_value(&ev)) {
+                        scenario.update(|s| s.wall = m);
+                    }
+                }>{opts}</select>
+            </div>
+        }
+    };
+    // Nominal pipe sizes set D (and the text shown in the D field).
+    let size_picker = move || {
+        let opts = crate::engine::job::NOMINAL_SIZES
+            .iter()
+            .enumerate()
+            .map(|(i, (name, _))| view! { <option value=i.to_string()>{*name}</option> })
+            .collect_view();
+        view! {
+            <div class="field" class:hidden=move || !scenario.with(|s| s.shape == Shape::Cylinder)>
+                <label for="in-nps">"Nominal pipe size"<small>"sets D to the outside diameter (ASME B36.10M)"</small></label>
+                <select id="in-nps" class="wide" data-choice="nps" on:change=move |ev| {
+                    let Ok(i) = event_target_value(&ev).parse::<usize>() else { return };
+                    let Some((_, d)) = crate::engine::job::NOMINAL_SIZES.get(i) else { return };
+                    scenario.update(|s| s.diameter = *d);
+                    let u = choice.get_untracked().get(Dim::Length);
+                    text_of(Field::Diameter).set(shown_text(*d, u));
+                }>
+                    <option value="" selected>"Choose a size, or type D below"</option>
+                    {opts}
+                </select>
+            </div>
+        }
+    };
+    let layer_picker = move || {
+        let buttons = (0..=3usize)
+            .map(|n| {
+                view! {
+                    <button type="button" data-layers=n.to_string()
+                        aria-pressed=move || scenario.with(|s| s.layer_count == n).to_string()
+                        on:click=move |_| scenario.update(|s| s.layer_count = n)>
+                        {match n { 0 => "Bare".to_string(), 1 => "1 layer".to_string(), k => format!("{k} layers") }}
+                    </button>
+                }
+            })
+            .collect_view();
+        view! {
+            <div class:hidden=move || !scenario.with(|s| s.solved())>
+                <h3 class="sub">"Insulation"</h3>
+                <div class="toggle" role="group" aria-label="Insulation layers">{buttons}</div>
+            </div>
+        }
+    };
+
     let prop_table = move || {
         shown.with(|s| {
             s.outcome.as_ref().map(|o| {
@@ -417,6 +490,7 @@ pub fn App() -> impl IntoView {
                     <h2 id="body-title">"1 · Body"</h2>
                     {shape_picker}
                     {axis_toggle}
+                    {size_picker}
                     {fields_of(Group::Body)}
                 </section>
                 <section aria-labelledby="stream-title">
@@ -434,7 +508,15 @@ pub fn App() -> impl IntoView {
                 </section>
                 <section aria-labelledby="surface-title">
                     <h2 id="surface-title">"3 · Surface"</h2>
+                    {surface_toggle}
+                    {wall_select}
                     {fields_of(Group::Surface)}
+                    {layer_picker}
+                    {fields_of(Group::Layers)}
+                </section>
+                <section aria-labelledby="job-title">
+                    <h2 id="job-title">"4 · The job"</h2>
+                    {fields_of(Group::Job)}
                 </section>
             </div>
             <section class="results" class:stale=stale aria-labelledby="results-title" aria-live="polite">
@@ -446,7 +528,13 @@ pub fn App() -> impl IntoView {
                 <dl class="figures">
                     <div class="main" class:hidden=move || shown.with(|s| s.outcome.as_ref().is_some_and(|o| o.q_per_length.is_none()))><dt>"Heat loss per length"</dt><dd>{out("q_per_length", |o| o.q_per_length, Some(Dim::HeatFlowPerLength))}</dd></div>
                     <div class="main"><dt>{move || if scenario.with(|s| s.shape == Shape::Sphere) { "Heat loss from the body" } else { "Heat loss over the length L" }}</dt><dd>{out("q_total", |o| Some(o.q_total), Some(Dim::HeatFlow))}</dd></div>
-                    <div class="main"><dt>"Heat-transfer coefficient h"</dt><dd>{out("h", |o| Some(o.h), Some(Dim::HeatTransferCoefficient))}</dd></div>
+                    <div class="main"><dt>"Surface temperature"</dt><dd>{out("surface_temperature", |o| Some(o.surface_temp), Some(Dim::Temperature))}</dd></div>
+                    <div><dt>"By convection"</dt><dd>{out("q_conv", |o| Some(o.q_conv_total), Some(Dim::HeatFlow))}</dd></div>
+                    <div><dt>"By radiation"</dt><dd>{out("q_rad", |o| Some(o.q_rad_total), Some(Dim::HeatFlow))}</dd></div>
+                    <div><dt>"Radiation coefficient h_rad"</dt><dd>{out("h_rad", |o| Some(o.h_rad), Some(Dim::HeatTransferCoefficient))}</dd></div>
+                    <div><dt>"Energy per year"</dt><dd>{out("annual_energy", |o| Some(o.annual_energy), Some(Dim::EnergyPerYear))}</dd></div>
+                    <div><dt>"Cost per year"</dt><dd>{out("annual_cost", |o| Some(o.annual_cost), Some(Dim::MoneyPerYear))}</dd></div>
+                    <div class="main"><dt>"Heat-transfer coefficient h (convection)"</dt><dd>{out("h", |o| Some(o.h), Some(Dim::HeatTransferCoefficient))}</dd></div>
                     <div><dt>"Nusselt number Nu = h·D/k"</dt><dd>{out("nusselt", |o| Some(o.nusselt), None)}</dd></div>
                     <div><dt>"Reynolds number Re (★)"</dt><dd>{out("reynolds", |o| Some(o.reynolds), None)}</dd></div>
                     <div><dt>"Prandtl number Pr (★)"</dt><dd>{out("prandtl", |o| Some(o.prandtl), None)}</dd></div>
@@ -456,6 +544,9 @@ pub fn App() -> impl IntoView {
                 </dl>
                 <p class="spread" data-spread>{move || shown.with(|s| s.outcome.as_ref().map(|o| spread_text(o, &choice.get())))}</p>
                 <p class="method">{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Recommended: {} ({}). {} {}", o.method, o.analysis.mode(), o.regime, o.analysis.notes.join(" "))))}</p>
+                <div class="verdicts" data-verdicts>
+                    {move || shown.with(|s| s.outcome.as_ref().map(|o| results::verdicts(o, &choice.get())))}
+                </div>
                 <ul class="cautions" data-cautions>
                     {move || shown.with(|s| s.outcome.as_ref().map(|o| scenario::cautions(&scenario.get(), o).into_iter().map(|c| view! { <li class="caution">"⚠ "{c}</li> }).collect_view()))}
                 </ul>

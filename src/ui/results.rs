@@ -205,3 +205,51 @@ pub fn front_plot(o: &Outcome) -> Option<AnyView> {
         .into_any(),
     )
 }
+
+/// The verdict cards: touch, condensation, freezing, the run, insulated against bare.
+pub fn verdicts(o: &Outcome, c: &UnitChoice) -> impl IntoView {
+    let cards = o
+        .verdicts
+        .iter()
+        .map(|v| {
+            let figs = v
+                .figures
+                .iter()
+                .map(|(label, value, dim)| view! { <li><span>{*label}": "</span><strong>{with_unit(*value, *dim, c)}</strong></li> })
+                .collect_view();
+            view! {
+                <article class="verdict" class:warn=!v.ok data-verdict=v.id data-ok=v.ok.to_string()>
+                    <h3>{if v.ok { "✓ " } else { "⚠ " }}{v.title}</h3>
+                    <p>{v.summary.clone()}</p>
+                    <ul>{figs}</ul>
+                    {v.caution.map(|t| view! { <p class="caution-note">{t}</p> })}
+                </article>
+            }
+        })
+        .collect_view();
+    let layers = o.job.as_ref().map(|j| {
+        let temps = j
+            .solution
+            .interfaces
+            .iter()
+            .enumerate()
+            .map(|(i, t)| {
+                let name = if i == 0 { "outside of the wall".to_string() } else { format!("outside of layer {i}") };
+                view! { <li>{name}": "{with_unit(*t, Dim::Temperature, c)}</li> }
+            })
+            .collect_view();
+        let notes = j.notes.iter().map(|n| view! { <p class="flag">"⚠ "{n.clone()}</p> }).collect_view();
+        view! {
+            <article class="verdict" data-verdict="layers">
+                <h3>"Through the layers"</h3>
+                <ul>
+                    <li>"bore: "{with_unit(j.solution.t_bore, Dim::Temperature, c)}</li>
+                    {temps}
+                    <li>{format!("outer diameter: {}", with_unit(j.solution.outer_d, Dim::Length, c))}</li>
+                </ul>
+                {notes}
+            </article>
+        }
+    });
+    view! { {cards}{layers} }
+}

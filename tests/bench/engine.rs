@@ -77,11 +77,52 @@ fn correlations(c: &mut Criterion) {
     }
 }
 
+/// The field job: properties, correlations, two insulation layers, radiation and the solve
+/// (budget 5 µs median), and a thickness inverse (budget 100 µs).
+fn field_job(c: &mut Criterion) {
+    use leeward::engine::scenario::{SurfaceMode, DEMO};
+    let mut s = DEMO;
+    s.surface_mode = SurfaceMode::Solved;
+    s.layer_count = 2;
+    let job = leeward::engine::heatloss::Job {
+        stream: leeward::engine::body::Body {
+            shape: s.shape,
+            axis: s.axis,
+            wind: s.wind,
+            d: s.diameter,
+            length: s.length,
+            speed: s.speed,
+            t_inf: s.fluid_temp,
+            t_s: 0.0,
+            p: s.pressure,
+            fluid: leeward::engine::props::Fluid::DryAir,
+        },
+        process_temp: 453.15,
+        h_inside: None,
+        construction: s.construction(),
+        emissivity: 0.9,
+        t_surround: 268.15,
+    };
+    c.bench_function("field job: two layers, radiation, the solve", |b| {
+        b.iter(|| leeward::engine::heatloss::solve(black_box(&job)).unwrap())
+    });
+    // The inverse: one insulation layer over the wall, its thickness for a 40 °C surface.
+    let mut one = job.clone();
+    one.construction.layers.truncate(2);
+    c.bench_function("field job: layer thickness for a 40 °C surface", |b| {
+        b.iter(|| {
+            leeward::engine::heatloss::thickness_for(black_box(&one), 0.5, 313.15, |s| s.t_surface)
+                .unwrap()
+                .unwrap()
+        })
+    });
+}
+
 fn scenario(c: &mut Criterion) {
     c.bench_function("demo scenario, full evaluation", |b| {
         b.iter(|| evaluate(black_box(&DEMO)).unwrap())
     });
 }
 
-criterion_group!(benches, properties, correlations, scenario);
+criterion_group!(benches, properties, correlations, field_job, scenario);
 criterion_main!(benches);

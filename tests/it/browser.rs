@@ -449,6 +449,71 @@ async fn exercise(c: &Client, base: &str) {
         .unwrap();
     assert!(close(si(c, "h").await, want.h));
 
+    // The field job: work the surface out from the process inside, through the demo's layer.
+    c.find(Locator::Css(
+        "[data-toggle=surface-mode] button:nth-child(2)",
+    ))
+    .await
+    .unwrap()
+    .click()
+    .await
+    .unwrap();
+    let mut job = s;
+    job.surface_mode = scenario::SurfaceMode::Solved;
+    let want_job = expect(&job);
+    assert!(
+        close(si(c, "q_total").await, want_job.q_total),
+        "solved loss differs from the engine"
+    );
+    assert!(close(
+        si(c, "surface_temperature").await,
+        want_job.surface_temp
+    ));
+    assert!(hidden(c, "Ts").await && !hidden(c, "Tp").await && !hidden(c, "t1").await);
+    assert_eq!(
+        js(
+            c,
+            "return document.querySelectorAll('[data-verdict=saving]').length;"
+        )
+        .await,
+        json!(1)
+    );
+    // Bare: no layer fields, the loss of the bare line.
+    c.find(Locator::Css("[data-layers='0']"))
+        .await
+        .unwrap()
+        .click()
+        .await
+        .unwrap();
+    let mut bare = job;
+    bare.layer_count = 0;
+    assert!(close(si(c, "q_total").await, expect(&bare).q_total));
+    assert!(hidden(c, "t1").await);
+    // A wall as thick as the pipe: a message, no NaN.
+    paste_into(c, "tw", "40").await;
+    assert!(!text_of(c, "[data-stale]").await.is_empty());
+    assert!(
+        text_of(c, "[data-msg-for=tw]").await.contains("thick"),
+        "no message beside the wall thickness"
+    );
+    assert_no_nan_shown(c).await;
+    type_into(c, "tw", "3.91").await;
+    c.find(Locator::Css("[data-layers='1']"))
+        .await
+        .unwrap()
+        .click()
+        .await
+        .unwrap();
+    c.find(Locator::Css(
+        "[data-toggle=surface-mode] button:nth-child(1)",
+    ))
+    .await
+    .unwrap()
+    .click()
+    .await
+    .unwrap();
+    assert!(close(si(c, "h").await, want.h));
+
     // The link carries the scenario: load it fresh and get the same numbers.
     let url = c.current_url().await.unwrap().to_string();
     assert!(url.contains("D=0.0334"), "link not updated: {url}");

@@ -1,0 +1,398 @@
+//! The field job: a pipe or vessel with its process fluid inside, wall and insulation layers,
+//! losing heat to the stream by convection (forced, natural or mixed, from `body::analyse`) and to
+//! the surroundings by radiation. The surface temperature is found by the bracketed solver of
+//! [`crate::engine::solve`]; the fluid's properties are re-evaluated at every trial temperature.
+//!
+//! Per metre for a cylinder (W/m), whole body for a sphere (W).
+
+use crate::engine::body::{self, Analysis, Body};
+use crate::engine::error::{finite_result, EngineError};
+use crate::engine::layers::{critical_radius, Construction, Geometry};
+use crate::engine::solve;
+
+/// Stefan–Boltzmann constant, W/(m²·K⁴) (CODATA 2018, exact in the 2019 SI).
+pub const SIGMA: f64 = 5.670_374_419e-8;
+
+/// The whole job, SI. `stream.d` and `stream.t_s` are ignored: the outer diameter comes from the
+/// construction and the surface temperature is solved for.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Job {
+    pub stream: Body,
+    pub process_temp: f64,
+    /// Inside film coefficient, W/(m²·K); `None`: the bore is at the process temperature.
+    pub h_inside: Option<f64>,
+    pub construction: Construction,
+    pub emissivity: f64,
+    /// Temperature of the surroundings the surface radiates to, K.
+    pub t_surround: f64,
+}
+
+impl Job {
+    pub fn geometry(&self) -> Geometry {
+        if self.stream.shape.is_sphere() {
+            Geometry::Sphere
+        } else {
+            Geometry::Cylinder
+        }
+    }
+}
+
+/// What leaves the outer surface at temperature `ts`.
+#[derive(Debug, Clone, PartialEq)]
+pub struct SurfaceLoss {
+    /// Convective and radiative heat flow, W/m (cylinder) or W (sphere).
+    pub q_conv: f64,
+    pub q_rad: f64,
+    /// Convective coefficient and the linearised radiation coefficient εσ(Ts² + Tsur²)(Ts + Tsur).
+    pub h_conv: f64,
+    pub h_rad: f64,
+    /// The convection analysis at this surface temperature (none when Ts = T∞ exactly).
+    pub analysis: Option<Analysis>,
+}
+
+/// Convection plus radiation from a surface of diameter `d` at `ts`.
+pub fn surface_loss(
+    stream: &Body,
+    d: f64,
+    ts: f64,
+    emissivity: f64,
+    t_sur: f64,
+) -> Result<SurfaceLoss, EngineError> {
+    let area = if stream.shape.is_sphere() {
+        std::f64::consts::PI * d * d
+    } else {
+        stream
+            .shape
+            .perimeter_over_d()
+            .unwrap_or(std::f64::consts::PI)
+            * d
+    };
+    let h_rad = emissivity * SIGMA * (ts * ts + t_sur * t_sur) * (ts + t_sur);
+    let q_rad = area * emissivity * SIGMA * (ts.powi(4) - t_sur.powi(4));
+    if (ts - stream.t_inf).abs() < 1e-9 {
+        return Ok(SurfaceLoss {
+            q_conv: 0.0,
+            q_rad,
+            h_conv: 0.0,
+            h_rad,
+            analysis: None,
+        });
+    }
+    let a = body::analyse(&Body {
+        d,
+        t_s: ts,
+        ..*stream
+    })?;
+    Ok(SurfaceLoss {
+        q_conv: area * a.h * (ts - stream.t_inf),
+        q_rad,
+        h_conv: a.h,
+        h_rad,
+        analysis: Some(a),
+    })
+}
+
+/// The solved job.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Solution {
+    /// Heat flow from the process to the surroundings, W/m or W.
+    pub q: f64,
+    pub loss: SurfaceLoss,
+    pub t_surface: f64,
+    /// Temperature of the bore face (after the inside film).
+    pub t_bore: f64,
+    /// Temperature at the outer face of each layer; the last is the surface.
+    pub interfaces: Vec<f64>,
+    pub outer_d: f64,
+    pub iterations: u32,
+    /// Conduction minus surface loss at the solution, W/m or W.
+    pub residual: f64,
+    /// Critical radius for the outer layer (k at its mean temperature, h = h_conv + h_rad), m.
+    pub critical_radius: Option<f64>,
+}
+
+/// Solve the surface energy balance.
+pub fn solve(job: &Job) -> Result<Solution, EngineError> {
+    let s = &job.stream;
+    let (tp, tinf, tsur) = (job.process_temp, s.t_inf, job.t_surround);
+    let t_lo = tp.min(tinf).min(tsur);
+    let t_hi = tp.max(tinf).max(tsur);
+    job.construction.check(t_lo, t_hi)?;
+    if !(0.0..=1.0).contains(&job.emissivity) {
+        return Err(EngineError::Undefined {
+            quantity: "emissivity",
+            value: job.emissivity,
+            unit: "",
+            why: "must lie between 0 and 1",
+        });
+    }
+    let g = job.geometry();
+    let outer_d = 2.0 * job.construction.r_out();
+    let a_in = g.area(job.construction.r_in);
+    let surface_of = |q: f64| -> (f64, Vec<f64>) {
+        let t_bore = match job.h_inside {
+            Some(hi) => (tp - q / (hi * a_in)).clamp(t_lo, t_hi),
+            None => tp,
+        };
+        let t = job.construction.march(t_bore, q, t_lo, t_hi);
+        (t_bore, t)
+    };
+    let mut failure: Option<EngineError> = None;
+    let mut residual = |q: f64| -> f64 {
+        let (t_bore, t) = surface_of(q);
+        let ts = t.last().copied().unwrap_or(t_bore);
+        match surface_loss(s, outer_d, ts, job.emissivity, tsur) {
+            Ok(l) => l.q_conv + l.q_rad - q,
+            Err(e) => {
+                failure.get_or_insert(e);
+                f64::NAN
+            }
+        }
+    };
+    // At q = 0 the surface sits at the process temperature; the root lies between 0 and that loss.
+    let q0 = residual(0.0);
+    let root = if q0 == 0.0 {
+        solve::Root {
+            x: 0.0,
+            residual: 0.0,
+            iterations: 0,
+        }
+    } else {
+        // Narrow the bracket before solving: a first guess from constant resistances (the outside
+        // coefficient as it is at q = 0), then a step of 5 % towards the root. An end moves only
+        // where the residual's sign proves the root lies beyond it, so the bracket stays valid.
+        // In t = q/q0 the residual's sign (times q0's) is + left of the root and − right of it.
+        let (mut lo, mut hi) = (0.0f64, 1.0f64);
+        let r_out = (tp - tinf).abs() / q0.abs();
+        let tm = 0.5 * (tp + tinf);
+        let mut r_cond = job.h_inside.map(|hi| 1.0 / (hi * a_in)).unwrap_or(0.0);
+        let mut r1 = job.construction.r_in;
+        for (l, r2) in job.construction.layers.iter().zip(job.construction.radii()) {
+            if r2 > r1 {
+                r_cond += 1.0 / (g.shape_factor(r1, r2) * l.k.at(tm));
+            }
+            r1 = r2;
+        }
+        let t_guess = r_out / (r_cond + r_out);
+        if t_guess.is_finite() && t_guess > 0.0 && t_guess < 1.0 {
+            let g1 = residual(t_guess * q0) * q0.signum();
+            let t_step = (t_guess * if g1 > 0.0 { 1.05 } else { 0.95 }).min(1.0);
+            let g2 = residual(t_step * q0) * q0.signum();
+            for (t, gt) in [(t_guess, g1), (t_step, g2)] {
+                if gt.is_finite() && t > 0.0 && t < 1.0 {
+                    if gt > 0.0 {
+                        lo = lo.max(t);
+                    } else {
+                        hi = hi.min(t);
+                    }
+                }
+            }
+        }
+        let (lo, hi) = (lo * q0, hi * q0);
+        match solve::bracketed_rel(&mut residual, lo, hi, 1e-12) {
+            Ok(r) => r,
+            Err(_) => {
+                return Err(failure.unwrap_or(EngineError::NonFiniteResult {
+                    quantity: "surface temperature (the energy balance did not close)",
+                }))
+            }
+        }
+    };
+    if let Some(e) = failure {
+        return Err(e);
+    }
+    let q = finite_result("heat flow", root.x)?;
+    let (t_bore, interfaces) = surface_of(q);
+    let t_surface = interfaces.last().copied().unwrap_or(t_bore);
+    let loss = surface_loss(s, outer_d, t_surface, job.emissivity, tsur)?;
+    let h_total = loss.h_conv + loss.h_rad;
+    let critical_radius = job.construction.layers.last().and_then(|l| {
+        let n = interfaces.len();
+        let t_in = if n >= 2 { interfaces[n - 2] } else { t_bore };
+        let k = l.k.mean(t_in, t_surface);
+        (h_total > 0.0).then(|| critical_radius(g, k, h_total))
+    });
+    Ok(Solution {
+        q,
+        residual: loss.q_conv + loss.q_rad - q,
+        loss,
+        t_surface,
+        t_bore,
+        interfaces,
+        outer_d,
+        iterations: root.iterations,
+        critical_radius,
+    })
+}
+
+/// The thickness of the outermost layer that makes `measure(solution)` equal `target`, searched
+/// over 0 to `max_thickness`. `Ok(None)` when no thickness in that span meets it.
+pub fn thickness_for(
+    job: &Job,
+    max_thickness: f64,
+    target: f64,
+    measure: impl Fn(&Solution) -> f64,
+) -> Result<Option<(f64, Solution)>, EngineError> {
+    let n = job.construction.layers.len();
+    if n == 0 {
+        return Ok(None);
+    }
+    let with = |t: f64| -> Result<Solution, EngineError> {
+        let mut j = job.clone();
+        j.construction.layers[n - 1].thickness = t;
+        solve(&j)
+    };
+    let f0 = measure(&with(0.0)?) - target;
+    let f1 = measure(&with(max_thickness)?) - target;
+    if f0 == 0.0 {
+        return Ok(Some((0.0, with(0.0)?)));
+    }
+    if f0.signum() == f1.signum() {
+        return Ok(None);
+    }
+    let mut failure = None;
+    let root = solve::bracketed(
+        |t| match with(t) {
+            Ok(s) => measure(&s) - target,
+            Err(e) => {
+                failure.get_or_insert(e);
+                f64::NAN
+            }
+        },
+        0.0,
+        max_thickness,
+        1e-9 * target.abs().max(1e-9),
+    );
+    if let Some(e) = failure {
+        return Err(e);
+    }
+    match root {
+        Ok(r) => Ok(Some((r.x, with(r.x)?))),
+        Err(_) => Ok(None),
+    }
+}
+
+#[cfg(test)]
+pub(crate) mod tests_support {
+    use super::*;
+    use crate::engine::body::{Axis, Shape, Wind};
+    use crate::engine::layers::{Conductivity, Layer};
+    use crate::engine::props::Fluid;
+
+    /// An invented steam line: 4-inch steel pipe (114.3 mm OD, 6.02 mm wall), 50 mm of an
+    /// insulation with k = 0.035 + 1.5×10⁻⁴·θ W/(m·K), 180 °C inside, 5 °C air at 4 m/s.
+    pub fn job(insulation: f64, emissivity: f64) -> Job {
+        Job {
+            stream: Body {
+                shape: Shape::Cylinder,
+                axis: Axis::Horizontal,
+                wind: Wind::Horizontal,
+                d: 0.0,
+                length: 10.0,
+                speed: 4.0,
+                t_inf: 278.15,
+                t_s: 0.0,
+                p: 101_325.0,
+                fluid: Fluid::DryAir,
+            },
+            process_temp: 453.15,
+            h_inside: None,
+            construction: Construction {
+                geometry: Geometry::Cylinder,
+                r_in: 0.05715 - 0.00602,
+                layers: vec![
+                    Layer {
+                        thickness: 0.00602,
+                        k: Conductivity::constant(50.0),
+                    },
+                    Layer {
+                        thickness: insulation,
+                        k: Conductivity {
+                            a: 0.035,
+                            b: 1.5e-4,
+                            c: 0.0,
+                        },
+                    },
+                ],
+            },
+            emissivity,
+            t_surround: 268.15,
+        }
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::tests_support::job;
+    use super::*;
+
+    #[test]
+    fn energy_balance_closes() {
+        for (ins, eps) in [(0.0, 0.9), (0.05, 0.1), (0.2, 0.9), (0.0, 0.0)] {
+            let s = solve(&job(ins, eps)).unwrap();
+            let out = s.loss.q_conv + s.loss.q_rad;
+            assert!(
+                (out - s.q).abs() <= 1e-9 * s.q.abs(),
+                "{ins} {eps}: {out} vs {}",
+                s.q
+            );
+            // Between the coldest and the hottest temperature of the job (the 268 K sky can pull
+            // a well-insulated surface below the air temperature).
+            assert!(
+                s.t_surface > 268.15 && s.t_surface < 453.15,
+                "{}",
+                s.t_surface
+            );
+        }
+    }
+
+    #[test]
+    fn limits() {
+        // No insulation is the bare pipe; emissivity 0 is convection only.
+        let bare = solve(&job(0.0, 0.9)).unwrap();
+        assert!((bare.outer_d - 0.1143).abs() < 1e-12);
+        let none = solve(&job(0.0, 0.0)).unwrap();
+        assert_eq!(none.loss.q_rad, 0.0);
+        assert!(none.q < bare.q);
+        // More insulation: less loss and a cooler surface (well past the critical radius).
+        let mut last = bare.clone();
+        for t in [0.02, 0.05, 0.1, 0.2] {
+            let s = solve(&job(t, 0.9)).unwrap();
+            assert!(s.q < last.q && s.t_surface < last.t_surface, "{t}");
+            last = s;
+        }
+    }
+
+    /// Very thick insulation: the loss tends to conduction alone between the process and the air
+    /// temperature (the outside resistance becomes negligible beside the layer's).
+    #[test]
+    fn thick_insulation_tends_to_conduction_only() {
+        let mut j = job(2.0, 0.9);
+        j.t_surround = j.stream.t_inf;
+        let s = solve(&j).unwrap();
+        let c = &j.construction;
+        let r = c.radii();
+        let k = c.layers[1].k.mean(s.interfaces[0], 278.15);
+        let cond_only =
+            2.0 * std::f64::consts::PI * k * (s.interfaces[0] - 278.15) / (r[1] / r[0]).ln();
+        assert!(
+            (s.q / cond_only - 1.0).abs() < 0.01,
+            "{} vs {cond_only}",
+            s.q
+        );
+    }
+
+    #[test]
+    fn thickness_for_a_touch_limit() {
+        let j = job(0.05, 0.9);
+        let (t, s) = thickness_for(&j, 0.5, 323.15, |s| s.t_surface)
+            .unwrap()
+            .unwrap();
+        assert!((s.t_surface - 323.15).abs() < 1e-6, "{}", s.t_surface);
+        assert!(t > 0.0 && t < 0.5);
+        // A limit below the air temperature cannot be met by any thickness.
+        assert!(thickness_for(&j, 0.5, 270.0, |s| s.t_surface)
+            .unwrap()
+            .is_none());
+    }
+}

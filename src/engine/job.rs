@@ -1,0 +1,390 @@
+//! The field job on top of the energy balance: the bare-versus-insulated comparison, the verdicts
+//! (touch, condensation, freezing) with the thickness that fixes each, the temperature drop along
+//! a pipe carrying a flow, and the annual energy and cost.
+
+use crate::engine::error::EngineError;
+use crate::engine::heatloss::{self, Job, Solution};
+use crate::engine::layers::Geometry;
+use crate::engine::units::Dim;
+
+/// Wall materials with properties near 300 K from Incropera & DeWitt, Fundamentals of Heat and Mass
+/// Transfer, Table A.1 (from memory): k W/(m·K), ρ kg/m³, cp J/(kg·K).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum WallMaterial {
+    CarbonSteel,
+    Stainless,
+    Copper,
+    Aluminium,
+    User,
+}
+
+impl WallMaterial {
+    pub const ALL: [WallMaterial; 5] = [
+        WallMaterial::CarbonSteel,
+        WallMaterial::Stainless,
+        WallMaterial::Copper,
+        WallMaterial::Aluminium,
+        WallMaterial::User,
+    ];
+    pub fn id(&self) -> &'static str {
+        match self {
+            WallMaterial::CarbonSteel => "cs",
+            WallMaterial::Stainless => "ss",
+            WallMaterial::Copper => "cu",
+            WallMaterial::Aluminium => "al",
+            WallMaterial::User => "user",
+        }
+    }
+    pub fn from_id(id: &str) -> Option<Self> {
+        Self::ALL.into_iter().find(|m| m.id() == id)
+    }
+    pub fn label(&self) -> &'static str {
+        match self {
+            WallMaterial::CarbonSteel => "Carbon steel (k 60.5)",
+            WallMaterial::Stainless => "Stainless steel, AISI 304 (k 14.9)",
+            WallMaterial::Copper => "Copper (k 401)",
+            WallMaterial::Aluminium => "Aluminium (k 237)",
+            WallMaterial::User => "Other: type its conductivity",
+        }
+    }
+    /// (k, ρ, cp), or `None` for the user's material (k typed, ρ·cp unknown).
+    pub fn properties(&self) -> Option<(f64, f64, f64)> {
+        match self {
+            WallMaterial::CarbonSteel => Some((60.5, 7854.0, 434.0)),
+            WallMaterial::Stainless => Some((14.9, 7900.0, 477.0)),
+            WallMaterial::Copper => Some((401.0, 8933.0, 385.0)),
+            WallMaterial::Aluminium => Some((237.0, 2702.0, 903.0)),
+            WallMaterial::User => None,
+        }
+    }
+}
+
+/// Water for the freezing estimate: ρ, cp of the liquid near 5 °C and the latent heat of fusion at
+/// 0 °C, 333.6 kJ/kg (from memory; IAPWS-IF97 gives ρ and cp of the liquid, the fusion enthalpy is
+/// the common handbook value).
+pub const WATER_RHO: f64 = 1000.0;
+pub const WATER_CP: f64 = 4200.0;
+pub const ICE_LATENT: f64 = 333_600.0;
+
+/// One verdict card: what it says, whether it passes, and its figures (SI, with their dimension).
+#[derive(Debug, Clone, PartialEq)]
+pub struct Verdict {
+    pub id: &'static str,
+    pub title: &'static str,
+    /// false: the card is a warning.
+    pub ok: bool,
+    pub summary: String,
+    pub figures: Vec<(&'static str, f64, Dim)>,
+    pub caution: Option<&'static str>,
+}
+
+/// Inputs of the verdicts beyond the job itself.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Targets {
+    /// Highest surface temperature a person may touch, K.
+    pub touch_limit: f64,
+    /// Dew point of the stream, K, when it is humid air.
+    pub dew_point: Option<f64>,
+    /// Margin above the dew point the surface must keep, K.
+    pub dew_margin: f64,
+    pub hours: f64,
+    /// Price per joule of the energy bought.
+    pub price: f64,
+    pub efficiency: f64,
+    /// Mass flow through a pipe, kg/s (0: stagnant).
+    pub mass_flow: f64,
+    pub process_cp: f64,
+    /// ρ·cp·(wall cross-section) per metre of the wall, J/(m·K), if known.
+    pub wall_heat_capacity: Option<f64>,
+}
+
+/// Everything the job adds to the convection result.
+#[derive(Debug, Clone, PartialEq)]
+pub struct JobResult {
+    pub solution: Solution,
+    /// The same line with every insulation layer taken away (only the wall).
+    pub bare: Option<Solution>,
+    pub verdicts: Vec<Verdict>,
+    pub notes: Vec<String>,
+    /// Annual energy bought to make up the loss, J/yr, and its cost per year.
+    pub annual_energy: f64,
+    pub annual_cost: f64,
+}
+
+pub const TOUCH_CAUTION: &str = "Hot surfaces burn. The touch limit here is common practice, not a rule: local codes and your employer's personnel-protection standard govern. Guard or insulate, and check the surface with a contact thermometer before anyone touches it.";
+pub const DEW_CAUTION: &str = "Condensation wets insulation, corrodes steel and drips. A vapour-retarding jacket and sealed joints matter as much as thickness; cold-service design is a job for a qualified designer under local codes.";
+pub const FREEZE_CAUTION: &str = "A frozen line can burst. These times assume still water, no heat tracing and steady weather; wind gusts, colder nights and thin spots (valves, supports) freeze first. Follow local codes and licensed practice for freeze protection.";
+
+/// Heat flow per unit (W/m or W) over a run of length `len` (1 for a sphere).
+fn per_run(q: f64, g: Geometry, len: f64) -> f64 {
+    match g {
+        Geometry::Cylinder => q * len,
+        Geometry::Sphere => q,
+    }
+}
+
+/// Evaluate the job and its verdicts. `insulated_layers` is how many of the construction's
+/// layers are insulation (after the wall).
+pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobResult, EngineError> {
+    let solution = heatloss::solve(job)?;
+    let g = job.geometry();
+    let n = job.construction.layers.len();
+    let bare = if insulated_layers > 0 {
+        let mut b = job.clone();
+        b.construction.layers.truncate(n - insulated_layers);
+        Some(heatloss::solve(&b)?)
+    } else {
+        None
+    };
+    let mut notes = Vec::new();
+    let run = job.stream.length;
+    let q_run = per_run(solution.q, g, run);
+    let annual_energy = q_run.abs() * t.hours * 3600.0 / t.efficiency;
+    let annual_cost = annual_energy * t.price;
+    let mut verdicts = Vec::new();
+
+    if let (Some(b), Some(rc)) = (&bare, solution.critical_radius) {
+        let r_bare = b.outer_d / 2.0;
+        if r_bare < rc {
+            notes.push(format!(
+                "The bare outer radius ({:.4} m) is below the critical radius of the insulation, k/h = {:.4} m: a thin layer first increases the loss; only beyond the critical radius does more insulation save heat.",
+                r_bare, rc
+            ));
+        }
+    }
+    if let Some(b) = &bare {
+        let saving = per_run(b.q - solution.q, g, run);
+        verdicts.push(Verdict {
+            id: "saving",
+            title: "Insulated against bare",
+            ok: saving.abs() <= per_run(b.q, g, run).abs(),
+            summary: if b.q.abs() > solution.q.abs() {
+                "The insulation cuts the loss.".to_string()
+            } else {
+                "The insulation increases the loss: the line is below the critical radius."
+                    .to_string()
+            },
+            figures: vec![
+                ("bare loss", per_run(b.q, g, run), Dim::HeatFlow),
+                ("insulated loss", q_run, Dim::HeatFlow),
+                ("saved", saving, Dim::HeatFlow),
+                (
+                    "energy saved",
+                    saving.abs() * t.hours * 3600.0 / t.efficiency,
+                    Dim::EnergyPerYear,
+                ),
+                (
+                    "money saved",
+                    saving.abs() * t.hours * 3600.0 / t.efficiency * t.price,
+                    Dim::MoneyPerYear,
+                ),
+            ],
+            caution: None,
+        });
+    }
+
+    let ts = solution.t_surface;
+    // Personnel protection (hot side).
+    if job.process_temp > t.touch_limit || ts > t.touch_limit {
+        let hot = ts > t.touch_limit;
+        let mut figures = vec![
+            ("surface", ts, Dim::Temperature),
+            ("limit", t.touch_limit, Dim::Temperature),
+        ];
+        let mut summary = if hot {
+            "The surface is above the touch limit.".to_string()
+        } else {
+            "The surface is below the touch limit.".to_string()
+        };
+        if hot && insulated_layers > 0 {
+            match heatloss::thickness_for(job, 0.5, t.touch_limit, |s| s.t_surface)? {
+                Some((th, _)) => {
+                    figures.push(("outer layer thickness for the limit", th, Dim::Length));
+                    summary.push_str(" The outer layer would need the thickness shown to bring it down to the limit.");
+                }
+                None => summary
+                    .push_str(" No outer-layer thickness up to 0.5 m brings it to the limit."),
+            }
+        } else if hot {
+            summary.push_str(" Add an insulation layer to see the thickness that meets the limit.");
+        }
+        verdicts.push(Verdict {
+            id: "touch",
+            title: "Touch",
+            ok: !hot,
+            summary,
+            figures,
+            caution: Some(TOUCH_CAUTION),
+        });
+    }
+    // Condensation (cold side).
+    if let Some(td) = t.dew_point {
+        let need = td + t.dew_margin;
+        if ts < need || job.process_temp < need {
+            let wet = ts < need;
+            let mut figures = vec![
+                ("surface", ts, Dim::Temperature),
+                ("dew point", td, Dim::Temperature),
+                ("margin", t.dew_margin, Dim::TemperatureDifference),
+            ];
+            let mut summary = if wet {
+                "The surface is below the dew point plus the margin: it will sweat.".to_string()
+            } else {
+                "The surface stays above the dew point plus the margin.".to_string()
+            };
+            if wet && insulated_layers > 0 && job.process_temp < need {
+                match heatloss::thickness_for(job, 0.5, need, |s| s.t_surface)? {
+                    Some((th, _)) => {
+                        figures.push(("outer layer thickness for the margin", th, Dim::Length));
+                        summary.push_str(" The outer layer would need the thickness shown.");
+                    }
+                    None => summary.push_str(
+                        " No outer-layer thickness up to 0.5 m keeps the surface above it.",
+                    ),
+                }
+            }
+            verdicts.push(Verdict {
+                id: "dew",
+                title: "Condensation",
+                ok: !wet,
+                summary,
+                figures,
+                caution: Some(DEW_CAUTION),
+            });
+        }
+    }
+    // Freezing of still water in a pipe.
+    let tinf = job.stream.t_inf;
+    if g == Geometry::Cylinder && tinf < 273.15 && job.process_temp > 273.15 && t.mass_flow == 0.0 {
+        let r_in = job.construction.r_in;
+        let water = WATER_RHO * std::f64::consts::PI * r_in * r_in;
+        let c = water * WATER_CP + t.wall_heat_capacity.unwrap_or(0.0);
+        // Overall resistance per metre from the water to the air at the solution.
+        let r_tot = (job.process_temp - tinf) / solution.q;
+        let t_cool = c * r_tot * ((job.process_temp - tinf) / (273.15 - tinf)).ln();
+        let t_freeze = water * ICE_LATENT * r_tot / (273.15 - tinf);
+        let mut summary = "Still water: time to cool to 0 °C, then to freeze through (lumped water and wall, constant resistance, the approach of ISO 12241; from memory).".to_string();
+        if t.wall_heat_capacity.is_none() {
+            summary.push_str(" The wall's heat capacity is left out for a material of your own (the times are then a little short).");
+        }
+        verdicts.push(Verdict {
+            id: "freeze",
+            title: "Freezing",
+            ok: false,
+            summary,
+            figures: vec![
+                ("to 0 °C", t_cool, Dim::Duration),
+                ("then frozen through", t_freeze, Dim::Duration),
+                ("in all", t_cool + t_freeze, Dim::Duration),
+            ],
+            caution: Some(FREEZE_CAUTION),
+        });
+    }
+    // Temperature along a pipe carrying a flow.
+    if g == Geometry::Cylinder && t.mass_flow > 0.0 {
+        let r_tot = (job.process_temp - tinf) / solution.q;
+        let t_out =
+            tinf + (job.process_temp - tinf) * (-run / (t.mass_flow * t.process_cp * r_tot)).exp();
+        verdicts.push(Verdict {
+            id: "flow",
+            title: "Along the run",
+            ok: true,
+            summary: "Outlet temperature of the flow over the run length, with the inlet's loss per degree held along it.".to_string(),
+            figures: vec![("inlet", job.process_temp, Dim::Temperature), ("outlet", t_out, Dim::Temperature), ("drop", job.process_temp - t_out, Dim::TemperatureDifference)],
+            caution: None,
+        });
+    }
+    Ok(JobResult {
+        solution,
+        bare,
+        verdicts,
+        notes,
+        annual_energy,
+        annual_cost,
+    })
+}
+
+/// Nominal pipe sizes and their outside diameters, m: ASME B36.10M (from memory; the ODs are the
+/// same in EN 10220's series 1 to the rounding shown).
+pub const NOMINAL_SIZES: [(&str, f64); 19] = [
+    ("NPS ½ (DN 15)", 0.0213),
+    ("NPS ¾ (DN 20)", 0.0267),
+    ("NPS 1 (DN 25)", 0.0334),
+    ("NPS 1¼ (DN 32)", 0.0422),
+    ("NPS 1½ (DN 40)", 0.0483),
+    ("NPS 2 (DN 50)", 0.0603),
+    ("NPS 2½ (DN 65)", 0.0730),
+    ("NPS 3 (DN 80)", 0.0889),
+    ("NPS 4 (DN 100)", 0.1143),
+    ("NPS 5 (DN 125)", 0.1413),
+    ("NPS 6 (DN 150)", 0.1683),
+    ("NPS 8 (DN 200)", 0.2191),
+    ("NPS 10 (DN 250)", 0.2730),
+    ("NPS 12 (DN 300)", 0.3238),
+    ("NPS 14 (DN 350)", 0.3556),
+    ("NPS 16 (DN 400)", 0.4064),
+    ("NPS 18 (DN 450)", 0.4570),
+    ("NPS 20 (DN 500)", 0.5080),
+    ("NPS 24 (DN 600)", 0.6100),
+];
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::engine::heatloss::tests_support::job;
+
+    fn targets() -> Targets {
+        Targets {
+            touch_limit: 333.15,
+            dew_point: None,
+            dew_margin: 2.0,
+            hours: 8000.0,
+            price: 0.05 / 3.6e6,
+            efficiency: 0.8,
+            mass_flow: 0.0,
+            process_cp: 4180.0,
+            wall_heat_capacity: None,
+        }
+    }
+
+    #[test]
+    fn bare_against_insulated_and_the_touch_thickness() {
+        let j = job(0.03, 0.9);
+        let r = evaluate(&j, &targets(), 1).unwrap();
+        let bare = r.bare.as_ref().unwrap();
+        assert!(bare.q > r.solution.q);
+        let touch = r.verdicts.iter().find(|v| v.id == "touch").unwrap();
+        assert_eq!(touch.ok, r.solution.t_surface <= 333.15);
+        // Annual energy: q'·L·hours/efficiency.
+        let want = r.solution.q * 10.0 * 8000.0 * 3600.0 / 0.8;
+        assert!((r.annual_energy - want).abs() < 1e-6 * want);
+    }
+
+    #[test]
+    fn freezing_times_follow_the_lumped_model() {
+        let mut j = job(0.03, 0.9);
+        j.stream.t_inf = 263.15;
+        j.t_surround = 263.15;
+        j.process_temp = 283.15;
+        let r = evaluate(&j, &targets(), 1).unwrap();
+        let f = r.verdicts.iter().find(|v| v.id == "freeze").unwrap();
+        let (cool, frozen) = (f.figures[0].1, f.figures[1].1);
+        assert!(cool > 0.0 && frozen > 0.0);
+        // Hand check of the cooling time from the same resistance.
+        let r_in = j.construction.r_in;
+        let c = WATER_RHO * std::f64::consts::PI * r_in * r_in * WATER_CP;
+        let rt = 20.0 / r.solution.q;
+        assert!((cool - c * rt * 2f64.ln()).abs() < 1e-9 * cool);
+    }
+
+    #[test]
+    fn flow_outlet_lies_between_inlet_and_air() {
+        let j = job(0.03, 0.9);
+        let mut t = targets();
+        t.mass_flow = 0.2;
+        let r = evaluate(&j, &t, 1).unwrap();
+        let f = r.verdicts.iter().find(|v| v.id == "flow").unwrap();
+        let out = f.figures[1].1;
+        assert!(out < j.process_temp && out > j.stream.t_inf);
+    }
+}

@@ -1,0 +1,272 @@
+//! Conduction through a pipe or vessel wall and its insulation layers, with conductivity that may
+//! vary with temperature.
+//!
+//! Each layer's conductivity is k(θ) = a + b·θ + c·θ², θ the temperature in °C — the form insulation
+//! data sheets give against mean temperature. Conduction through a layer with k(T) is exact through
+//! the Kirchhoff transform (the integral-mean conductivity, as in ASTM C680): with
+//! K(T) = ∫k dθ, the heat flow is q = S·[K(T₁) − K(T₂)], S = 2π/ln(r₂/r₁) per metre for a cylinder
+//! and 4π/(1/r₁ − 1/r₂) for a sphere.
+
+use crate::engine::error::EngineError;
+use std::f64::consts::PI;
+
+/// Round (per metre) or spherical (whole body) conduction.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Geometry {
+    Cylinder,
+    Sphere,
+}
+
+impl Geometry {
+    /// Conduction shape factor between radii r1 < r2: m for a cylinder (per metre), m for a sphere.
+    pub fn shape_factor(&self, r1: f64, r2: f64) -> f64 {
+        match self {
+            Geometry::Cylinder => 2.0 * PI / (r2 / r1).ln(),
+            Geometry::Sphere => 4.0 * PI / (1.0 / r1 - 1.0 / r2),
+        }
+    }
+    /// Area at radius r: per metre for a cylinder (m), whole for a sphere (m²).
+    pub fn area(&self, r: f64) -> f64 {
+        match self {
+            Geometry::Cylinder => 2.0 * PI * r,
+            Geometry::Sphere => 4.0 * PI * r * r,
+        }
+    }
+}
+
+/// k(θ) = a + b·θ + c·θ² in W/(m·K), θ in °C.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Conductivity {
+    pub a: f64,
+    pub b: f64,
+    pub c: f64,
+}
+
+impl Conductivity {
+    pub const fn constant(k: f64) -> Self {
+        Conductivity {
+            a: k,
+            b: 0.0,
+            c: 0.0,
+        }
+    }
+    pub fn at(&self, t: f64) -> f64 {
+        let th = t - 273.15;
+        self.a + th * (self.b + th * self.c)
+    }
+    /// K(T) = ∫₀^θ k dθ, W/m.
+    pub fn integral(&self, t: f64) -> f64 {
+        let th = t - 273.15;
+        th * (self.a + th * (self.b / 2.0 + th * self.c / 3.0))
+    }
+    /// Integral-mean conductivity between two temperatures.
+    pub fn mean(&self, t1: f64, t2: f64) -> f64 {
+        if (t1 - t2).abs() < 1e-9 {
+            self.at(0.5 * (t1 + t2))
+        } else {
+            (self.integral(t1) - self.integral(t2)) / (t1 - t2)
+        }
+    }
+    /// Lowest k over [t1, t2] (a quadratic: ends and vertex).
+    pub fn min_over(&self, t1: f64, t2: f64) -> f64 {
+        let (lo, hi) = (t1.min(t2), t1.max(t2));
+        let mut m = self.at(lo).min(self.at(hi));
+        if self.c != 0.0 {
+            let tv = 273.15 - self.b / (2.0 * self.c);
+            if tv > lo && tv < hi {
+                m = m.min(self.at(tv));
+            }
+        }
+        m
+    }
+}
+
+/// One layer: a pipe wall or an insulation layer.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Layer {
+    pub thickness: f64,
+    pub k: Conductivity,
+}
+
+/// The construction from the inside out: inner radius, then layers.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Construction {
+    pub geometry: Geometry,
+    /// Inside radius of the first layer (the bore), m.
+    pub r_in: f64,
+    pub layers: Vec<Layer>,
+}
+
+impl Construction {
+    /// Outer radius of every layer, in order.
+    pub fn radii(&self) -> Vec<f64> {
+        let mut r = self.r_in;
+        self.layers
+            .iter()
+            .map(|l| {
+                r += l.thickness;
+                r
+            })
+            .collect()
+    }
+    pub fn r_out(&self) -> f64 {
+        self.r_in + self.layers.iter().map(|l| l.thickness).sum::<f64>()
+    }
+
+    /// Check the construction can be evaluated at all over [t_lo, t_hi]: positive sizes and
+    /// conductivity above zero throughout.
+    pub fn check(&self, t_lo: f64, t_hi: f64) -> Result<(), EngineError> {
+        if self.r_in.is_nan() || self.r_in <= 0.0 {
+            return Err(EngineError::Undefined {
+                quantity: "bore radius",
+                value: self.r_in,
+                unit: "m",
+                why: "the wall is as thick as the pipe or thicker",
+            });
+        }
+        for l in &self.layers {
+            if !l.thickness.is_finite() || l.thickness < 0.0 {
+                return Err(EngineError::Undefined {
+                    quantity: "layer thickness",
+                    value: l.thickness,
+                    unit: "m",
+                    why: "a layer cannot be thinner than nothing",
+                });
+            }
+            let kmin = l.k.min_over(t_lo, t_hi);
+            if kmin.is_nan() || kmin <= 0.0 {
+                return Err(EngineError::Undefined {
+                    quantity: "layer conductivity",
+                    value: kmin,
+                    unit: "W/(m·K)",
+                    why: "the conductivity must stay above zero over the temperatures of the job",
+                });
+            }
+        }
+        Ok(())
+    }
+
+    /// March from the inner face at `t0` with heat flow `q` (outward, W/m or W) through every layer:
+    /// the temperature at each interface, clamped to [t_lo, t_hi]. The clamp keeps trial values of
+    /// a solver physical; at the solution no clamp is active.
+    pub fn march(&self, t0: f64, q: f64, t_lo: f64, t_hi: f64) -> Vec<f64> {
+        let mut out = Vec::with_capacity(self.layers.len());
+        let mut t = t0;
+        let mut r1 = self.r_in;
+        for l in &self.layers {
+            let r2 = r1 + l.thickness;
+            if l.thickness > 0.0 {
+                let target = l.k.integral(t) - q / self.geometry.shape_factor(r1, r2);
+                t = invert(&l.k, target, t_lo, t_hi);
+            }
+            out.push(t);
+            r1 = r2;
+        }
+        out
+    }
+
+    /// Thermal resistance of each layer at constant k (for notes and the critical radius), K·m/W or K/W.
+    pub fn resistance_const(&self, l: usize, k: f64) -> f64 {
+        let radii = self.radii();
+        let r1 = if l == 0 { self.r_in } else { radii[l - 1] };
+        1.0 / (self.geometry.shape_factor(r1, radii[l]) * k)
+    }
+}
+
+/// The temperature T in [lo, hi] with K(T) = target (K increases with T where k > 0), clamped.
+fn invert(k: &Conductivity, target: f64, lo: f64, hi: f64) -> f64 {
+    let (klo, khi) = (k.integral(lo), k.integral(hi));
+    if target <= klo {
+        return lo;
+    }
+    if target >= khi {
+        return hi;
+    }
+    if k.b == 0.0 && k.c == 0.0 {
+        return 273.15 + target / k.a;
+    }
+    crate::engine::solve::bracketed(
+        |t| k.integral(t) - target,
+        lo,
+        hi,
+        1e-13 * target.abs().max(1e-9),
+    )
+    .map(|r| r.x)
+    .unwrap_or(0.5 * (lo + hi))
+}
+
+/// Critical insulation radius for constant k and constant outside coefficient h: k/h for a
+/// cylinder, 2k/h for a sphere (textbook result).
+pub fn critical_radius(g: Geometry, k: f64, h: f64) -> f64 {
+    match g {
+        Geometry::Cylinder => k / h,
+        Geometry::Sphere => 2.0 * k / h,
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn constant_k_matches_the_log_law() {
+        let c = Construction {
+            geometry: Geometry::Cylinder,
+            r_in: 0.03,
+            layers: vec![Layer {
+                thickness: 0.05,
+                k: Conductivity::constant(0.04),
+            }],
+        };
+        // q' = 2πk(T1 − T2)/ln(r2/r1) = 2π·0.04·100/ln(0.08/0.03).
+        let q = 2.0 * PI * 0.04 * 100.0 / (0.08f64 / 0.03).ln();
+        let t = c.march(400.0, q, 200.0, 500.0);
+        assert!((t[0] - 300.0).abs() < 1e-9, "{}", t[0]);
+    }
+
+    #[test]
+    fn polynomial_k_uses_the_integral_mean() {
+        let k = Conductivity {
+            a: 0.035,
+            b: 1e-4,
+            c: 2e-7,
+        };
+        // Mean over 20–200 °C by hand: a + b·(θ1+θ2)/2 + c·(θ1²+θ1θ2+θ2²)/3.
+        let (t1, t2) = (473.15, 293.15);
+        let want = 0.035 + 1e-4 * 110.0 + 2e-7 * (200.0f64 * 200.0 + 200.0 * 20.0 + 400.0) / 3.0;
+        assert!((k.mean(t1, t2) - want).abs() < 1e-15);
+        let c = Construction {
+            geometry: Geometry::Sphere,
+            r_in: 0.5,
+            layers: vec![Layer { thickness: 0.1, k }],
+        };
+        let q = Geometry::Sphere.shape_factor(0.5, 0.6) * want * (t1 - t2);
+        let t = c.march(t1, q, 250.0, 500.0);
+        assert!((t[0] - t2).abs() < 1e-8, "{}", t[0]);
+    }
+
+    #[test]
+    fn bad_constructions_are_refused() {
+        let c = Construction {
+            geometry: Geometry::Cylinder,
+            r_in: -0.01,
+            layers: vec![],
+        };
+        assert!(c.check(280.0, 400.0).is_err());
+        let c = Construction {
+            geometry: Geometry::Cylinder,
+            r_in: 0.01,
+            layers: vec![Layer {
+                thickness: 0.01,
+                k: Conductivity {
+                    a: 0.04,
+                    b: -1e-3,
+                    c: 0.0,
+                },
+            }],
+        };
+        // k falls to zero at 40 °C: refused for a job reaching 100 °C.
+        assert!(c.check(280.0, 373.15).is_err());
+        assert!(c.check(280.0, 300.0).is_ok());
+    }
+}
