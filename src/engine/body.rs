@@ -241,6 +241,12 @@ impl Analysis {
 
 /// Evaluate every correlation for the body.
 pub fn analyse(b: &Body) -> Result<Analysis, EngineError> {
+    analyse_with(b, None)
+}
+
+/// As [`analyse`], with the recommended correlation fixed to index `fixed` of the shape's list
+/// (a solver holds it fixed while it iterates, so that the answer is continuous in Ts).
+pub fn analyse_with(b: &Body, fixed: Option<usize>) -> Result<Analysis, EngineError> {
     let film_t = 0.5 * (b.t_s + b.t_inf);
     let film = b.fluid.at(film_t, b.p)?;
     let free = b.fluid.at(b.t_inf, b.p)?;
@@ -276,7 +282,10 @@ pub fn analyse(b: &Body) -> Result<Analysis, EngineError> {
             flags: nu.flags,
         });
     }
-    let recommended = forced.iter().position(Estimate::valid).unwrap_or(0);
+    let recommended = match fixed {
+        Some(i) if i < forced.len() => i,
+        _ => forced.iter().position(Estimate::valid).unwrap_or(0),
+    };
     let valid: Vec<f64> = forced.iter().filter(|e| e.valid()).map(|e| e.h).collect();
     let spread = (!valid.is_empty()).then(|| {
         let lo = valid.iter().cloned().fold(f64::INFINITY, f64::min);

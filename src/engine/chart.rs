@@ -293,3 +293,110 @@ mod tests {
         assert_eq!(nice_ceiling(101.0), 200.0);
     }
 }
+
+/// A linear x–y chart of one series: its frame with rounded bounds, the path, and tick steps.
+#[derive(Debug, Clone, PartialEq)]
+pub struct LineChart {
+    pub frame: Frame,
+    pub path: String,
+    pub x_step: f64,
+    pub y_step: f64,
+}
+
+/// A step of 1, 2 or 5 × 10ⁿ giving about four to eight ticks over `span`.
+pub fn nice_step(span: f64) -> f64 {
+    if span.is_nan() || span <= 0.0 || span.is_infinite() {
+        return 1.0;
+    }
+    let raw = span / 5.0;
+    let e = 10f64.powf(raw.log10().floor());
+    for m in [1.0, 2.0, 5.0] {
+        if m * e >= raw {
+            return m * e;
+        }
+    }
+    10.0 * e
+}
+
+/// Frame `xs`, `ys` (already in the units shown) with bounds rounded to ticks; `also` are y values
+/// the frame must include (targets drawn as lines).
+pub fn line_chart(xs: &[f64], ys: &[f64], also: &[f64], width: f64, height: f64) -> LineChart {
+    let finite = |v: &&f64| v.is_finite();
+    let (x0, x1) = (
+        xs.iter()
+            .filter(finite)
+            .cloned()
+            .fold(f64::INFINITY, f64::min),
+        xs.iter()
+            .filter(finite)
+            .cloned()
+            .fold(f64::NEG_INFINITY, f64::max),
+    );
+    let ys_all = ys.iter().chain(also.iter());
+    let (mut y0, mut y1) = ys_all
+        .clone()
+        .filter(finite)
+        .fold((f64::INFINITY, f64::NEG_INFINITY), |(a, b), &v| {
+            (a.min(v), b.max(v))
+        });
+    if !(y0.is_finite() && y1.is_finite()) {
+        (y0, y1) = (0.0, 1.0);
+    }
+    if y1 - y0 < 1e-9 * y1.abs().max(1.0) {
+        y0 -= 1.0;
+        y1 += 1.0;
+    }
+    let (x0, x1) = if x0.is_finite() && x1 > x0 {
+        (x0, x1)
+    } else {
+        (0.0, 1.0)
+    };
+    let x_step = nice_step(x1 - x0);
+    let y_step = nice_step(y1 - y0);
+    let frame = Frame {
+        width,
+        height,
+        margin: (52.0, 12.0, 22.0, 34.0),
+        x: (
+            (x0 / x_step).floor() * x_step,
+            (x1 / x_step).ceil() * x_step,
+        ),
+        y: (
+            (y0 / y_step).floor() * y_step,
+            (y1 / y_step).ceil() * y_step,
+        ),
+        log_x: false,
+        log_y: false,
+    };
+    let path = xs
+        .iter()
+        .zip(ys)
+        .filter(|(x, y)| x.is_finite() && y.is_finite())
+        .enumerate()
+        .map(|(i, (&x, &y))| {
+            let (sx, sy) = frame.to_svg(x, y);
+            format!("{}{sx:.1},{sy:.1}", if i == 0 { "M" } else { " L" })
+        })
+        .collect();
+    LineChart {
+        frame,
+        path,
+        x_step,
+        y_step,
+    }
+}
+
+#[cfg(test)]
+mod line_tests {
+    use super::*;
+
+    #[test]
+    fn line_chart_frames_with_round_bounds() {
+        let c = line_chart(&[0.0, 0.05, 0.1], &[30.0, 12.0, 7.0], &[60.0], 400.0, 200.0);
+        assert_eq!(c.frame.x, (0.0, 0.1));
+        assert_eq!(c.frame.y, (0.0, 60.0));
+        assert_eq!(c.x_step, 0.02);
+        assert!(c.path.starts_with('M') && !c.path.contains("NaN"));
+        assert_eq!(nice_step(0.0), 1.0);
+    }
+}

@@ -58,6 +58,18 @@ pub fn surface_loss(
     emissivity: f64,
     t_sur: f64,
 ) -> Result<SurfaceLoss, EngineError> {
+    surface_loss_with(stream, d, ts, emissivity, t_sur, None)
+}
+
+/// As [`surface_loss`] with the recommended forced correlation held at index `fixed`.
+pub fn surface_loss_with(
+    stream: &Body,
+    d: f64,
+    ts: f64,
+    emissivity: f64,
+    t_sur: f64,
+    fixed: Option<usize>,
+) -> Result<SurfaceLoss, EngineError> {
     let area = if stream.shape.is_sphere() {
         std::f64::consts::PI * d * d
     } else {
@@ -78,11 +90,14 @@ pub fn surface_loss(
             analysis: None,
         });
     }
-    let a = body::analyse(&Body {
-        d,
-        t_s: ts,
-        ..*stream
-    })?;
+    let a = body::analyse_with(
+        &Body {
+            d,
+            t_s: ts,
+            ..*stream
+        },
+        fixed,
+    )?;
     Ok(SurfaceLoss {
         q_conv: area * a.h * (ts - stream.t_inf),
         q_rad,
@@ -109,10 +124,55 @@ pub struct Solution {
     pub residual: f64,
     /// Critical radius for the outer layer (k at its mean temperature, h = h_conv + h_rad), m.
     pub critical_radius: Option<f64>,
+    /// The recommended correlation differs on the two sides of this solution (see [`solve`]).
+    pub switched: bool,
 }
 
 /// Solve the surface energy balance.
+///
+/// The recommended forced correlation can change with the surface temperature (a range holds on
+/// one side of a limit and not the other), which would make the surface loss jump. So it is held
+/// fixed while solving: first the one recommended with the surface at the process temperature;
+/// if the solution recommends another, the balance is solved again with that one. Should it flip
+/// back, the second choice is kept and `switched` says so.
 pub fn solve(job: &Job) -> Result<Solution, EngineError> {
+    let s = &job.stream;
+    let start = if (job.process_temp - s.t_inf).abs() < 1e-9 {
+        None
+    } else {
+        Some(
+            body::analyse(&Body {
+                d: 2.0 * job.construction.r_out(),
+                t_s: job.process_temp,
+                ..*s
+            })?
+            .recommended,
+        )
+    };
+    let first = solve_fixed(job, start)?;
+    let free_at = |sol: &Solution| -> Result<Option<usize>, EngineError> {
+        if (sol.t_surface - s.t_inf).abs() < 1e-9 {
+            return Ok(None);
+        }
+        Ok(Some(
+            body::analyse(&Body {
+                d: sol.outer_d,
+                t_s: sol.t_surface,
+                ..*s
+            })?
+            .recommended,
+        ))
+    };
+    let at_first = free_at(&first)?;
+    if at_first.is_none() || at_first == start {
+        return Ok(first);
+    }
+    let mut second = solve_fixed(job, at_first)?;
+    second.switched = free_at(&second)? != at_first;
+    Ok(second)
+}
+
+fn solve_fixed(job: &Job, fixed: Option<usize>) -> Result<Solution, EngineError> {
     let s = &job.stream;
     let (tp, tinf, tsur) = (job.process_temp, s.t_inf, job.t_surround);
     let t_lo = tp.min(tinf).min(tsur);
@@ -141,7 +201,7 @@ pub fn solve(job: &Job) -> Result<Solution, EngineError> {
     let mut residual = |q: f64| -> f64 {
         let (t_bore, t) = surface_of(q);
         let ts = t.last().copied().unwrap_or(t_bore);
-        match surface_loss(s, outer_d, ts, job.emissivity, tsur) {
+        match surface_loss_with(s, outer_d, ts, job.emissivity, tsur, fixed) {
             Ok(l) => l.q_conv + l.q_rad - q,
             Err(e) => {
                 failure.get_or_insert(e);
@@ -204,7 +264,7 @@ pub fn solve(job: &Job) -> Result<Solution, EngineError> {
     let q = finite_result("heat flow", root.x)?;
     let (t_bore, interfaces) = surface_of(q);
     let t_surface = interfaces.last().copied().unwrap_or(t_bore);
-    let loss = surface_loss(s, outer_d, t_surface, job.emissivity, tsur)?;
+    let loss = surface_loss_with(s, outer_d, t_surface, job.emissivity, tsur, fixed)?;
     let h_total = loss.h_conv + loss.h_rad;
     let critical_radius = job.construction.layers.last().and_then(|l| {
         let n = interfaces.len();
@@ -222,6 +282,7 @@ pub fn solve(job: &Job) -> Result<Solution, EngineError> {
         outer_d,
         iterations: root.iterations,
         critical_radius,
+        switched: false,
     })
 }
 

@@ -304,6 +304,55 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
     })
 }
 
+/// Lumped cooling (or warming) of a solid round bar or sphere in the stream: the time constant
+/// τ = ρ·c·V/(h·A) with V/A = D/4 (long cylinder, ends left out) or D/6 (sphere), the time from
+/// `t0` to `t1`, and the Biot number h·(V/A)/k, with the usual validity Bi < 0.1 (Incropera &
+/// DeWitt §5.2, from memory). `h` is convection plus linearised radiation at the present surface.
+pub fn lumped(
+    sphere: bool,
+    d: f64,
+    h: f64,
+    (k, rho, cp): (f64, f64, f64),
+    t_inf: f64,
+    t0: f64,
+    t1: f64,
+) -> Verdict {
+    let lc = if sphere { d / 6.0 } else { d / 4.0 };
+    let tau = rho * cp * lc / h;
+    let bi = h * lc / k;
+    let between = (t1 - t_inf) * (t0 - t_inf) > 0.0 && (t1 - t_inf).abs() < (t0 - t_inf).abs();
+    let mut figures = vec![
+        ("time constant τ (63 % of the way)", tau, Dim::Duration),
+        ("Biot number h·(V/A)/k", bi, Dim::Ratio),
+    ];
+    let mut summary =
+        String::from("Lumped body: one temperature throughout, h held at its present value.");
+    if between {
+        figures.insert(
+            1,
+            (
+                "time to the target temperature",
+                tau * ((t0 - t_inf) / (t1 - t_inf)).ln(),
+                Dim::Duration,
+            ),
+        );
+    } else {
+        summary.push_str(" The target temperature must lie between the present surface temperature and the stream's.");
+    }
+    let ok = bi < 0.1;
+    if !ok {
+        summary.push_str(" Bi ≥ 0.1: the inside is not at one temperature, so the lumped times are too short; a conduction solution is needed.");
+    }
+    Verdict {
+        id: "cooling",
+        title: "Cooling in the stream",
+        ok,
+        summary,
+        figures,
+        caution: None,
+    }
+}
+
 /// Nominal pipe sizes and their outside diameters, m: ASME B36.10M (from memory; the ODs are the
 /// same in EN 10220's series 1 to the rounding shown).
 pub const NOMINAL_SIZES: [(&str, f64); 19] = [
@@ -375,6 +424,41 @@ mod tests {
         let c = WATER_RHO * std::f64::consts::PI * r_in * r_in * WATER_CP;
         let rt = 20.0 / r.solution.q;
         assert!((cool - c * rt * 2f64.ln()).abs() < 1e-9 * cool);
+    }
+
+    /// A 10 mm copper sphere, h = 100 W/(m²·K): τ = ρc(D/6)/h = 8933·385·0.01/6/100 = 57.32 s (hand
+    /// arithmetic); Bi = 100·0.01/6/401 = 4.2×10⁻³, lumping valid.
+    #[test]
+    fn lumped_sphere_by_hand() {
+        let v = lumped(
+            true,
+            0.01,
+            100.0,
+            (401.0, 8933.0, 385.0),
+            300.0,
+            400.0,
+            300.0 + 100.0 / std::f64::consts::E,
+        );
+        assert!(
+            (v.figures[0].1 - 57.320_083).abs() < 1e-3,
+            "{}",
+            v.figures[0].1
+        );
+        assert!(
+            (v.figures[1].1 - v.figures[0].1).abs() < 1e-9,
+            "one time constant to 1/e"
+        );
+        assert!(v.ok);
+        let thick = lumped(
+            false,
+            0.3,
+            100.0,
+            (0.5, 1000.0, 1000.0),
+            300.0,
+            400.0,
+            350.0,
+        );
+        assert!(!thick.ok, "a thick poor conductor fails the Biot check");
     }
 
     #[test]

@@ -139,6 +139,8 @@ pub struct Scenario {
     /// Price per joule.
     pub price: f64,
     pub efficiency: f64,
+    /// Target temperature for the lumped cooling of a solid body, K.
+    pub cool_target: f64,
 }
 
 /// The demo that opens by default (invented): a bare 2-inch line (60.3 mm outside diameter), a
@@ -193,6 +195,7 @@ pub const DEMO: Scenario = Scenario {
     // 0.06 per kWh (invented for the demo).
     price: 0.06 / 3.6e6,
     efficiency: 0.8,
+    cool_target: 313.15,
 };
 
 pub const DEMO_TITLE: &str = "Demo: a bare 2-inch line on a windy roof";
@@ -239,6 +242,7 @@ pub enum Field {
     Hours,
     Price,
     Efficiency,
+    CoolTarget,
 }
 
 /// The group a field is shown in.
@@ -291,7 +295,7 @@ const fn f(
 }
 
 #[rustfmt::skip]
-pub const FIELDS: [FieldSpec; 39] = [
+pub const FIELDS: [FieldSpec; 40] = [
     f(Field::Diameter, Group::Body, "D", "Size D", Dim::Length, (0.0, true, 100.0), "as drawn: the width across the stream (bare outside diameter of a pipe)"),
     f(Field::Length, Group::Body, "L", "Length", Dim::RunLength, (0.0, true, 10_000.0), "along the axis; the height when upright"),
     f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air"),
@@ -331,6 +335,7 @@ pub const FIELDS: [FieldSpec; 39] = [
     f(Field::Hours, Group::Job, "hy", "Operating hours", Dim::HoursPerYear, (0.0, false, 8784.0), "per year"),
     f(Field::Price, Group::Job, "pe", "Energy price", Dim::EnergyPrice, (0.0, false, 1e-4), "of the fuel or power that makes up the loss"),
     f(Field::Efficiency, Group::Job, "ef", "Heater or boiler efficiency", Dim::Fraction, (0.0, true, 1.0), "share of that energy that becomes heat"),
+    f(Field::CoolTarget, Group::Job, "T1", "Cool or warm a solid body to", Dim::Temperature, (0.0, true, 3000.0), "its cooling time in this stream (material above)"),
 ];
 
 pub fn spec(field: Field) -> &'static FieldSpec {
@@ -382,6 +387,7 @@ impl Scenario {
             Field::Hours => self.hours,
             Field::Price => self.price,
             Field::Efficiency => self.efficiency,
+            Field::CoolTarget => self.cool_target,
         }
     }
 
@@ -426,6 +432,7 @@ impl Scenario {
             Field::Hours => &mut self.hours,
             Field::Price => &mut self.price,
             Field::Efficiency => &mut self.efficiency,
+            Field::CoolTarget => &mut self.cool_target,
         };
         *slot = v;
     }
@@ -462,6 +469,7 @@ impl Scenario {
                 self.solved() && self.layer_count >= 3
             }
             Field::MassFlow | Field::ProcessCp => self.solved() && self.shape == Shape::Cylinder,
+            Field::CoolTarget => self.cools(),
             _ => true,
         }
     }
@@ -478,6 +486,11 @@ impl Scenario {
     pub fn solved(&self) -> bool {
         self.surface_mode == SurfaceMode::Solved
             && matches!(self.shape, Shape::Cylinder | Shape::Sphere)
+    }
+
+    /// Whether the lumped cooling of a solid round bar or sphere is offered (surface typed).
+    pub fn cools(&self) -> bool {
+        !self.solved() && matches!(self.shape, Shape::Cylinder | Shape::Sphere)
     }
 
     /// Conductivity of insulation layer `i` as k(θ) through the two data-sheet points.
@@ -530,10 +543,24 @@ impl Scenario {
     pub fn fluid(&self) -> Fluid {
         match self.fluid {
             FluidKind::DryAir => Fluid::DryAir,
-            FluidKind::HumidAir => Fluid::HumidAir(match self.humidity_input {
-                HumidityInput::Relative => Humidity::Relative(self.relative_humidity),
-                HumidityInput::DewPoint => Humidity::DewPoint(self.dew_point),
-            }),
+            FluidKind::HumidAir => {
+                // The moisture is the stream's: fixed as a vapour pressure at T∞ and p, and carried
+                // to the film and surface temperatures (not the same relative humidity there).
+                let given = match self.humidity_input {
+                    HumidityInput::Relative => Humidity::Relative(self.relative_humidity),
+                    HumidityInput::DewPoint => Humidity::DewPoint(self.dew_point),
+                };
+                Fluid::HumidAir(
+                    match crate::engine::props::humid_air::moisture(
+                        self.fluid_temp,
+                        self.pressure_pa(),
+                        given,
+                    ) {
+                        Ok(m) => Humidity::VapourPressure(m.vapour_pressure),
+                        Err(_) => given,
+                    },
+                )
+            }
             FluidKind::Water => Fluid::Water,
             FluidKind::Steam => Fluid::Steam,
             FluidKind::EthyleneGlycol => Fluid::Glycol(Glycol::Ethylene, self.glycol_fraction),
@@ -660,6 +687,12 @@ pub struct Outcome {
     /// Energy bought per year to make up the loss, J/yr, and its cost per year.
     pub annual_energy: f64,
     pub annual_cost: f64,
+    /// Loss and surface temperature against the outer layer's thickness (solved, with layers):
+    /// (thickness m, heat flow W, surface K).
+    pub thickness_sweep: Vec<(f64, f64, f64)>,
+    /// Heat-transfer coefficient and heat flow against stream speed 0–20 m/s: (speed m/s,
+    /// h W/(m²·K), heat flow W, surface K).
+    pub wind_sweep: Vec<(f64, f64, f64, f64)>,
     /// The recommended forced correlation's name.
     pub method: &'static str,
     pub regime: &'static str,
@@ -761,6 +794,29 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
     } else {
         (body::analyse(&stream)?, s.surface_temp, s.diameter, None)
     };
+    let thickness_sweep = match &job_result {
+        Some(_) if s.layer_count > 0 => {
+            let i = s.layer_count - 1;
+            let top = (2.0 * s.layer_t[i]).max(0.1);
+            (0..=20)
+                .filter_map(|k| {
+                    let mut t = *s;
+                    t.layer_t[i] = top * k as f64 / 20.0;
+                    let o = quick(&t, p, fluid, &targets).ok()?;
+                    Some((t.layer_t[i], o.0, o.1))
+                })
+                .collect()
+        }
+        _ => Vec::new(),
+    };
+    let wind_sweep = (0..=20)
+        .filter_map(|k| {
+            let mut t = *s;
+            t.speed = k as f64;
+            let o = quick(&t, p, fluid, &targets).ok()?;
+            Some((t.speed, o.2, o.0, o.1))
+        })
+        .collect();
     let film = a.film.t;
     let rec = a.recommended().clone();
     let h = a.h;
@@ -779,10 +835,23 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
     let q_total = finite_result("heat flow", q_unit * run)?;
     let annual_energy = q_total.abs() * s.hours * 3600.0 / s.efficiency;
     let annual_cost = annual_energy * s.price;
-    let verdicts = match &job_result {
+    let mut verdicts = match &job_result {
         Some(r) => r.verdicts.clone(),
         None => given_verdicts(s, ts, dew_point),
     };
+    if s.cools() {
+        if let Some(m) = s.wall.properties() {
+            verdicts.push(crate::engine::job::lumped(
+                s.shape == Shape::Sphere,
+                outer_d,
+                h + h_rad,
+                m,
+                s.fluid_temp,
+                ts,
+                s.cool_target,
+            ));
+        }
+    }
     let nusselt = finite_result("Nusselt number", h * outer_d / a.film.k)?;
 
     for props in [&a.film, &a.free, &a.surface] {
@@ -853,12 +922,61 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
         verdicts,
         annual_energy,
         annual_cost,
+        thickness_sweep,
+        wind_sweep,
         method: rec.name,
         regime: s.shape.regime(rec.groups.re),
         analysis: a,
         flags,
         working,
     })
+}
+
+/// The heat flow (W, whole run or body), surface temperature and convective h of a scenario, without
+/// the working or the verdicts: what the sweeps need.
+fn quick(s: &Scenario, p: f64, fluid: Fluid, _t: &Targets) -> Result<(f64, f64, f64), EngineError> {
+    let stream = Body {
+        shape: s.shape,
+        axis: s.axis,
+        wind: if s.uses_wind() {
+            s.wind
+        } else {
+            Wind::Horizontal
+        },
+        d: s.diameter,
+        length: s.length,
+        speed: s.speed,
+        t_inf: s.fluid_temp,
+        t_s: s.surface_temp,
+        p,
+        fluid,
+    };
+    let run = if s.shape == Shape::Sphere {
+        1.0
+    } else {
+        s.length
+    };
+    if s.solved() {
+        let job = Job {
+            stream,
+            process_temp: s.process_temp,
+            h_inside: (s.h_inside > 0.0).then_some(s.h_inside),
+            construction: s.construction(),
+            emissivity: s.emissivity,
+            t_surround: s.t_surround,
+        };
+        let sol = crate::engine::heatloss::solve(&job)?;
+        Ok((sol.q * run, sol.t_surface, sol.loss.h_conv))
+    } else {
+        let l = crate::engine::heatloss::surface_loss(
+            &stream,
+            s.diameter,
+            s.surface_temp,
+            s.emissivity,
+            s.t_surround,
+        )?;
+        Ok(((l.q_conv + l.q_rad) * run, s.surface_temp, l.h_conv))
+    }
 }
 
 struct WorkingInputs<'a> {
@@ -1131,6 +1249,8 @@ pub fn to_fragment(s: &Scenario, system: System) -> String {
     }
     if s.solved() {
         out.push_str(&format!("&wm={}&nl={}", s.wall.id(), s.layer_count));
+    } else if s.cools() {
+        out.push_str(&format!("&wm={}", s.wall.id()));
     }
     out.push_str(match s.pressure_input {
         PressureInput::Absolute => "&pm=p",
@@ -1347,6 +1467,49 @@ mod tests {
         b.layer_count = 0;
         let ob = evaluate(&b).unwrap();
         assert!((ob.q_total - j.bare.as_ref().unwrap().q * s.length).abs() < 1e-9 * ob.q_total);
+    }
+
+    #[test]
+    fn sweeps_pass_through_the_operating_point() {
+        let o = evaluate(&DEMO).unwrap();
+        let at7 = o.wind_sweep.iter().find(|w| w.0 == 7.0).unwrap();
+        assert!((at7.2 - o.q_total).abs() <= 1e-12 * o.q_total.abs());
+        assert!((at7.1 - o.h).abs() <= 1e-12 * o.h);
+        assert!(o.thickness_sweep.is_empty());
+        let s = solved_demo();
+        let o = evaluate(&s).unwrap();
+        // 0.1 m span, 21 points: 40 mm is the 9th (k = 8).
+        let at = o.thickness_sweep[8];
+        assert!((at.0 - s.layer_t[0]).abs() < 1e-15);
+        assert!((at.1 - o.q_total).abs() <= 1e-9 * o.q_total.abs());
+        // More insulation: less loss, cooler surface, all along the sweep.
+        for w in o.thickness_sweep.windows(2).skip(1) {
+            assert!(w[1].1 < w[0].1 && w[1].2 < w[0].2);
+        }
+    }
+
+    /// Humid air keeps the stream's moisture at every temperature it is evaluated at: a 150 °C
+    /// line in 5 °C air at 70 % RH is computed (70 % RH at 150 °C would be more vapour than the air
+    /// can hold), and the film properties use the stream's vapour pressure.
+    #[test]
+    fn humid_air_carries_the_streams_vapour_pressure() {
+        let mut s = solved_demo();
+        s.process_temp = 423.15;
+        let o = evaluate(&s).unwrap();
+        let m = crate::engine::props::humid_air::moisture(
+            s.fluid_temp,
+            101_325.0,
+            Humidity::Relative(0.7),
+        )
+        .unwrap();
+        let film = crate::engine::props::humid_air::properties(
+            o.film_temp,
+            101_325.0,
+            Humidity::VapourPressure(m.vapour_pressure),
+        )
+        .unwrap();
+        assert_eq!(o.properties[0].props.mu, film.mu);
+        assert!((o.dew_point.unwrap() - m.dew_point).abs() < 1e-9);
     }
 
     #[test]

@@ -338,8 +338,8 @@ pub fn App() -> impl IntoView {
             .map(|m| view! { <option value=m.id() prop:selected=move || scenario.with(|s| s.wall == m)>{m.label()}</option> })
             .collect_view();
         view! {
-            <div class="field" class:hidden=move || !scenario.with(|s| s.solved())>
-                <label for="in-wall">"Wall material"<small>"k in W/(m·K) near 300 K, Incropera & DeWitt Table A.1"</small></label>
+            <div class="field" class:hidden=move || !scenario.with(|s| s.solved() || s.cools())>
+                <label for="in-wall">{move || if scenario.with(|s| s.solved()) { "Wall material" } else { "Material of the body" }}<small>"k in W/(m·K) near 300 K, Incropera & DeWitt Table A.1"</small></label>
                 <select id="in-wall" class="wide" data-choice="wall" on:change=move |ev| {
                     if let Some(m) = WallMaterial::from_id(&event_target_value(&ev)) {
                         scenario.update(|s| s.wall = m);
@@ -571,6 +571,7 @@ pub fn App() -> impl IntoView {
                 <h2 id="plots-title">"Compare the correlations"</h2>
                 {move || shown.with(|s| s.outcome.as_ref().map(results::nu_re_plot))}
                 {move || shown.with(|s| s.outcome.as_ref().and_then(results::front_plot))}
+                {move || shown.with(|sh| sh.outcome.as_ref().map(|o| results::sweeps(o, &scenario.get(), &choice.get())))}
             </section>
             <footer class="standing">
                 "Results are engineering estimates from published correlations. Check them before you rely on them; local codes and licensed practice govern any decision about safety."

@@ -253,3 +253,200 @@ pub fn verdicts(o: &Outcome, c: &UnitChoice) -> impl IntoView {
     });
     view! { {cards}{layers} }
 }
+
+/// One swept series: label, dimension, values (SI).
+struct Series {
+    label: &'static str,
+    dim: Dim,
+    values: Vec<f64>,
+}
+
+/// A line plot of one series against a swept input, with the operating point, target lines and
+/// the numbers as a table for screen readers.
+#[allow(clippy::too_many_arguments)]
+fn sweep_plot(
+    id: &'static str,
+    title: String,
+    x_label: &'static str,
+    x_dim: Dim,
+    xs: &[f64],
+    y: Series,
+    point: Option<(f64, f64)>,
+    targets: Vec<(&'static str, f64)>,
+    c: &UnitChoice,
+) -> impl IntoView {
+    let (xu, yu) = (c.get(x_dim), c.get(y.dim));
+    let xv: Vec<f64> = xs.iter().map(|v| xu.from_si(*v)).collect();
+    let yv: Vec<f64> = y.values.iter().map(|v| yu.from_si(*v)).collect();
+    let tv: Vec<(&str, f64)> = targets.iter().map(|(l, v)| (*l, yu.from_si(*v))).collect();
+    let also: Vec<f64> = tv.iter().map(|t| t.1).collect();
+    let (w, h) = (480.0, 240.0);
+    let chart = chart::line_chart(&xv, &yv, &also, w, h);
+    let f = &chart.frame;
+    let (l, r, t, b) = f.margin;
+    let xt = f
+        .x_ticks(chart.x_step)
+        .into_iter()
+        .map(|(x, s)| {
+            view! {
+                <line x1=x y1=t x2=x y2={h - b} class="grid"/>
+                <text x=x y={h - b + 16.0} class="tick" text-anchor="middle">{s}</text>
+            }
+        })
+        .collect_view();
+    let yt = f
+        .y_ticks(chart.y_step)
+        .into_iter()
+        .map(|(yy, s)| {
+            view! {
+                <line x1=l y1=yy x2={w - r} y2=yy class="grid"/>
+                <text x={l - 4.0} y={yy + 4.0} class="tick" text-anchor="end">{s}</text>
+            }
+        })
+        .collect_view();
+    let lines = tv
+        .iter()
+        .map(|(label, v)| {
+            let (_, yy) = f.to_svg(f.x.0, *v);
+            view! {
+                <line x1=l y1=yy x2={w - r} y2=yy class="target"/>
+                <text x={w - r - 4.0} y={yy - 4.0} class="tick" text-anchor="end">{label.to_string()}</text>
+            }
+        })
+        .collect_view();
+    let dot = point.map(|(px, py)| {
+        let (sx, sy) = f.to_svg(xu.from_si(px), yu.from_si(py));
+        view! { <circle cx=sx cy=sy r="5" class="op here" data-point=id/> }
+    });
+    let rows = xs
+        .iter()
+        .zip(&y.values)
+        .map(|(x, v)| view! { <tr><td>{format_sig(xu.from_si(*x), 4)}</td><td>{format_sig(yu.from_si(*v), 4)}</td></tr> })
+        .collect_view();
+    view! {
+        <figure class="plot" data-plot=id>
+            <svg viewBox=format!("0 0 {w} {h}") role="img" aria-label=title.clone()>
+                {xt}{yt}{lines}
+                <rect x=l y=t width={w - l - r} height={h - t - b} class="frame"/>
+                <path d=chart.path class="in sweep"/>
+                {dot}
+                <text x={(l + w - r) / 2.0} y={h - 2.0} class="axis" text-anchor="middle">{format!("{x_label} ({})", xu.symbol)}</text>
+                <text x="6" y="14" class="axis">{format!("{} ({})", y.label, yu.symbol)}</text>
+            </svg>
+            <figcaption>{title.clone()}" The dot is this operating point."</figcaption>
+            <table class="sr-only">
+                <caption>{title}</caption>
+                <thead><tr><th scope="col">{format!("{x_label} ({})", xu.symbol)}</th><th scope="col">{format!("{} ({})", y.label, yu.symbol)}</th></tr></thead>
+                <tbody>{rows}</tbody>
+            </table>
+        </figure>
+    }
+}
+
+/// The plots against thickness (solved, with layers) and against stream speed.
+pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice) -> impl IntoView {
+    let mut out = Vec::new();
+    if !o.thickness_sweep.is_empty() {
+        let xs: Vec<f64> = o.thickness_sweep.iter().map(|p| p.0).collect();
+        let outer = s.layer_t[s.layer_count.saturating_sub(1)];
+        out.push(
+            sweep_plot(
+                "loss-thickness",
+                "Heat loss against the outer layer's thickness.".into(),
+                "outer layer thickness",
+                Dim::Length,
+                &xs,
+                Series {
+                    label: "heat loss",
+                    dim: Dim::HeatFlow,
+                    values: o.thickness_sweep.iter().map(|p| p.1).collect(),
+                },
+                Some((outer, o.q_total)),
+                vec![],
+                c,
+            )
+            .into_any(),
+        );
+        let mut targets = vec![("touch limit", s.touch_limit)];
+        if let Some(td) = o.dew_point {
+            targets.push(("dew point + margin", td + s.dew_margin));
+        }
+        out.push(
+            sweep_plot(
+                "surface-thickness",
+                "Surface temperature against the outer layer's thickness.".into(),
+                "outer layer thickness",
+                Dim::Length,
+                &xs,
+                Series {
+                    label: "surface",
+                    dim: Dim::Temperature,
+                    values: o.thickness_sweep.iter().map(|p| p.2).collect(),
+                },
+                Some((outer, o.surface_temp)),
+                targets,
+                c,
+            )
+            .into_any(),
+        );
+    }
+    let xs: Vec<f64> = o.wind_sweep.iter().map(|p| p.0).collect();
+    out.push(
+        sweep_plot(
+            "loss-wind",
+            "Heat loss against stream speed, 0–20 m/s.".into(),
+            "stream speed",
+            Dim::Speed,
+            &xs,
+            Series {
+                label: "heat loss",
+                dim: Dim::HeatFlow,
+                values: o.wind_sweep.iter().map(|p| p.2).collect(),
+            },
+            Some((s.speed, o.q_total)),
+            vec![],
+            c,
+        )
+        .into_any(),
+    );
+    if s.solved() {
+        out.push(
+            sweep_plot(
+                "surface-wind",
+                "Surface temperature against stream speed, 0–20 m/s.".into(),
+                "stream speed",
+                Dim::Speed,
+                &xs,
+                Series {
+                    label: "surface",
+                    dim: Dim::Temperature,
+                    values: o.wind_sweep.iter().map(|p| p.3).collect(),
+                },
+                Some((s.speed, o.surface_temp)),
+                vec![("touch limit", s.touch_limit)],
+                c,
+            )
+            .into_any(),
+        );
+    } else {
+        out.push(
+            sweep_plot(
+                "h-wind",
+                "Convective coefficient against stream speed, 0–20 m/s.".into(),
+                "stream speed",
+                Dim::Speed,
+                &xs,
+                Series {
+                    label: "h",
+                    dim: Dim::HeatTransferCoefficient,
+                    values: o.wind_sweep.iter().map(|p| p.1).collect(),
+                },
+                Some((s.speed, o.h)),
+                vec![],
+                c,
+            )
+            .into_any(),
+        );
+    }
+    out.collect_view()
+}

@@ -478,6 +478,24 @@ async fn exercise(c: &Client, base: &str) {
         .await,
         json!(1)
     );
+    for plot in [
+        "loss-thickness",
+        "surface-thickness",
+        "loss-wind",
+        "surface-wind",
+    ] {
+        assert_eq!(
+            js(
+                c,
+                &format!(
+                    "return document.querySelectorAll('[data-plot={plot}] [data-point]').length;"
+                )
+            )
+            .await,
+            json!(1),
+            "plot {plot} missing or without its operating point"
+        );
+    }
     // Bare: no layer fields, the loss of the bare line.
     c.find(Locator::Css("[data-layers='0']"))
         .await

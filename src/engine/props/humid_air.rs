@@ -29,6 +29,10 @@ pub enum Humidity {
     Relative(f64),
     /// Dew point (frost point below 0 °C), K.
     DewPoint(f64),
+    /// A fixed vapour partial pressure, Pa: the moisture of a stream carried to another
+    /// temperature (film, surface). Where it exceeds saturation at that temperature (a surface
+    /// below the dew point) the air next to it is taken as saturated.
+    VapourPressure(f64),
 }
 
 /// Hyland–Wexler over ice, ASHRAE Handbook–Fundamentals (2017) Ch. 1 Eq. (5): C1..C7.
@@ -166,6 +170,18 @@ pub fn moisture(t: f64, p: f64, h: Humidity) -> Result<Moisture, EngineError> {
             }
             psat(td)
         }
+        Humidity::VapourPressure(pv) => {
+            finite("vapour pressure", pv)?;
+            if pv < 0.0 {
+                return Err(EngineError::Undefined {
+                    quantity: "vapour pressure",
+                    value: pv,
+                    unit: "Pa",
+                    why: "cannot be negative",
+                });
+            }
+            pv.min(ps)
+        }
     };
     if pv >= p {
         return Err(EngineError::Undefined {
@@ -240,6 +256,28 @@ mod tests {
 
     /// ASHRAE Handbook–Fundamentals, saturation pressure over liquid water (Hyland–Wexler
     /// tabulation): 5, 25, 50, 100 °C, printed to five or six figures; IF97 agrees to ~300 ppm.
+    /// The stream's moisture carried to another temperature keeps its vapour pressure, and is
+    /// capped at saturation below the dew point.
+    #[test]
+    fn vapour_pressure_is_carried_and_capped() {
+        let m = moisture(278.15, 101_325.0, Humidity::Relative(0.7)).unwrap();
+        let warm = moisture(
+            338.15,
+            101_325.0,
+            Humidity::VapourPressure(m.vapour_pressure),
+        )
+        .unwrap();
+        assert_eq!(warm.vapour_pressure, m.vapour_pressure);
+        assert!(warm.relative_humidity < 0.1);
+        let cold = moisture(
+            263.15,
+            101_325.0,
+            Humidity::VapourPressure(m.vapour_pressure),
+        )
+        .unwrap();
+        assert!((cold.vapour_pressure - psat(263.15)).abs() < 1e-12 * psat(263.15));
+    }
+
     #[test]
     fn ashrae_saturation_pressures() {
         for (tc, pa) in [
