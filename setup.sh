@@ -69,6 +69,20 @@ ensure_wasm_opt() {
   fi
 }
 
+AXE_VERSION=4.14.1
+# axe-core (npm registry) for the accessibility check inside the browser tests; kept in .tools/.
+ensure_axe() {
+  local have
+  have=$(node -e "try{console.log(require('./.tools/node_modules/axe-core/package.json').version)}catch(e){}" 2>/dev/null || true)
+  if [ "$have" = "$AXE_VERSION" ]; then
+    log "axe-core $have: present"
+  else
+    log "axe-core: found '${have:-none}', installing $AXE_VERSION from npm into .tools/"
+    mkdir -p .tools
+    npm install --silent --no-audit --no-fund --prefix .tools "axe-core@$AXE_VERSION"
+  fi
+}
+
 apt_updated=0
 apt_install() {
   if [ "$apt_updated" = 0 ]; then apt-get update -qq; apt_updated=1; fi
@@ -90,8 +104,26 @@ tools() {
   ensure_browser
   ensure_trunk
   ensure_wasm_bindgen
+  ensure_axe
   log "fetching crates"
   cargo fetch --quiet
+}
+
+# Size report of dist/, and the budget: the app (wasm + js + css + html) <= 300,000 bytes gzipped.
+APP_BUDGET_GZ=300000
+size_report() {
+  local total=0 f raw gz
+  log "size report (bytes, raw and gzip -9):"
+  for f in dist/*.wasm dist/*.js dist/*.css dist/index.html; do
+    raw=$(wc -c < "$f"); gz=$(gzip -9c "$f" | wc -c); total=$((total + gz))
+    printf '  %-48s %9d %9d\n' "$f" "$raw" "$gz" >&2
+  done
+  printf '  %-48s %9d %9d\n' dist/leeward.html "$(wc -c < dist/leeward.html)" "$(gzip -9c dist/leeward.html | wc -c)" >&2
+  log "app total gzipped: $total bytes (budget $APP_BUDGET_GZ)"
+  if [ "$total" -gt "$APP_BUDGET_GZ" ]; then
+    log "the app is over its size budget"
+    return 1
+  fi
 }
 
 build() {
@@ -99,6 +131,7 @@ build() {
   trunk build --release
   log "building dist/leeward.html (single self-contained file)"
   cargo run --quiet --no-default-features --bin leeward-bundle -- dist
+  size_report
 }
 
 case "${1:-}" in

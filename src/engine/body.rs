@@ -247,9 +247,19 @@ pub fn analyse(b: &Body) -> Result<Analysis, EngineError> {
 /// As [`analyse`], with the recommended correlation fixed to index `fixed` of the shape's list
 /// (a solver holds it fixed while it iterates, so that the answer is continuous in Ts).
 pub fn analyse_with(b: &Body, fixed: Option<usize>) -> Result<Analysis, EngineError> {
+    let free = b.fluid.at(b.t_inf, b.p)?;
+    analyse_given_free(b, fixed, free)
+}
+
+/// As [`analyse_with`], with the free-stream properties already evaluated (they do not change
+/// while a solver varies the surface temperature).
+pub fn analyse_given_free(
+    b: &Body,
+    fixed: Option<usize>,
+    free: Properties,
+) -> Result<Analysis, EngineError> {
     let film_t = 0.5 * (b.t_s + b.t_inf);
     let film = b.fluid.at(film_t, b.p)?;
-    let free = b.fluid.at(b.t_inf, b.p)?;
     let surface = b.fluid.at(b.t_s, b.p)?;
     let gas = b.fluid.is_gas();
 

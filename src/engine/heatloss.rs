@@ -8,6 +8,7 @@
 use crate::engine::body::{self, Analysis, Body};
 use crate::engine::error::{finite_result, EngineError};
 use crate::engine::layers::{critical_radius, Construction, Geometry};
+use crate::engine::props::Properties;
 use crate::engine::solve;
 
 /// Stefan–Boltzmann constant, W/(m²·K⁴) (CODATA 2018, exact in the 2019 SI).
@@ -58,7 +59,7 @@ pub fn surface_loss(
     emissivity: f64,
     t_sur: f64,
 ) -> Result<SurfaceLoss, EngineError> {
-    surface_loss_with(stream, d, ts, emissivity, t_sur, None)
+    surface_loss_with(stream, d, ts, emissivity, t_sur, None, None)
 }
 
 /// As [`surface_loss`] with the recommended forced correlation held at index `fixed`.
@@ -69,6 +70,7 @@ pub fn surface_loss_with(
     emissivity: f64,
     t_sur: f64,
     fixed: Option<usize>,
+    free: Option<&Properties>,
 ) -> Result<SurfaceLoss, EngineError> {
     let area = if stream.shape.is_sphere() {
         std::f64::consts::PI * d * d
@@ -90,14 +92,15 @@ pub fn surface_loss_with(
             analysis: None,
         });
     }
-    let a = body::analyse_with(
-        &Body {
-            d,
-            t_s: ts,
-            ..*stream
-        },
-        fixed,
-    )?;
+    let body = Body {
+        d,
+        t_s: ts,
+        ..*stream
+    };
+    let a = match free {
+        Some(f) => body::analyse_given_free(&body, fixed, f.clone())?,
+        None => body::analyse_with(&body, fixed)?,
+    };
     Ok(SurfaceLoss {
         q_conv: area * a.h * (ts - stream.t_inf),
         q_rad,
@@ -197,11 +200,12 @@ fn solve_fixed(job: &Job, fixed: Option<usize>) -> Result<Solution, EngineError>
         let t = job.construction.march(t_bore, q, t_lo, t_hi);
         (t_bore, t)
     };
+    let free = s.fluid.at(tinf, s.p)?;
     let mut failure: Option<EngineError> = None;
     let mut residual = |q: f64| -> f64 {
         let (t_bore, t) = surface_of(q);
         let ts = t.last().copied().unwrap_or(t_bore);
-        match surface_loss_with(s, outer_d, ts, job.emissivity, tsur, fixed) {
+        match surface_loss_with(s, outer_d, ts, job.emissivity, tsur, fixed, Some(&free)) {
             Ok(l) => l.q_conv + l.q_rad - q,
             Err(e) => {
                 failure.get_or_insert(e);
@@ -264,7 +268,15 @@ fn solve_fixed(job: &Job, fixed: Option<usize>) -> Result<Solution, EngineError>
     let q = finite_result("heat flow", root.x)?;
     let (t_bore, interfaces) = surface_of(q);
     let t_surface = interfaces.last().copied().unwrap_or(t_bore);
-    let loss = surface_loss_with(s, outer_d, t_surface, job.emissivity, tsur, fixed)?;
+    let loss = surface_loss_with(
+        s,
+        outer_d,
+        t_surface,
+        job.emissivity,
+        tsur,
+        fixed,
+        Some(&free),
+    )?;
     let h_total = loss.h_conv + loss.h_rad;
     let critical_radius = job.construction.layers.last().and_then(|l| {
         let n = interfaces.len();

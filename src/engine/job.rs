@@ -109,6 +109,9 @@ pub struct JobResult {
     /// Annual energy bought to make up the loss, J/yr, and its cost per year.
     pub annual_energy: f64,
     pub annual_cost: f64,
+    /// Bore radius and each layer's thickness (the wall first), m, for the cross-section.
+    pub r_in: f64,
+    pub thicknesses: Vec<f64>,
 }
 
 pub const TOUCH_CAUTION: &str = "Hot surfaces burn. The touch limit here is common practice, not a rule: local codes and your employer's personnel-protection standard govern. Guard or insulate, and check the surface with a contact thermometer before anyone touches it.";
@@ -301,6 +304,13 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
         notes,
         annual_energy,
         annual_cost,
+        r_in: job.construction.r_in,
+        thicknesses: job
+            .construction
+            .layers
+            .iter()
+            .map(|l| l.thickness)
+            .collect(),
     })
 }
 

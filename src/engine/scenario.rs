@@ -798,23 +798,25 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
         Some(_) if s.layer_count > 0 => {
             let i = s.layer_count - 1;
             let top = (2.0 * s.layer_t[i]).max(0.1);
-            (0..=20)
-                .filter_map(|k| {
+            grid_with(top, 12, s.layer_t[i])
+                .into_iter()
+                .filter_map(|x| {
                     let mut t = *s;
-                    t.layer_t[i] = top * k as f64 / 20.0;
+                    t.layer_t[i] = x;
                     let o = quick(&t, p, fluid, &targets).ok()?;
-                    Some((t.layer_t[i], o.0, o.1))
+                    Some((x, o.0, o.1))
                 })
                 .collect()
         }
         _ => Vec::new(),
     };
-    let wind_sweep = (0..=20)
-        .filter_map(|k| {
+    let wind_sweep = grid_with(20.0, 10, s.speed)
+        .into_iter()
+        .filter_map(|u| {
             let mut t = *s;
-            t.speed = k as f64;
+            t.speed = u;
             let o = quick(&t, p, fluid, &targets).ok()?;
-            Some((t.speed, o.2, o.0, o.1))
+            Some((u, o.2, o.0, o.1))
         })
         .collect();
     let film = a.film.t;
@@ -930,6 +932,17 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
         flags,
         working,
     })
+}
+
+/// `steps` equal steps over 0..=top, with `also` (the operating point) put in its place, so the
+/// plotted curve passes through the point marked on it.
+fn grid_with(top: f64, steps: usize, also: f64) -> Vec<f64> {
+    let mut g: Vec<f64> = (0..=steps).map(|k| top * k as f64 / steps as f64).collect();
+    if also.is_finite() && also >= 0.0 && !g.contains(&also) {
+        g.push(also);
+        g.sort_by(|a, b| a.total_cmp(b));
+    }
+    g
 }
 
 /// The heat flow (W, whole run or body), surface temperature and convective h of a scenario, without
@@ -1478,8 +1491,11 @@ mod tests {
         assert!(o.thickness_sweep.is_empty());
         let s = solved_demo();
         let o = evaluate(&s).unwrap();
-        // 0.1 m span, 21 points: 40 mm is the 9th (k = 8).
-        let at = o.thickness_sweep[8];
+        let at = *o
+            .thickness_sweep
+            .iter()
+            .find(|p| p.0 == s.layer_t[0])
+            .unwrap();
         assert!((at.0 - s.layer_t[0]).abs() < 1e-15);
         assert!((at.1 - o.q_total).abs() <= 1e-9 * o.q_total.abs());
         // More insulation: less loss, cooler surface, all along the sweep.

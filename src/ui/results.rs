@@ -69,7 +69,7 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
         }
     });
     view! {
-        <div class="table-wrap">
+        <div class="table-wrap" tabindex="0" role="region" aria-label="Correlations side by side (scrolls sideways)">
             <table class="corr" data-table="correlations">
                 <caption>"Every correlation for this shape, each at its own reference temperature"</caption>
                 <thead><tr>
@@ -239,9 +239,11 @@ pub fn verdicts(o: &Outcome, c: &UnitChoice) -> impl IntoView {
             })
             .collect_view();
         let notes = j.notes.iter().map(|n| view! { <p class="flag">"⚠ "{n.clone()}</p> }).collect_view();
+        let section = cross_section(j, c);
         view! {
             <article class="verdict" data-verdict="layers">
                 <h3>"Through the layers"</h3>
+                {section}
                 <ul>
                     <li>"bore: "{with_unit(j.solution.t_bore, Dim::Temperature, c)}</li>
                     {temps}
@@ -334,11 +336,11 @@ fn sweep_plot(
                 <text x="6" y="14" class="axis">{format!("{} ({})", y.label, yu.symbol)}</text>
             </svg>
             <figcaption>{title.clone()}" The dot is this operating point."</figcaption>
-            <table class="sr-only">
+            <div class="sr-only"><table>
                 <caption>{title}</caption>
                 <thead><tr><th scope="col">{format!("{x_label} ({})", xu.symbol)}</th><th scope="col">{format!("{} ({})", y.label, yu.symbol)}</th></tr></thead>
                 <tbody>{rows}</tbody>
-            </table>
+            </table></div>
         </figure>
     }
 }
@@ -449,4 +451,55 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
         );
     }
     out.collect_view()
+}
+
+/// A cross-section of the wall and its layers, drawn to scale (each ring at least 3 px so a thin
+/// wall stays visible), with the temperature at each face.
+fn cross_section(j: &crate::engine::scenario::JobResult, c: &UnitChoice) -> impl IntoView {
+    let sol = &j.solution;
+    let r_out = sol.outer_d / 2.0;
+    let n = sol.interfaces.len();
+    // Radii of every face from the bore out, in metres.
+    let r_bore = j.r_in;
+    let mut faces = vec![r_bore];
+    let mut r = r_bore;
+    for t in &j.thicknesses {
+        r += t;
+        faces.push(r);
+    }
+    let scale = 80.0 / r_out.max(1e-9);
+    let mut px: Vec<f64> = faces.iter().map(|r| r * scale).collect();
+    for i in 1..px.len() {
+        if px[i] - px[i - 1] < 3.0 {
+            px[i] = px[i - 1] + 3.0;
+        }
+    }
+    let rings = (0..n)
+        .rev()
+        .map(|i| {
+            let class = if i == 0 { "ring wall" } else { "ring ins" };
+            view! { <circle cx="90" cy="90" r=px[i + 1] class=class/> }
+        })
+        .collect_view();
+    let temps = std::iter::once(sol.t_bore)
+        .chain(sol.interfaces.iter().copied())
+        .enumerate()
+        .map(|(i, t)| {
+            let y = 20.0 + 18.0 * i as f64;
+            let name = match i {
+                0 => "bore".to_string(),
+                k if k == n => "surface".to_string(),
+                1 => "outside of the wall".to_string(),
+                k => format!("outside of layer {}", k - 1),
+            };
+            view! { <text x="190" y=y class="tick">{format!("{name}: {}", with_unit(t, Dim::Temperature, c))}</text> }
+        })
+        .collect_view();
+    view! {
+        <svg viewBox="0 0 340 180" class="section" role="img" aria-label="Cross-section of the wall and insulation with the temperature at each face">
+            {rings}
+            <circle cx="90" cy="90" r=px[0] class="ring bore"/>
+            {temps}
+        </svg>
+    }
 }

@@ -599,3 +599,72 @@ fn hosted_page_computes_over_loopback_http() {
         c.close().await.unwrap();
     });
 }
+
+/// axe-core's source, installed by `./setup.sh tools` into .tools/ (npm registry).
+fn axe_source() -> Option<String> {
+    let p =
+        PathBuf::from(env!("CARGO_MANIFEST_DIR")).join(".tools/node_modules/axe-core/axe.min.js");
+    std::fs::read_to_string(p).ok()
+}
+
+/// The violations axe-core reports at serious or critical impact.
+async fn axe_serious(c: &Client, axe: &str) -> Vec<String> {
+    c.execute(&format!("{axe}\n;return true;"), vec![])
+        .await
+        .expect("load axe-core");
+    let v = c
+        .execute_async(
+            "const done = arguments[0]; axe.run(document).then(r => done(r.violations.filter(v => v.impact === 'serious' || v.impact === 'critical').map(v => v.id + ' (' + v.impact + '): ' + v.help + ' — ' + v.nodes.slice(0, 3).map(n => n.target.join(' ')).join(', '))));",
+            vec![],
+        )
+        .await
+        .expect("run axe-core");
+    v.as_array()
+        .unwrap()
+        .iter()
+        .map(|s| s.as_str().unwrap().to_string())
+        .collect()
+}
+
+/// Layout at a tablet, a phone and a desktop size without horizontal scrolling, and no serious or
+/// critical accessibility violation (axe-core) in the typed and the solved scenario.
+#[test]
+fn layouts_fit_and_pass_axe_core() {
+    if !ready() {
+        return;
+    }
+    let Some(axe) = axe_source() else {
+        if std::env::var_os("LEEWARD_REQUIRE_BROWSER").is_some() {
+            panic!("axe-core missing: run ./setup.sh tools");
+        }
+        eprintln!("SKIPPED axe-core check: .tools/node_modules/axe-core missing");
+        return;
+    };
+    let _one = BROWSER.lock().unwrap_or_else(|e| e.into_inner());
+    let (_server, base) = serve();
+    run(async {
+        let (_driver, c) = browser().await;
+        let solved = "#v=1&s=cyl&ax=h&w=h&f=humid&sm=x&wm=cs&nl=2&pm=p&hm=rh&D=0.0603&L=12&U=7&Ta=278.15&p=101325&rh=0.7&Tp=423.15&u=si";
+        for (w, h) in [(768u32, 1024u32), (360, 740), (1440, 900)] {
+            c.set_window_size(w, h).await.unwrap();
+            for frag in ["", solved] {
+                c.goto("about:blank").await.unwrap();
+                c.goto(&format!("{base}{frag}")).await.unwrap();
+                wait_rendered(&c).await;
+                let fit = js(
+                    &c,
+                    "return [document.documentElement.scrollWidth, window.innerWidth];",
+                )
+                .await;
+                let (sw, iw) = (fit[0].as_u64().unwrap(), fit[1].as_u64().unwrap());
+                assert!(
+                    sw <= iw,
+                    "{w}×{h} {frag}: page {sw} px wide in a {iw} px window"
+                );
+                let bad = axe_serious(&c, &axe).await;
+                assert!(bad.is_empty(), "{w}×{h} {frag}: axe-core: {bad:#?}");
+            }
+        }
+        c.close().await.unwrap();
+    });
+}

@@ -1,0 +1,106 @@
+//! Browser timing harness (a benchmark, never a timed test): `cargo run --example browser_timing`
+//! after `./setup.sh build`. It drives headless Chromium through ChromeDriver and prints:
+//! - cold start: file:// navigation to the first result shown (median of 10 loads);
+//! - keystroke to updated results: one input event on the diameter field to the results and plots
+//!   rewritten (median and 90th percentile of 200 inputs, timed inside the page with
+//!   `performance.now()`), for the demo and for the solved field job.
+
+use std::process::{Command, Stdio};
+use std::time::Duration;
+
+use fantoccini::{Client, ClientBuilder};
+use serde_json::json;
+
+fn median(mut v: Vec<f64>) -> (f64, f64) {
+    v.sort_by(|a, b| a.partial_cmp(b).unwrap());
+    (v[v.len() / 2], v[v.len() * 9 / 10])
+}
+
+async fn connect(port: u16) -> Client {
+    let caps = json!({
+        "goog:chromeOptions": {
+            "binary": "/usr/bin/chromium",
+            "args": ["--headless=new", "--no-sandbox", "--disable-gpu", "--window-size=768,1024",
+                     "--no-first-run", "--disable-background-networking"]
+        }
+    });
+    for _ in 0..100 {
+        if let Ok(c) = ClientBuilder::new(hyper_util::client::legacy::connect::HttpConnector::new())
+            .capabilities(caps.as_object().unwrap().clone())
+            .connect(&format!("http://127.0.0.1:{port}"))
+            .await
+        {
+            return c;
+        }
+        tokio::time::sleep(Duration::from_millis(100)).await;
+    }
+    panic!("chromedriver did not answer");
+}
+
+const KEYSTROKES: &str = r#"
+const done = arguments[arguments.length - 1];
+const input = document.querySelector('#in-D');
+const out = document.querySelector('[data-quantity=h]');
+const times = [];
+let i = 0;
+function step() {
+  if (i >= 200) { done(times); return; }
+  const before = out.getAttribute('data-si');
+  input.value = (i % 2 === 0) ? '60.4' : '60.3';
+  const t0 = performance.now();
+  input.dispatchEvent(new Event('input', {bubbles: true}));
+  const wait = () => {
+    if (out.getAttribute('data-si') !== before) { times.push(performance.now() - t0); i++; setTimeout(step, 0); }
+    else { queueMicrotask(wait); }
+  };
+  wait();
+}
+step();
+"#;
+
+#[tokio::main(flavor = "current_thread")]
+async fn main() {
+    let page = std::path::PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("dist/leeward.html");
+    assert!(page.is_file(), "build first: ./setup.sh build");
+    let port = 9531;
+    let mut driver = Command::new("/usr/bin/chromedriver")
+        .arg(format!("--port={port}"))
+        .stdout(Stdio::null())
+        .stderr(Stdio::null())
+        .spawn()
+        .expect("chromedriver");
+    let c = connect(port).await;
+    let url = format!("file://{}", page.display());
+
+    let mut cold = Vec::new();
+    for _ in 0..10 {
+        c.goto("about:blank").await.unwrap();
+        c.goto(&url).await.unwrap();
+        let t = c
+            .execute_async(
+                "const done = arguments[0]; const f = () => { const e = document.querySelector('[data-quantity=h]'); if (e && e.getAttribute('data-si')) done(performance.now()); else setTimeout(f, 1); }; f();",
+                vec![],
+            )
+            .await
+            .unwrap();
+        cold.push(t.as_f64().unwrap());
+    }
+    let (m, p90) = median(cold);
+    println!("cold start, file:// to first result: median {m:.1} ms, p90 {p90:.1} ms (10 loads)");
+
+    for (name, frag) in [
+        ("demo (surface typed)", ""),
+        ("field job (solved surface, one layer, plots)", "#v=1&s=cyl&ax=h&w=h&f=humid&sm=x&wm=cs&nl=1&pm=p&hm=rh&D=0.0603&L=12&U=7&Ta=278.15&p=101325&rh=0.7&Tp=423.15&u=si"),
+    ] {
+        c.goto("about:blank").await.unwrap();
+        c.goto(&format!("{url}{frag}")).await.unwrap();
+        tokio::time::sleep(Duration::from_millis(500)).await;
+        let v = c.execute_async(KEYSTROKES, vec![]).await.unwrap();
+        let times: Vec<f64> = v.as_array().unwrap().iter().map(|x| x.as_f64().unwrap()).collect();
+        let (m, p90) = median(times);
+        println!("keystroke to updated results, {name}: median {m:.2} ms, p90 {p90:.2} ms (200 inputs)");
+    }
+    c.close().await.unwrap();
+    let _ = driver.kill();
+    let _ = driver.wait();
+}
