@@ -173,6 +173,8 @@ pub struct Estimate {
     pub h: f64,
     /// k at the reference temperature, W/(m·K).
     pub k: f64,
+    /// The band and constants used (banded tables) or the parts of a composite form.
+    pub detail: Option<String>,
     pub flags: Vec<Flag>,
 }
 
@@ -289,6 +291,7 @@ pub fn analyse_given_free(
             nu_still: (c.nu_still)(&groups),
             h: finite_result("heat-transfer coefficient", value * at.k / b.d)?,
             k: at.k,
+            detail: (c.detail)(&groups),
             flags: nu.flags,
         });
     }

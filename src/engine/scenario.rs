@@ -1134,9 +1134,13 @@ fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step> {
     out.push(Step {
         title: "Forced convection (recommended correlation)",
         text: format!(
-            "{}: {} = {}; h_F = Nu·k/D = {} × {} W/(m·K) / {} m = {} W/(m²·K)",
+            "{}: {}{} = {}; h_F = Nu·k/D = {} × {} W/(m·K) / {} m = {} W/(m²·K)",
             rec.name,
             rec.formula,
+            rec.detail
+                .as_ref()
+                .map(|d| format!(" ({d})"))
+                .unwrap_or_default(),
             g(rec.nu),
             g(rec.nu),
             g(rec.k),

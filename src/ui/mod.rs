@@ -461,6 +461,22 @@ pub fn App() -> impl IntoView {
         }
     };
 
+    // Beside a value the range flags touch: an icon and words, pointing at the notes below.
+    let flag_mark = move || {
+        shown.with(|s| {
+            s.outcome.as_ref().and_then(|o| {
+                let n = o.flags.len();
+                (n > 0).then(|| {
+                    view! {
+                        <span class="flag-mark" data-flag-mark>
+                            {format!("⚠ {n} range note{} below", if n == 1 { "" } else { "s" })}
+                        </span>
+                    }
+                })
+            })
+        })
+    };
+
     view! {
         <header class="bar">
             <h1>"Leeward"</h1>
@@ -526,15 +542,15 @@ pub fn App() -> impl IntoView {
                 </p>
                 {move || shown.with(|s| s.error.clone().filter(|_| s.error_at.is_none()).map(|e| view! { <p class="error" data-error>"⚠ "{e}</p> }))}
                 <dl class="figures">
-                    <div class="main" class:hidden=move || shown.with(|s| s.outcome.as_ref().is_some_and(|o| o.q_per_length.is_none()))><dt>"Heat loss per length"</dt><dd>{out("q_per_length", |o| o.q_per_length, Some(Dim::HeatFlowPerLength))}</dd></div>
-                    <div class="main"><dt>{move || if scenario.with(|s| s.shape == Shape::Sphere) { "Heat loss from the body" } else { "Heat loss over the length L" }}</dt><dd>{out("q_total", |o| Some(o.q_total), Some(Dim::HeatFlow))}</dd></div>
+                    <div class="main" class:hidden=move || shown.with(|s| s.outcome.as_ref().is_some_and(|o| o.q_per_length.is_none()))><dt>"Heat loss per length"</dt><dd>{out("q_per_length", |o| o.q_per_length, Some(Dim::HeatFlowPerLength))}{flag_mark}</dd></div>
+                    <div class="main"><dt>{move || if scenario.with(|s| s.shape == Shape::Sphere) { "Heat loss from the body" } else { "Heat loss over the length L" }}</dt><dd>{out("q_total", |o| Some(o.q_total), Some(Dim::HeatFlow))}{flag_mark}</dd></div>
                     <div class="main"><dt>"Surface temperature"</dt><dd>{out("surface_temperature", |o| Some(o.surface_temp), Some(Dim::Temperature))}</dd></div>
                     <div><dt>"By convection"</dt><dd>{out("q_conv", |o| Some(o.q_conv_total), Some(Dim::HeatFlow))}</dd></div>
                     <div><dt>"By radiation"</dt><dd>{out("q_rad", |o| Some(o.q_rad_total), Some(Dim::HeatFlow))}</dd></div>
                     <div><dt>"Radiation coefficient h_rad"</dt><dd>{out("h_rad", |o| Some(o.h_rad), Some(Dim::HeatTransferCoefficient))}</dd></div>
                     <div><dt>"Energy per year"</dt><dd>{out("annual_energy", |o| Some(o.annual_energy), Some(Dim::EnergyPerYear))}</dd></div>
                     <div><dt>"Cost per year"</dt><dd>{out("annual_cost", |o| Some(o.annual_cost), Some(Dim::MoneyPerYear))}</dd></div>
-                    <div class="main"><dt>"Heat-transfer coefficient h (convection)"</dt><dd>{out("h", |o| Some(o.h), Some(Dim::HeatTransferCoefficient))}</dd></div>
+                    <div class="main"><dt>"Heat-transfer coefficient h (convection)"</dt><dd>{out("h", |o| Some(o.h), Some(Dim::HeatTransferCoefficient))}{flag_mark}</dd></div>
                     <div><dt>"Nusselt number Nu = h·D/k"</dt><dd>{out("nusselt", |o| Some(o.nusselt), None)}</dd></div>
                     <div><dt>"Reynolds number Re (★)"</dt><dd>{out("reynolds", |o| Some(o.reynolds), None)}</dd></div>
                     <div><dt>"Prandtl number Pr (★)"</dt><dd>{out("prandtl", |o| Some(o.prandtl), None)}</dd></div>

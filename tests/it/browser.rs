@@ -367,6 +367,41 @@ async fn exercise(c: &Client, base: &str) {
         si(c, "h").await
     );
 
+    // The working shows the engine's numbers: Re and h as the engine formats them.
+    let working = text_of(c, ".working").await;
+    for v in [want.reynolds, want.h] {
+        let shown = leeward::engine::units::format_sig(v, 5);
+        assert!(working.contains(&shown), "working lacks {shown}: {working}");
+    }
+    // A flag appears when an input leaves a method's range (air at a surface above 1000 K), beside the value
+    // and in the notes, with the quantity, its value and the range.
+    assert_eq!(
+        js(
+            c,
+            "return document.querySelectorAll('[data-flag-mark]').length;"
+        )
+        .await,
+        json!(0)
+    );
+    type_into(c, "Ts", "800").await;
+    let notes = text_of(c, "[data-flags]").await;
+    assert!(
+        notes.contains("T = ") && notes.contains("1000"),
+        "no range flag: {notes}"
+    );
+    assert!(
+        js(
+            c,
+            "return document.querySelectorAll('[data-flag-mark]').length;"
+        )
+        .await
+        .as_u64()
+        .unwrap()
+            > 0
+    );
+    type_into(c, "Ts", "65").await;
+    assert!(close(si(c, "h").await, want.h));
+
     // The correlations side by side: one row per forced correlation, each h from the engine,
     // the recommended one marked; the plot draws a curve per correlation.
     let rows = js(c, "return [...document.querySelectorAll('[data-table=correlations] tbody:first-of-type tr')].map(r => [r.dataset.correlation, r.dataset.h, r.classList.contains('recommended')]);").await;
@@ -647,7 +682,8 @@ fn layouts_fit_and_pass_axe_core() {
         let solved = "#v=1&s=cyl&ax=h&w=h&f=humid&sm=x&wm=cs&nl=2&pm=p&hm=rh&D=0.0603&L=12&U=7&Ta=278.15&p=101325&rh=0.7&Tp=423.15&u=si";
         for (w, h) in [(768u32, 1024u32), (360, 740), (1440, 900)] {
             c.set_window_size(w, h).await.unwrap();
-            for frag in ["", solved] {
+            let solved_us = solved.replace("u=si", "u=us");
+            for frag in ["", solved, solved_us.as_str()] {
                 c.goto("about:blank").await.unwrap();
                 c.goto(&format!("{base}{frag}")).await.unwrap();
                 wait_rendered(&c).await;

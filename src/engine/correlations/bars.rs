@@ -7,7 +7,7 @@
 //! The characteristic length D is the bar's width across the flow, as drawn on the page; the
 //! properties are taken at the film temperature. The table is for gases.
 
-use super::{zero, Forced, Groups, Reference};
+use super::{band_text, zero, Forced, Groups, Reference};
 use crate::engine::validity::{Bands, Flagged, Range};
 
 const JAKOB: &str = "Jakob (1949)";
@@ -89,22 +89,39 @@ impl Table {
     }
 }
 
+impl Table {
+    /// The band and constants used at this Reynolds number, for the working.
+    pub fn detail(&self, re: f64) -> String {
+        let (i, _) = self.bands.locate(self.name, re);
+        let (c, m) = self.constants[i];
+        band_text(&self.bands, i, c, m)
+    }
+}
+
 macro_rules! forced {
-    ($fname:ident, $table:ident) => {
+    ($fname:ident, $dname:ident, $table:ident) => {
         fn $fname(g: &Groups) -> Flagged<f64> {
             $table.nu(g.re, g.pr)
         }
+        fn $dname(g: &Groups) -> Option<String> {
+            Some($table.detail(g.re))
+        }
     };
 }
-forced!(square_face, SQUARE_FACE);
-forced!(square_corner, SQUARE_CORNER);
-forced!(hex_face, HEX_FACE);
-forced!(hex_corner, HEX_CORNER);
-forced!(plate, PLATE);
+forced!(square_face, square_face_detail, SQUARE_FACE);
+forced!(square_corner, square_corner_detail, SQUARE_CORNER);
+forced!(hex_face, hex_face_detail, HEX_FACE);
+forced!(hex_corner, hex_corner_detail, HEX_CORNER);
+forced!(plate, plate_detail, PLATE);
 
 const FORMULA: &str = "Nu = C·Re^m·Pr^⅓, C and m by Reynolds band (Jakob's table, gases)";
 
-const fn entry(id: &'static str, t: &Table, nu: fn(&Groups) -> Flagged<f64>) -> Forced {
+const fn entry(
+    id: &'static str,
+    t: &Table,
+    nu: fn(&Groups) -> Flagged<f64>,
+    detail: fn(&Groups) -> Option<String>,
+) -> Forced {
     Forced {
         id,
         name: t.name,
@@ -112,15 +129,35 @@ const fn entry(id: &'static str, t: &Table, nu: fn(&Groups) -> Flagged<f64>) -> 
         formula: FORMULA,
         nu,
         nu_still: zero,
+        detail,
     }
 }
 
-pub const SQUARE_FACE_FORCED: [Forced; 1] = [entry("jakob-square-face", &SQUARE_FACE, square_face)];
-pub const SQUARE_CORNER_FORCED: [Forced; 1] =
-    [entry("jakob-square-corner", &SQUARE_CORNER, square_corner)];
-pub const HEX_FACE_FORCED: [Forced; 1] = [entry("jakob-hex-face", &HEX_FACE, hex_face)];
-pub const HEX_CORNER_FORCED: [Forced; 1] = [entry("jakob-hex-corner", &HEX_CORNER, hex_corner)];
-pub const PLATE_FORCED: [Forced; 1] = [entry("jakob-plate", &PLATE, plate)];
+pub const SQUARE_FACE_FORCED: [Forced; 1] = [entry(
+    "jakob-square-face",
+    &SQUARE_FACE,
+    square_face,
+    square_face_detail,
+)];
+pub const SQUARE_CORNER_FORCED: [Forced; 1] = [entry(
+    "jakob-square-corner",
+    &SQUARE_CORNER,
+    square_corner,
+    square_corner_detail,
+)];
+pub const HEX_FACE_FORCED: [Forced; 1] = [entry(
+    "jakob-hex-face",
+    &HEX_FACE,
+    hex_face,
+    hex_face_detail,
+)];
+pub const HEX_CORNER_FORCED: [Forced; 1] = [entry(
+    "jakob-hex-corner",
+    &HEX_CORNER,
+    hex_corner,
+    hex_corner_detail,
+)];
+pub const PLATE_FORCED: [Forced; 1] = [entry("jakob-plate", &PLATE, plate, plate_detail)];
 
 #[cfg(test)]
 mod tests {

@@ -1,6 +1,6 @@
 //! Circular cylinder in cross-flow: mean Nusselt number over the circumference, on the diameter D.
 
-use super::{zero, Forced, Groups, Reference};
+use super::{band_text, no_detail, zero, Forced, Groups, Reference};
 use crate::engine::validity::{Bands, Flagged, Range};
 
 /// Churchill & Bernstein's lower bound on Re·Pr.
@@ -175,6 +175,33 @@ fn gn_still(g: &Groups) -> f64 {
     0.3 * k / std::f64::consts::FRAC_PI_2
 }
 
+fn hp_detail(g: &Groups) -> Option<String> {
+    let (i, _) = HILPERT_BANDS.locate(HILPERT, g.re);
+    let (c, m) = HILPERT_CONSTANTS[i];
+    Some(band_text(&HILPERT_BANDS, i, c, m))
+}
+fn zk_detail(g: &Groups) -> Option<String> {
+    let (i, _) = ZUKAUSKAS_BANDS.locate(ZUKAUSKAS, g.re);
+    let (c, m) = ZUKAUSKAS_CONSTANTS[i];
+    let n = if g.pr <= 10.0 { 0.37 } else { 0.36 };
+    Some(format!(
+        "{}, n = {n}; Pr/Pr_s = {}",
+        band_text(&ZUKAUSKAS_BANDS, i, c, m),
+        crate::engine::units::format_sig(g.pr / g.pr_s, 4)
+    ))
+}
+fn gn_detail(g: &Groups) -> Option<String> {
+    let re_l = g.re * std::f64::consts::FRAC_PI_2;
+    let (lam, turb) = flat_plate_parts(re_l, g.pr);
+    let f = |v: f64| crate::engine::units::format_sig(v, 4);
+    Some(format!(
+        "Re_l = {}, Nu_lam = {}, Nu_turb = {}",
+        f(re_l),
+        f(lam),
+        f(turb)
+    ))
+}
+
 /// The forced-convection correlations for a circular cylinder, recommended one first.
 pub const FORCED: [Forced; 4] = [
     Forced {
@@ -184,6 +211,7 @@ pub const FORCED: [Forced; 4] = [
         formula: "Nu = 0.3 + 0.62·Re^½·Pr^⅓ / [1 + (0.4/Pr)^⅔]^¼ · [1 + (Re/282000)^⅝]^⅘",
         nu: cb,
         nu_still: cb_still,
+        detail: no_detail,
     },
     Forced {
         id: "hilpert",
@@ -192,6 +220,7 @@ pub const FORCED: [Forced; 4] = [
         formula: "Nu = C·Re^m·Pr^⅓, C and m by Reynolds band (Knudsen & Katz)",
         nu: hp,
         nu_still: zero,
+        detail: hp_detail,
     },
     Forced {
         id: "zukauskas",
@@ -200,6 +229,7 @@ pub const FORCED: [Forced; 4] = [
         formula: "Nu = C·Re^m·Pr^n·(Pr/Pr_s)^¼, C and m by Reynolds band, n = 0.37 (Pr ≤ 10) or 0.36",
         nu: zk,
         nu_still: zero,
+        detail: zk_detail,
     },
     Forced {
         id: "gnielinski",
@@ -208,6 +238,7 @@ pub const FORCED: [Forced; 4] = [
         formula: "Nu_l = 0.3 + √(Nu_lam² + Nu_turb²) on l = πD/2, × (Pr/Pr_s)^0.25 (liquids) or (T∞/Ts)^0.12 (gases)",
         nu: gnielinski,
         nu_still: gn_still,
+        detail: gn_detail,
     },
 ];
 

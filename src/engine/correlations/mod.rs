@@ -86,6 +86,31 @@ pub struct Forced {
     /// The limit of Nu as Re → 0 with everything else fixed (0 for pure power laws); the
     /// mixed-convection blend adds natural convection to the part above it.
     pub nu_still: fn(&Groups) -> f64,
+    /// For the working: the band and constants used, or the parts of a composite form.
+    pub detail: fn(&Groups) -> Option<String>,
+}
+
+/// No detail beyond the formula.
+pub(crate) fn no_detail(_: &Groups) -> Option<String> {
+    None
+}
+
+/// "C = 0.193, m = 0.618 for 4000 ≤ Re < 40 000" for a banded table.
+pub(crate) fn band_text(
+    bands: &crate::engine::validity::Bands,
+    i: usize,
+    c: f64,
+    m: f64,
+) -> String {
+    let f = |v: f64| crate::engine::units::format_sig(v, 4);
+    format!(
+        "band {} ≤ {} < {}: C = {}, m = {}",
+        f(bands.edges[i]),
+        bands.quantity,
+        f(bands.edges[i + 1]),
+        c,
+        m
+    )
 }
 
 /// Zero, for correlations that vanish with Re.

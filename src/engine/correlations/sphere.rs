@@ -1,7 +1,7 @@
 //! Sphere in a stream: mean Nusselt number over the surface, on the diameter D.
 
 use super::cylinder::flat_plate_parts;
-use super::{Forced, Groups, Reference};
+use super::{no_detail, Forced, Groups, Reference};
 use crate::engine::validity::{Flagged, Range};
 
 pub const WHITAKER: &str = "Whitaker (1972)";
@@ -105,6 +105,7 @@ pub const FORCED: [Forced; 3] = [
         formula: "Nu = 2 + (0.4·Re^½ + 0.06·Re^⅔)·Pr^0.4·(μ/μs)^¼",
         nu: whitaker,
         nu_still: two,
+        detail: no_detail,
     },
     Forced {
         id: "gnielinski-sphere",
@@ -113,6 +114,7 @@ pub const FORCED: [Forced; 3] = [
         formula: "Nu = 2 + √(Nu_lam² + Nu_turb²), Nu_lam = 0.664·Re^½·Pr^⅓, Nu_turb = 0.037·Re^0.8·Pr/(1 + 2.443·Re^−0.1·(Pr^⅔ − 1))",
         nu: gnielinski_sphere,
         nu_still: two,
+        detail: no_detail,
     },
     Forced {
         id: "ranz-marshall",
@@ -121,6 +123,7 @@ pub const FORCED: [Forced; 3] = [
         formula: "Nu = 2 + 0.6·Re^½·Pr^⅓",
         nu: ranz_marshall,
         nu_still: two,
+        detail: no_detail,
     },
 ];
 

@@ -140,6 +140,14 @@ pub fn moisture(t: f64, p: f64, h: Humidity) -> Result<Moisture, EngineError> {
     let pv = match h {
         Humidity::Relative(rh) => {
             finite("relative humidity", rh)?;
+            if t > water::T_CRIT {
+                return Err(EngineError::Undefined {
+                    quantity: "relative humidity",
+                    value: rh * 100.0,
+                    unit: "%",
+                    why: "has no meaning above water's critical temperature (647.096 K); give the dew point instead",
+                });
+            }
             if !(0.0..=1.0).contains(&rh) {
                 return Err(EngineError::Undefined {
                     quantity: "relative humidity",
@@ -183,6 +191,15 @@ pub fn moisture(t: f64, p: f64, h: Humidity) -> Result<Moisture, EngineError> {
             pv.min(ps)
         }
     };
+    if !pv.is_finite() {
+        return Err(EngineError::Undefined {
+            quantity: "dew point",
+            value: t,
+            unit: "K",
+            why:
+                "gives no saturation pressure: it is above water's critical temperature (647.096 K)",
+        });
+    }
     if pv >= p {
         return Err(EngineError::Undefined {
             quantity: "vapour pressure",
