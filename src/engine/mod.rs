@@ -11,10 +11,12 @@ pub mod correlations;
 pub mod error;
 pub mod heatloss;
 pub mod job;
+pub mod json;
 pub mod layers;
 pub mod props;
 pub mod scenario;
 pub mod solve;
+pub mod store;
 pub mod units;
 pub mod validity;
 

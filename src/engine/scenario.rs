@@ -1289,6 +1289,39 @@ pub fn to_fragment(s: &Scenario, system: System) -> String {
     out
 }
 
+/// How the page is shown, from the same fragment: `view=embed` for the compact view inside a
+/// wiki page (no header, no plots, no saved-work panel), `lock=1` to make the inputs read-only
+/// (a worked example). Unknown values are ignored.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub struct ViewOptions {
+    pub embed: bool,
+    pub locked: bool,
+}
+
+impl ViewOptions {
+    pub fn from_fragment(fragment: &str) -> Self {
+        let f = fragment.strip_prefix('#').unwrap_or(fragment);
+        let mut o = ViewOptions::default();
+        for pair in f.split('&').take(200) {
+            match pair {
+                "view=embed" => o.embed = true,
+                "lock=1" => o.locked = true,
+                _ => {}
+            }
+        }
+        o
+    }
+    /// The keys to append to a scenario's fragment.
+    pub fn suffix(&self) -> &'static str {
+        match (self.embed, self.locked) {
+            (false, false) => "",
+            (true, false) => "&view=embed",
+            (false, true) => "&lock=1",
+            (true, true) => "&view=embed&lock=1",
+        }
+    }
+}
+
 /// Read a fragment (with or without the leading `#`). Keys left out take the demo's value.
 /// Anything malformed refuses the whole link with a message; nothing of it is ever echoed.
 pub fn from_fragment(fragment: &str) -> Result<(Scenario, System), String> {
@@ -1681,6 +1714,23 @@ mod tests {
             }
             assert_eq!(from_fragment(&to_fragment(&s, System::Si)).unwrap().0, s);
         }
+    }
+
+    #[test]
+    fn view_options_ride_along_and_leave_the_scenario_alone() {
+        let f = format!("{}&view=embed&lock=1", to_fragment(&DEMO, System::Si));
+        assert_eq!(
+            ViewOptions::from_fragment(&f),
+            ViewOptions {
+                embed: true,
+                locked: true
+            }
+        );
+        assert_eq!(from_fragment(&f).unwrap().0, DEMO);
+        assert_eq!(
+            ViewOptions::from_fragment("#v=1&view=full"),
+            ViewOptions::default()
+        );
     }
 
     #[test]

@@ -4,6 +4,7 @@
 use leptos::prelude::*;
 
 mod results;
+mod saved;
 mod shapes;
 
 use crate::engine::scenario::{
@@ -47,6 +48,8 @@ fn shown_text(si: f64, unit: &units::Unit) -> String {
 #[component]
 pub fn App() -> impl IntoView {
     let (start, start_system, link_message) = initial();
+    let view_opts =
+        scenario::ViewOptions::from_fragment(&window().location().hash().unwrap_or_default());
     let scenario = RwSignal::new(start);
     let system = RwSignal::new(start_system);
     let choice = RwSignal::new(UnitChoice::for_system(start_system));
@@ -130,7 +133,11 @@ pub fn App() -> impl IntoView {
 
     // The outside world: keep the link in the address bar in step with the scenario.
     Effect::new(move |_| {
-        let frag = scenario::to_fragment(&scenario.get(), system.get());
+        let frag = format!(
+            "{}{}",
+            scenario::to_fragment(&scenario.get(), system.get()),
+            view_opts.suffix()
+        );
         let loc = window().location();
         if loc.hash().unwrap_or_default().trim_start_matches('#') != frag {
             let _ = loc.replace(&format!("#{frag}"));
@@ -461,6 +468,21 @@ pub fn App() -> impl IntoView {
         }
     };
 
+    // Item tag and location: typed in the saved-work panel, printed on the report.
+    let tag = RwSignal::new(String::new());
+    let place = RwSignal::new(String::new());
+
+    // Open a saved scenario: its numbers replace the inputs, shown in its unit system.
+    let open_saved = move |sc: Scenario, sys: System| {
+        system.set(sys);
+        let c = UnitChoice::for_system(sys);
+        choice.set(c);
+        for spec in &FIELDS {
+            text_of(spec.field).set(shown_text(sc.get(spec.field), c.get(spec.dim)));
+        }
+        scenario.set(sc);
+    };
+
     // Beside a value the range flags touch: an icon and words, pointing at the notes below.
     let flag_mark = move || {
         shown.with(|s| {
@@ -478,7 +500,7 @@ pub fn App() -> impl IntoView {
     };
 
     view! {
-        <header class="bar">
+        <header class="bar" class:hidden=view_opts.embed>
             <h1>"Leeward"</h1>
             <p class="tagline">"Heat transfer from a body in a cross-flow"</p>
             <div class="system" role="group" aria-label="Unit system">
@@ -496,9 +518,10 @@ pub fn App() -> impl IntoView {
                 >"US"</button>
             </div>
         </header>
-        <main class="layout">
+        <main class="layout" class:embed=view_opts.embed data-embed=view_opts.embed.to_string()>
             {link_message.map(|m| view! { <p class="notice" role="alert" data-notice="link">"⚠ "{m}</p> })}
-            <div class="inputs">
+            <fieldset class="inputs" disabled=view_opts.locked data-locked=view_opts.locked.to_string()>
+                <legend class="sr-only">"Inputs"</legend>
                 <p class="demo" data-demo>
                     {move || (scenario.get() == scenario::DEMO).then_some(scenario::DEMO_TITLE)}
                 </p>
@@ -534,7 +557,8 @@ pub fn App() -> impl IntoView {
                     <h2 id="job-title">"4 · The job"</h2>
                     {fields_of(Group::Job)}
                 </section>
-            </div>
+                {(!view_opts.embed).then(|| view! { <saved::SavedPanel scenario=scenario system=system tag=tag place=place on_open=open_saved/> })}
+            </fieldset>
             <section class="results" class:stale=stale aria-labelledby="results-title" aria-live="polite">
                 <h2 id="results-title">"Results"</h2>
                 <p class="stale-note" data-stale=move || stale().to_string()>
@@ -583,12 +607,13 @@ pub fn App() -> impl IntoView {
                     {prop_table}
                 </details>
             </section>
-            <section class="plots" aria-labelledby="plots-title">
+            <section class="plots" class:hidden=view_opts.embed aria-labelledby="plots-title">
                 <h2 id="plots-title">"Compare the correlations"</h2>
                 {move || shown.with(|s| s.outcome.as_ref().map(results::nu_re_plot))}
                 {move || shown.with(|s| s.outcome.as_ref().and_then(results::front_plot))}
                 {move || shown.with(|sh| sh.outcome.as_ref().map(|o| results::sweeps(o, &scenario.get(), &choice.get())))}
             </section>
+            {move || shown.with(|sh| sh.outcome.as_ref().map(|o| results::report(o, &scenario.get(), &choice.get(), &tag.get(), &place.get())))}
             <footer class="standing">
                 "Results are engineering estimates from published correlations. Check them before you rely on them; local codes and licensed practice govern any decision about safety."
             </footer>

@@ -504,3 +504,116 @@ fn cross_section(j: &crate::engine::scenario::JobResult, c: &UnitChoice) -> impl
         </svg>
     }
 }
+
+/// The one-page report, shown only when printing: inputs in use, results, flags, verdicts, the
+/// working's key steps, sources, cautions, the date, the item tag and location.
+pub fn report(
+    o: &Outcome,
+    s: &crate::engine::scenario::Scenario,
+    c: &UnitChoice,
+    tag: &str,
+    place: &str,
+) -> impl IntoView {
+    use crate::engine::scenario::FIELDS;
+    let date = js_sys::Date::new_0()
+        .to_iso_string()
+        .as_string()
+        .unwrap_or_default();
+    let date = date.get(..16).unwrap_or(&date).replace('T', " ");
+    let inputs = FIELDS
+        .iter()
+        .filter(|sp| s.uses(sp.field))
+        .map(|sp| view! { <tr><th scope="row">{sp.label}</th><td>{with_unit(s.get(sp.field), sp.dim, c)}</td></tr> })
+        .collect_view();
+    let mut figures = vec![
+        (
+            "Heat loss over the length or body",
+            with_unit(o.q_total, Dim::HeatFlow, c),
+        ),
+        (
+            "Surface temperature",
+            with_unit(o.surface_temp, Dim::Temperature, c),
+        ),
+        (
+            "Heat-transfer coefficient (convection)",
+            with_unit(o.h, Dim::HeatTransferCoefficient, c),
+        ),
+        ("Radiation part", with_unit(o.q_rad_total, Dim::HeatFlow, c)),
+        (
+            "Energy per year",
+            with_unit(o.annual_energy, Dim::EnergyPerYear, c),
+        ),
+        (
+            "Cost per year",
+            with_unit(o.annual_cost, Dim::MoneyPerYear, c),
+        ),
+    ];
+    if let Some(q) = o.q_per_length {
+        figures.insert(
+            0,
+            (
+                "Heat loss per length",
+                with_unit(q, Dim::HeatFlowPerLength, c),
+            ),
+        );
+    }
+    let figures = figures
+        .into_iter()
+        .map(|(k, v)| view! { <tr><th scope="row">{k}</th><td>{v}</td></tr> })
+        .collect_view();
+    let flags = o
+        .flags
+        .iter()
+        .map(|f| view! { <li>{f.message()}</li> })
+        .collect_view();
+    let verdicts = o
+        .verdicts
+        .iter()
+        .map(|v| {
+            let figs = v.figures.iter().map(|(l, x, d)| format!("{l}: {}", with_unit(*x, *d, c))).collect::<Vec<_>>().join("; ");
+            view! { <li><strong>{if v.ok { "✓ " } else { "⚠ " }}{v.title}</strong>": "{v.summary.clone()}" "{figs}</li> }
+        })
+        .collect_view();
+    let steps = o
+        .working
+        .iter()
+        .filter(|st| !st.title.starts_with("Properties at"))
+        .map(|st| view! { <li><strong>{st.title}</strong>": "{st.text.clone()}</li> })
+        .collect_view();
+    let sources = o
+        .properties
+        .first()
+        .map(|r| {
+            r.props
+                .sources
+                .iter()
+                .map(|(q, src)| format!("{q}: {src}"))
+                .collect::<Vec<_>>()
+                .join(" · ")
+        })
+        .unwrap_or_default();
+    let cautions = crate::engine::scenario::cautions(s, o)
+        .into_iter()
+        .chain(o.verdicts.iter().filter_map(|v| v.caution))
+        .collect::<std::collections::BTreeSet<_>>()
+        .into_iter()
+        .map(|t| view! { <li>{t}</li> })
+        .collect_view();
+    view! {
+        <article class="report" data-report>
+            <h1>"Leeward report"</h1>
+            <p class="meta">{format!("{date} UTC · item {} · {}", if tag.is_empty() { "—" } else { tag }, if place.is_empty() { "location not given" } else { place })}</p>
+            <p class="meta">{format!("{}, {} in {}; recommended {} ({}).", o.shape.label(), o.analysis.mode(), o.fluid, o.method, o.regime)}</p>
+            <div class="cols">
+                <table><caption>"Inputs"</caption><tbody>{inputs}</tbody></table>
+                <table><caption>"Results"</caption><tbody>{figures}</tbody></table>
+            </div>
+            <h2>"Range notes"</h2><ul>{flags}</ul>
+            <h2>"Verdicts"</h2><ul>{verdicts}</ul>
+            <h2>"Working (summary)"</h2><ol>{steps}</ol>
+            <p class="meta">{format!("Property sources: {sources}. Correlations of this kind are good to about ±20–25 % (common practice).")}</p>
+            <h2>"Cautions"</h2><ul>{cautions}</ul>
+            <p class="meta">"Engineering estimates from published correlations. Local codes and licensed practice govern any decision about safety."</p>
+        </article>
+    }
+}

@@ -704,3 +704,176 @@ fn layouts_fit_and_pass_axe_core() {
         c.close().await.unwrap();
     });
 }
+
+/// Pages in a PDF: page objects are written as "/Type /Page" (the tree as "/Type /Pages").
+fn pdf_pages(pdf: &[u8]) -> usize {
+    let pat = b"/Type /Page";
+    pdf.windows(pat.len() + 1)
+        .filter(|w| &w[..pat.len()] == pat && w[pat.len()] != b's')
+        .count()
+}
+
+/// Saved work: save → reload → still there; storage → file → import after clearing gives the same
+/// store; a corrupt store opens with a message and its text kept; the report prints on one A4 and
+/// one US Letter page.
+#[test]
+fn saved_work_survives_travels_and_prints() {
+    if !ready() {
+        return;
+    }
+    let _one = BROWSER.lock().unwrap_or_else(|e| e.into_inner());
+    let (_server, base) = serve();
+    run(async {
+        let (_driver, c) = browser().await;
+        c.goto(&base).await.unwrap();
+        wait_rendered(&c).await;
+        js(&c, "localStorage.clear(); return true;").await;
+        c.refresh().await.unwrap();
+        wait_rendered(&c).await;
+        let click = |css: &'static str| {
+            let c = c.clone();
+            async move {
+                c.find(Locator::Css(css))
+                    .await
+                    .unwrap()
+                    .click()
+                    .await
+                    .unwrap()
+            }
+        };
+        // Save two, reload: both still there.
+        click("[data-action=save]").await;
+        type_into(&c, "D", "114.3").await;
+        click("[data-action=save]").await;
+        c.refresh().await.unwrap();
+        wait_rendered(&c).await;
+        let names = js(
+            &c,
+            "return [...document.querySelectorAll('[data-saved]')].map(e => e.dataset.saved);",
+        )
+        .await;
+        assert_eq!(names, json!(["Line 1", "Line 1 (2)"]));
+        // Open the first: the demo's diameter comes back.
+        click("[data-saved='Line 1'] button").await;
+        assert!(close(si(&c, "h").await, expect(&DEMO).h));
+
+        // Export (the stored text is the file's text) → clear → import → identical.
+        let text = js(&c, "return localStorage.getItem('leeward.saved');").await;
+        let text = text.as_str().unwrap().to_string();
+        let file = std::env::temp_dir().join(format!("leeward-import-{}.json", std::process::id()));
+        std::fs::write(&file, &text).unwrap();
+        js(&c, "localStorage.clear(); return true;").await;
+        c.refresh().await.unwrap();
+        wait_rendered(&c).await;
+        assert_eq!(
+            js(
+                &c,
+                "return document.querySelectorAll('[data-saved]').length;"
+            )
+            .await,
+            json!(0)
+        );
+        c.find(Locator::Css("[data-action=import]"))
+            .await
+            .unwrap()
+            .send_keys(&file.display().to_string())
+            .await
+            .unwrap();
+        let t0 = Instant::now();
+        while js(
+            &c,
+            "return document.querySelectorAll('[data-import-plan]').length;",
+        )
+        .await
+            != json!(1)
+        {
+            assert!(
+                t0.elapsed() < Duration::from_secs(10),
+                "no import plan shown"
+            );
+            tokio::time::sleep(Duration::from_millis(50)).await;
+        }
+        assert!(text_of(&c, "[data-import-plan]")
+            .await
+            .contains("Line 1 (2)"));
+        click("[data-action=confirm-import]").await;
+        let after = js(&c, "return localStorage.getItem('leeward.saved');").await;
+        assert_eq!(
+            after.as_str().unwrap(),
+            text,
+            "import did not give back the same store"
+        );
+        let _ = std::fs::remove_file(&file);
+
+        // A corrupt store: the page opens, says so, and keeps the text.
+        js(
+            &c,
+            "localStorage.setItem('leeward.saved', '{\"format\": broken'); return true;",
+        )
+        .await;
+        c.refresh().await.unwrap();
+        wait_rendered(&c).await;
+        assert!(text_of(&c, "[data-saved-note]")
+            .await
+            .contains("could not be read"));
+        assert_eq!(
+            js(
+                &c,
+                "return localStorage.getItem('leeward.saved.unreadable');"
+            )
+            .await,
+            json!("{\"format\": broken")
+        );
+        assert!(close(si(&c, "h").await, expect(&DEMO).h));
+
+        // The report: one page on A4 and on US Letter.
+        use fantoccini::wd::{PrintConfiguration, PrintSize};
+        for size in [PrintSize::A4, PrintSize::US_LETTER] {
+            let pdf = c
+                .print(PrintConfiguration::builder().size(size).build().unwrap())
+                .await
+                .unwrap();
+            assert_eq!(pdf_pages(&pdf), 1, "the report is not one page");
+        }
+        js(&c, "localStorage.clear(); return true;").await;
+
+        // The embed view for a wiki page: no header, no plots, inputs locked, same numbers; the
+        // link keeps its view keys (a fresh load: a changed fragment alone is not a new page).
+        c.goto("about:blank").await.unwrap();
+        c.goto(&format!(
+            "{base}#{}&view=embed&lock=1",
+            scenario::to_fragment(&DEMO, leeward::engine::units::System::Si)
+        ))
+        .await
+        .unwrap();
+        wait_rendered(&c).await;
+        assert!(close(si(&c, "h").await, expect(&DEMO).h));
+        assert_eq!(
+            js(
+                &c,
+                "return document.querySelector('header.bar').classList.contains('hidden');"
+            )
+            .await,
+            json!(true)
+        );
+        assert_eq!(
+            js(
+                &c,
+                "return document.querySelector('#in-D').matches(':disabled');"
+            )
+            .await,
+            json!(true)
+        );
+        assert_eq!(
+            js(
+                &c,
+                "return document.querySelectorAll('[data-panel=saved]').length;"
+            )
+            .await,
+            json!(0)
+        );
+        let url = c.current_url().await.unwrap().to_string();
+        assert!(url.ends_with("&view=embed&lock=1"), "{url}");
+        c.close().await.unwrap();
+    });
+}
