@@ -17,6 +17,7 @@ pub mod props;
 pub mod scenario;
 pub mod solve;
 pub mod store;
+pub mod survey;
 pub mod units;
 pub mod validity;
 

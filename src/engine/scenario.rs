@@ -704,6 +704,11 @@ pub struct Outcome {
 
 /// Evaluate a scenario. Errors only where nothing meaningful can be computed.
 pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
+    evaluate_with(s, true)
+}
+
+/// As [`evaluate`]; without the sweeps (the plots' data) when `sweeps` is false, for lists.
+pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError> {
     for spec in FIELDS.iter().filter(|sp| s.uses(sp.field)) {
         let v = s.get(spec.field);
         let si_unit = units::units_of(spec.dim).next().expect("SI unit");
@@ -795,7 +800,7 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
         (body::analyse(&stream)?, s.surface_temp, s.diameter, None)
     };
     let thickness_sweep = match &job_result {
-        Some(_) if s.layer_count > 0 => {
+        Some(_) if sweeps && s.layer_count > 0 => {
             let i = s.layer_count - 1;
             let top = (2.0 * s.layer_t[i]).max(0.1);
             grid_with(top, 12, s.layer_t[i])
@@ -810,15 +815,19 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
         }
         _ => Vec::new(),
     };
-    let wind_sweep = grid_with(20.0, 10, s.speed)
-        .into_iter()
-        .filter_map(|u| {
-            let mut t = *s;
-            t.speed = u;
-            let o = quick(&t, p, fluid, &targets).ok()?;
-            Some((u, o.2, o.0, o.1))
-        })
-        .collect();
+    let wind_sweep = if sweeps {
+        grid_with(20.0, 10, s.speed)
+    } else {
+        Vec::new()
+    }
+    .into_iter()
+    .filter_map(|u| {
+        let mut t = *s;
+        t.speed = u;
+        let o = quick(&t, p, fluid, &targets).ok()?;
+        Some((u, o.2, o.0, o.1))
+    })
+    .collect();
     let film = a.film.t;
     let rec = a.recommended().clone();
     let h = a.h;

@@ -468,6 +468,12 @@ pub fn App() -> impl IntoView {
         }
     };
 
+    // The report is built only for printing (it is a large view): the browser's beforeprint and
+    // afterprint events, or the panel's print button, switch it on and off.
+    let printing = RwSignal::new(false);
+    let _ = window_event_listener(leptos::ev::beforeprint, move |_| printing.set(true));
+    let _ = window_event_listener(leptos::ev::afterprint, move |_| printing.set(false));
+
     // Item tag and location: typed in the saved-work panel, printed on the report.
     let tag = RwSignal::new(String::new());
     let place = RwSignal::new(String::new());
@@ -557,7 +563,7 @@ pub fn App() -> impl IntoView {
                     <h2 id="job-title">"4 · The job"</h2>
                     {fields_of(Group::Job)}
                 </section>
-                {(!view_opts.embed).then(|| view! { <saved::SavedPanel scenario=scenario system=system tag=tag place=place on_open=open_saved/> })}
+                {(!view_opts.embed).then(|| view! { <saved::SavedPanel scenario=scenario system=system tag=tag place=place choice=choice on_open=open_saved/> })}
             </fieldset>
             <section class="results" class:stale=stale aria-labelledby="results-title" aria-live="polite">
                 <h2 id="results-title">"Results"</h2>
@@ -613,7 +619,7 @@ pub fn App() -> impl IntoView {
                 {move || shown.with(|s| s.outcome.as_ref().and_then(results::front_plot))}
                 {move || shown.with(|sh| sh.outcome.as_ref().map(|o| results::sweeps(o, &scenario.get(), &choice.get())))}
             </section>
-            {move || shown.with(|sh| sh.outcome.as_ref().map(|o| results::report(o, &scenario.get(), &choice.get(), &tag.get(), &place.get())))}
+            {move || printing.get().then(|| shown.with(|sh| sh.outcome.as_ref().map(|o| results::report(o, &scenario.get(), &choice.get(), &tag.get(), &place.get()))))}
             <footer class="standing">
                 "Results are engineering estimates from published correlations. Check them before you rely on them; local codes and licensed practice govern any decision about safety."
             </footer>

@@ -805,6 +805,99 @@ fn saved_work_survives_travels_and_prints() {
         );
         let _ = std::fs::remove_file(&file);
 
+        // CSV: the engine's own export of two items plus a bad row imports the good rows and
+        // reports the bad one by line and column.
+        let items = vec![leeward::engine::store::Saved::new(
+            "Tank T-4",
+            "T-4",
+            "Yard",
+            &DEMO,
+            leeward::engine::units::System::Si,
+        )];
+        let mut csv = leeward::engine::survey::to_csv(&items, leeward::engine::units::System::Us);
+        csv.push_str("Bad row,,,cube\r\n");
+        let csv_file =
+            std::env::temp_dir().join(format!("leeward-import-{}.csv", std::process::id()));
+        std::fs::write(&csv_file, &csv).unwrap();
+        let before = js(
+            &c,
+            "return document.querySelectorAll('[data-saved]').length;",
+        )
+        .await
+        .as_u64()
+        .unwrap();
+        c.find(Locator::Css("[data-action=import-csv]"))
+            .await
+            .unwrap()
+            .send_keys(&csv_file.display().to_string())
+            .await
+            .unwrap();
+        let t0 = Instant::now();
+        while js(
+            &c,
+            "return document.querySelectorAll('[data-saved]').length;",
+        )
+        .await
+        .as_u64()
+        .unwrap()
+            != before + 1
+        {
+            assert!(
+                t0.elapsed() < Duration::from_secs(10),
+                "CSV rows not imported"
+            );
+            tokio::time::sleep(Duration::from_millis(50)).await;
+        }
+        let note = text_of(&c, "[data-saved-note]").await;
+        assert!(
+            note.contains("line 3, column 4"),
+            "bad row not reported: {note}"
+        );
+        let _ = std::fs::remove_file(&csv_file);
+        // The imported tank computes as the engine does.
+        let tank = leeward::engine::survey::evaluate_item(&DEMO).unwrap();
+        let shown = text_of(&c, "[data-saved=\"Tank T-4\"] [data-item-loss]").await;
+        assert!(
+            shown.contains(&leeward::engine::units::format_sig(tank.q_total, 4)),
+            "{shown}"
+        );
+
+        // 1,000 items: the list and its totals render.
+        let many = leeward::engine::store::Store {
+            items: (0..1000)
+                .map(|i| {
+                    let mut s = DEMO;
+                    s.diameter = 0.02 + 0.0003 * i as f64;
+                    leeward::engine::store::Saved::new(
+                        &format!("Item {i}"),
+                        "",
+                        "",
+                        &s,
+                        leeward::engine::units::System::Si,
+                    )
+                })
+                .collect(),
+            unreadable: vec![],
+        };
+        let args = vec![json!(leeward::engine::store::to_json(&many))];
+        c.execute(
+            "localStorage.setItem('leeward.saved', arguments[0]); return true;",
+            args,
+        )
+        .await
+        .unwrap();
+        c.refresh().await.unwrap();
+        wait_rendered(&c).await;
+        assert_eq!(
+            js(
+                &c,
+                "return document.querySelectorAll('[data-saved]').length;"
+            )
+            .await,
+            json!(1000)
+        );
+        assert!(text_of(&c, "[data-totals]").await.contains("1000 item"));
+
         // A corrupt store: the page opens, says so, and keeps the text.
         js(
             &c,
@@ -828,6 +921,24 @@ fn saved_work_survives_travels_and_prints() {
 
         // The report: one page on A4 and on US Letter.
         use fantoccini::wd::{PrintConfiguration, PrintSize};
+        // The page builds its report on the browser's beforeprint event (WebDriver's print does
+        // not send one, so the test does).
+        js(
+            &c,
+            "window.dispatchEvent(new Event('beforeprint')); return true;",
+        )
+        .await;
+        let t0 = Instant::now();
+        while js(
+            &c,
+            "return document.querySelectorAll('[data-report]').length;",
+        )
+        .await
+            != json!(1)
+        {
+            assert!(t0.elapsed() < Duration::from_secs(5), "no report built");
+            tokio::time::sleep(Duration::from_millis(20)).await;
+        }
         for size in [PrintSize::A4, PrintSize::US_LETTER] {
             let pdf = c
                 .print(PrintConfiguration::builder().size(size).build().unwrap())

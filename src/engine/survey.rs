@@ -1,0 +1,406 @@
+//! The survey list: many items (each a saved scenario), their results and totals, and the CSV form
+//! a spreadsheet opens — one row per item, units in the header row, in the unit system chosen.
+//!
+//! Columns: `name`, `tag`, `location`; the choice keys of the link (`s`, `ax`, `w`, `f`, `pm`, `hm`,
+//! `sm`, `wm`, `nl`; blank where the link leaves them out); then every numeric input as
+//! `key [unit id]`, e.g. `D [mm]`, `Ta [C]`. A blank cell takes the demo's value.
+
+use crate::engine::error::EngineError;
+use crate::engine::scenario::{self, check_field, Scenario, FIELDS};
+use crate::engine::store::Saved;
+use crate::engine::units::{self, System, UnitChoice};
+
+pub const CHOICE_KEYS: [&str; 9] = ["s", "ax", "w", "f", "pm", "hm", "sm", "wm", "nl"];
+
+/// One item's figures for the list, SI: heat flow W (run or body), surface K, energy J/yr, cost.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct ItemResult {
+    pub q_total: f64,
+    pub surface_temp: f64,
+    pub flags: usize,
+    pub annual_energy: f64,
+    pub annual_cost: f64,
+}
+
+pub fn evaluate_item(s: &Scenario) -> Result<ItemResult, EngineError> {
+    let o = scenario::evaluate_with(s, false)?;
+    Ok(ItemResult {
+        q_total: o.q_total,
+        surface_temp: o.surface_temp,
+        flags: o.flags.len(),
+        annual_energy: o.annual_energy,
+        annual_cost: o.annual_cost,
+    })
+}
+
+/// Sums over the items that computed: heat flow W, energy J/yr, cost per year.
+pub fn totals(results: &[Result<ItemResult, EngineError>]) -> (f64, f64, f64) {
+    results
+        .iter()
+        .flatten()
+        .fold((0.0, 0.0, 0.0), |(q, e, c), r| {
+            (q + r.q_total, e + r.annual_energy, c + r.annual_cost)
+        })
+}
+
+/// A CSV cell, quoted where it must be (RFC 4180).
+fn cell(s: &str) -> String {
+    if s.contains([',', ';', '"', '\n', '\r']) {
+        format!("\"{}\"", s.replace('"', "\"\""))
+    } else {
+        s.to_string()
+    }
+}
+
+/// A free-text cell: one that a spreadsheet would take for a formula (=, +, -, @) gets a leading
+/// apostrophe, which the import takes off again.
+fn text_cell(s: &str) -> String {
+    if s.starts_with(['=', '+', '-', '@']) {
+        cell(&format!("'{s}"))
+    } else {
+        cell(s)
+    }
+}
+
+pub fn header(system: System) -> Vec<String> {
+    let c = UnitChoice::for_system(system);
+    let mut h: Vec<String> = ["name", "tag", "location"]
+        .iter()
+        .map(|s| s.to_string())
+        .collect();
+    h.extend(CHOICE_KEYS.iter().map(|k| k.to_string()));
+    h.extend(
+        FIELDS
+            .iter()
+            .map(|f| format!("{} [{}]", f.key, c.get(f.dim).id)),
+    );
+    h
+}
+
+/// The whole list as CSV in the unit system chosen.
+pub fn to_csv(items: &[Saved], system: System) -> String {
+    let c = UnitChoice::for_system(system);
+    let mut out = header(system)
+        .iter()
+        .map(|h| cell(h))
+        .collect::<Vec<_>>()
+        .join(",");
+    out.push_str("\r\n");
+    for it in items {
+        let Ok((s, _)) = it.scenario() else { continue };
+        let link = scenario::to_fragment(&s, system);
+        let choice = |k: &str| {
+            link.split('&')
+                .find_map(|p| p.strip_prefix(&format!("{k}=")))
+                .unwrap_or("")
+                .to_string()
+        };
+        let mut row = vec![
+            text_cell(&it.name),
+            text_cell(&it.tag),
+            text_cell(&it.location),
+        ];
+        row.extend(CHOICE_KEYS.iter().map(|k| cell(&choice(k))));
+        row.extend(
+            FIELDS
+                .iter()
+                .map(|f| format!("{}", c.get(f.dim).from_si(s.get(f.field)))),
+        );
+        out.push_str(&row.join(","));
+        out.push_str("\r\n");
+    }
+    out
+}
+
+/// A problem in a CSV file, by line and column (both from 1).
+#[derive(Debug, Clone, PartialEq)]
+pub struct CsvError {
+    pub line: usize,
+    pub column: usize,
+    pub what: String,
+}
+
+impl std::fmt::Display for CsvError {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        if self.column == 0 {
+            write!(f, "line {}: {}", self.line, self.what)
+        } else {
+            write!(
+                f,
+                "line {}, column {}: {}",
+                self.line, self.column, self.what
+            )
+        }
+    }
+}
+
+/// Split CSV text into records of cells (RFC 4180 quoting; commas or semicolons as separators).
+fn records(text: &str) -> Vec<(usize, Vec<String>)> {
+    let sep = if text
+        .lines()
+        .next()
+        .is_some_and(|l| l.matches(';').count() > l.matches(',').count())
+    {
+        ';'
+    } else {
+        ','
+    };
+    let mut out = Vec::new();
+    let (mut row, mut cell, mut quoted, mut line, mut start) =
+        (Vec::new(), String::new(), false, 1usize, 1usize);
+    let mut chars = text.trim_start_matches('\u{feff}').chars().peekable();
+    while let Some(ch) = chars.next() {
+        match (ch, quoted) {
+            ('"', true) if chars.peek() == Some(&'"') => {
+                chars.next();
+                cell.push('"');
+            }
+            ('"', true) => quoted = false,
+            ('"', false) if cell.is_empty() => quoted = true,
+            (c, false) if c == sep => row.push(std::mem::take(&mut cell)),
+            ('\r', false) => {}
+            ('\n', false) => {
+                row.push(std::mem::take(&mut cell));
+                if row.iter().any(|c| !c.is_empty()) {
+                    out.push((start, std::mem::take(&mut row)));
+                } else {
+                    row.clear();
+                }
+                line += 1;
+                start = line;
+            }
+            ('\n', true) => {
+                line += 1;
+                cell.push('\n');
+            }
+            (c, _) => cell.push(c),
+        }
+    }
+    row.push(cell);
+    if row.iter().any(|c| !c.is_empty()) {
+        out.push((start, row));
+    }
+    out
+}
+
+/// Read a CSV list. Rows that fail are reported by line and column and left out; the rest are
+/// returned. Limits: 10,000 rows, 4 MB.
+pub fn from_csv(text: &str) -> (Vec<Saved>, Vec<CsvError>) {
+    let mut errors = Vec::new();
+    if text.len() > 4 * 1024 * 1024 {
+        errors.push(CsvError {
+            line: 1,
+            column: 0,
+            what: "the file is larger than 4 MB".into(),
+        });
+        return (Vec::new(), errors);
+    }
+    let recs = records(text);
+    let Some((hl, head)) = recs.first() else {
+        errors.push(CsvError {
+            line: 1,
+            column: 0,
+            what: "the file is empty".into(),
+        });
+        return (Vec::new(), errors);
+    };
+    // What each column is: a text column, a choice key, or a field with its unit.
+    enum Col {
+        Text(usize),
+        Choice(&'static str),
+        Field(&'static scenario::FieldSpec, &'static units::Unit),
+        Skip,
+    }
+    let mut cols = Vec::new();
+    for (j, h) in head.iter().enumerate() {
+        let h = h.trim();
+        let col = if let Some(i) = ["name", "tag", "location"].iter().position(|k| *k == h) {
+            Col::Text(i)
+        } else if let Some(k) = CHOICE_KEYS.iter().find(|k| **k == h) {
+            Col::Choice(k)
+        } else if let Some((key, unit)) = h
+            .split_once(" [")
+            .and_then(|(k, u)| u.strip_suffix(']').map(|u| (k.trim(), u)))
+        {
+            match (FIELDS.iter().find(|f| f.key == key), units::unit(unit)) {
+                (Some(f), Some(u)) if u.dim == f.dim => Col::Field(f, u),
+                (Some(_), _) => {
+                    errors.push(CsvError {
+                        line: *hl,
+                        column: j + 1,
+                        what: format!("unknown unit “{unit}” for {key}; the column is ignored"),
+                    });
+                    Col::Skip
+                }
+                _ => Col::Skip,
+            }
+        } else {
+            Col::Skip
+        };
+        cols.push(col);
+    }
+    let mut items = Vec::new();
+    for (line, rec) in recs.iter().skip(1).take(10_000) {
+        let mut texts = [String::new(), String::new(), String::new()];
+        let mut frag = format!("v={}", scenario::LINK_VERSION);
+        let mut bad = false;
+        for (j, (col, v)) in cols.iter().zip(rec.iter()).enumerate() {
+            let v = v.trim();
+            match col {
+                Col::Text(i) => {
+                    texts[*i] = v
+                        .strip_prefix('\'')
+                        .filter(|r| r.starts_with(['=', '+', '-', '@']))
+                        .unwrap_or(v)
+                        .to_string()
+                }
+                Col::Choice(k) if !v.is_empty() => {
+                    let one = format!("v={}&{k}={v}", scenario::LINK_VERSION);
+                    if let Err(e) = scenario::from_fragment(&one) {
+                        errors.push(CsvError {
+                            line: *line,
+                            column: j + 1,
+                            what: e.replace("the link", "the cell"),
+                        });
+                        bad = true;
+                    } else {
+                        frag.push_str(&format!("&{k}={v}"));
+                    }
+                }
+                Col::Field(f, u) if !v.is_empty() => match scenario::read_field(f, v, u) {
+                    Ok(si) => frag.push_str(&format!("&{}={si}", f.key)),
+                    Err(e) => {
+                        errors.push(CsvError {
+                            line: *line,
+                            column: j + 1,
+                            what: format!("{}: {e}", f.label),
+                        });
+                        bad = true;
+                    }
+                },
+                _ => {}
+            }
+        }
+        if bad {
+            continue;
+        }
+        let name = if texts[0].is_empty() {
+            format!("Row {line}")
+        } else {
+            texts[0].clone()
+        };
+        match scenario::from_fragment(&frag) {
+            Ok((s, sys)) => {
+                // Every value was checked against its field's limits above; check once more.
+                debug_assert!(FIELDS.iter().all(|f| check_field(
+                    f,
+                    s.get(f.field),
+                    units::units_of(f.dim).next().unwrap()
+                )
+                .is_ok()));
+                items.push(Saved::new(&name, &texts[1], &texts[2], &s, sys));
+            }
+            Err(e) => errors.push(CsvError {
+                line: *line,
+                column: 0,
+                what: e,
+            }),
+        }
+    }
+    (items, errors)
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::engine::scenario::{SurfaceMode, DEMO};
+
+    fn items() -> Vec<Saved> {
+        let mut b = DEMO;
+        b.surface_mode = SurfaceMode::Solved;
+        b.layer_count = 2;
+        vec![
+            Saved::new("Roof line, A", "L-101", "Roof \"east\"", &DEMO, System::Si),
+            Saved::new(
+                "Boiler feed",
+                "=HYPERLINK(1)",
+                "Plant room; level -1",
+                &b,
+                System::Si,
+            ),
+        ]
+    }
+
+    #[test]
+    fn csv_round_trips_in_both_systems() {
+        for sys in [System::Si, System::Us] {
+            let text = to_csv(&items(), sys);
+            let (back, errors) = from_csv(&text);
+            assert!(errors.is_empty(), "{errors:?}");
+            assert_eq!(back.len(), 2);
+            for (a, b) in items().iter().zip(&back) {
+                assert_eq!(
+                    (&a.name, &a.tag, &a.location),
+                    (&b.name, &b.tag, &b.location)
+                );
+                let (sa, sb) = (a.scenario().unwrap().0, b.scenario().unwrap().0);
+                assert_eq!(
+                    (sa.shape, sa.surface_mode, sa.layer_count),
+                    (sb.shape, sb.surface_mode, sb.layer_count)
+                );
+                for f in FIELDS.iter() {
+                    let (x, y) = (sa.get(f.field), sb.get(f.field));
+                    assert!(
+                        (x - y).abs() <= 1e-12 * x.abs().max(1e-300),
+                        "{}: {x} vs {y}",
+                        f.key
+                    );
+                }
+            }
+        }
+    }
+
+    #[test]
+    fn formula_like_text_is_neutralised_in_the_file() {
+        let text = to_csv(&items(), System::Si);
+        assert!(text.contains("'=HYPERLINK(1)") && !text.contains(",=HYPERLINK"));
+    }
+
+    #[test]
+    fn bad_rows_are_reported_by_line_and_column_and_the_rest_import() {
+        let mut text = to_csv(&items(), System::Si);
+        let head = text.lines().next().unwrap().to_string();
+        let d_col = head.split(',').position(|h| h == "D [mm]").unwrap() + 1;
+        let mut row = vec![String::new(); d_col];
+        row[0] = "Broken".into();
+        row[d_col - 1] = "-5".into();
+        text.push_str(&(row.join(",") + "\r\n"));
+        text.push_str("Bad shape,,,cube\r\n");
+        let (back, errors) = from_csv(&text);
+        assert_eq!(back.len(), 2);
+        assert_eq!(errors.len(), 2, "{errors:?}");
+        assert_eq!((errors[0].line, errors[0].column), (4, d_col));
+        assert!(errors[0].to_string().contains("line 4, column"));
+        assert_eq!((errors[1].line, errors[1].column), (5, 4));
+    }
+
+    #[test]
+    fn a_spreadsheet_with_semicolons_and_decimal_commas_reads() {
+        let text = "name;D [mm];U [m/s]\nSmall;33,4;3\n";
+        let (back, errors) = from_csv(text);
+        assert!(errors.is_empty(), "{errors:?}");
+        assert_eq!(back[0].scenario().unwrap().0.diameter, 0.0334);
+    }
+
+    #[test]
+    fn totals_add_the_items_that_computed() {
+        let rs: Vec<_> = items()
+            .iter()
+            .map(|i| evaluate_item(&i.scenario().unwrap().0))
+            .collect();
+        let (q, e, c) = totals(&rs);
+        let want: f64 = rs.iter().map(|r| r.as_ref().unwrap().q_total).sum();
+        assert_eq!(q, want);
+        assert!(e > 0.0 && c > 0.0);
+    }
+}
