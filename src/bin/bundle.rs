@@ -28,25 +28,60 @@ fn run(dist: &Path) -> Result<(), String> {
     let css_name = find_attr_value(&index, "rel=\"stylesheet\"", "href")
         .ok_or("no stylesheet link in index.html")?;
 
-    // 1. The hosted page: loader out of line.
+    // 1. The hosted page: loader out of line, with the service-worker registration appended.
     let hosted = externalise_loader(&index)?;
+    let mut boot = None;
     let hosted = hosted
         .map(|(html, boot_name, boot_js)| -> Result<String, String> {
-            write(&dist.join(&boot_name), &boot_js)?;
-            Ok(html)
+            let js = format!("{boot_js}{REGISTER_JS}");
+            let name = format!("boot-{}.js", &hex(&sha256(js.as_bytes()))[..16]);
+            write(&dist.join(&name), &js)?;
+            boot = Some(name.clone());
+            Ok(html.replace(&boot_name, &name))
         })
         .transpose()?;
-    if let Some(html) = &hosted {
-        write(&index_path, html)?;
-    }
 
-    // 2. The single file.
+    // 2. The single file (no service worker or manifest: browsers allow neither on file://).
     let glue = read(&dist.join(strip_dot(&js_name)))?;
     let wasm = fs::read(dist.join(strip_dot(&wasm_name)))
         .map_err(|e| format!("reading {wasm_name}: {e}"))?;
     let css = read(&dist.join(strip_dot(&css_name)))?;
     let single = single_file(hosted.as_deref().unwrap_or(&index), &glue, &wasm, &css)?;
     write(&dist.join("leeward.html"), &single)?;
+
+    // 3. Installable offline: manifest, icon, and a service worker that precaches every file of
+    //    this build under a cache named by the build's hash.
+    if let Some(html) = &hosted {
+        write(&dist.join("icon.svg"), ICON_SVG)?;
+        write(&dist.join("manifest.webmanifest"), MANIFEST)?;
+        let mut files = vec![
+            "./".to_string(),
+            "./index.html".into(),
+            "./manifest.webmanifest".into(),
+            "./icon.svg".into(),
+            format!("./{}", strip_dot(&js_name)),
+            format!("./{}", strip_dot(&wasm_name)),
+            format!("./{}", strip_dot(&css_name)),
+        ];
+        files.extend(boot.iter().map(|b| format!("./{b}")));
+        let version = &hex(&sha256(files.join(",").as_bytes()))[..16];
+        let list = files
+            .iter()
+            .map(|f| format!("{f:?}"))
+            .collect::<Vec<_>>()
+            .join(",");
+        write(
+            &dist.join("sw.js"),
+            &SW_JS
+                .replace("__VERSION__", version)
+                .replace("__FILES__", &list),
+        )?;
+        let with_manifest = html.replace(
+            "</head>",
+            "<link rel=\"manifest\" href=\"./manifest.webmanifest\"><link rel=\"icon\" href=\"./icon.svg\"></head>",
+        );
+        write(&index_path, &with_manifest)?;
+    }
     println!(
         "leeward-bundle: {} ({} bytes), index.html loader in its own file",
         dist.join("leeward.html").display(),
@@ -54,6 +89,75 @@ fn run(dist: &Path) -> Result<(), String> {
     );
     Ok(())
 }
+
+/// Registers the service worker on http(s) and offers an update when a new build is waiting; the
+/// update is explicit (a button) and saved work, in localStorage, is never touched by it.
+const REGISTER_JS: &str = r#"
+if ('serviceWorker' in navigator && location.protocol.startsWith('http')) {
+  let updating = false;
+  const offer = (w) => {
+    if (document.querySelector('[data-update]')) return;
+    const b = document.createElement('button');
+    b.type = 'button';
+    b.className = 'update-ready';
+    b.dataset.update = '';
+    b.textContent = 'A new version of Leeward is ready: reload to use it (saved work is kept)';
+    b.onclick = () => { updating = true; w.postMessage('activate'); };
+    document.body.prepend(b);
+  };
+  navigator.serviceWorker.addEventListener('controllerchange', () => { if (updating) location.reload(); });
+  navigator.serviceWorker.register('./sw.js').then((reg) => {
+    if (reg.waiting && navigator.serviceWorker.controller) offer(reg.waiting);
+    reg.addEventListener('updatefound', () => {
+      const w = reg.installing;
+      if (w) w.addEventListener('statechange', () => {
+        if (w.state === 'installed' && navigator.serviceWorker.controller) offer(w);
+      });
+    });
+    return navigator.serviceWorker.ready;
+  }).then(() => { document.documentElement.dataset.offline = 'ready'; })
+    .catch(() => { document.documentElement.dataset.offline = 'unavailable'; });
+}
+"#;
+
+/// The service worker: precache this build, serve same-origin GETs cache-first, drop older
+/// builds' caches when activated; a new build waits until the page asks it to take over.
+const SW_JS: &str = r#"const VERSION = 'leeward-__VERSION__';
+const FILES = [__FILES__];
+self.addEventListener('install', (e) => {
+  e.waitUntil(caches.open(VERSION).then((c) => c.addAll(FILES)).then(() => {
+    if (!self.registration.active) return self.skipWaiting();
+  }));
+});
+self.addEventListener('activate', (e) => {
+  e.waitUntil(caches.keys()
+    .then((ks) => Promise.all(ks.filter((k) => k.startsWith('leeward-') && k !== VERSION).map((k) => caches.delete(k))))
+    .then(() => self.clients.claim()));
+});
+self.addEventListener('message', (e) => { if (e.data === 'activate') self.skipWaiting(); });
+self.addEventListener('fetch', (e) => {
+  const url = new URL(e.request.url);
+  if (e.request.method !== 'GET' || url.origin !== self.location.origin) return;
+  e.respondWith(caches.open(VERSION).then((c) => c.match(e.request, { ignoreSearch: true })
+    .then((r) => r || (e.request.mode === 'navigate' ? c.match('./index.html') : undefined))
+    .then((r) => r || fetch(e.request))));
+});
+"#;
+
+const MANIFEST: &str = r##"{
+  "name": "Leeward — heat loss in a cross-flow",
+  "short_name": "Leeward",
+  "start_url": "./",
+  "scope": "./",
+  "display": "standalone",
+  "background_color": "#ffffff",
+  "theme_color": "#004f9e",
+  "icons": [{ "src": "icon.svg", "sizes": "any", "type": "image/svg+xml", "purpose": "any" }]
+}
+"##;
+
+const ICON_SVG: &str = r##"<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 64 64"><rect width="64" height="64" rx="12" fill="#004f9e"/><g stroke="#fff" stroke-width="4" stroke-linecap="round"><line x1="8" y1="20" x2="22" y2="20"/><line x1="8" y1="32" x2="22" y2="32"/><line x1="8" y1="44" x2="22" y2="44"/></g><circle cx="40" cy="32" r="14" fill="#fff"/></svg>
+"##;
 
 fn read(p: &Path) -> Result<String, String> {
     fs::read_to_string(p).map_err(|e| format!("reading {}: {e}", p.display()))

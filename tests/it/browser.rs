@@ -988,3 +988,58 @@ fn saved_work_survives_travels_and_prints() {
         c.close().await.unwrap();
     });
 }
+
+/// Installable offline: after one visit over loopback the service worker has the whole build, so
+/// with the server stopped the page reloads and computes; a saved item survives it.
+#[test]
+fn works_offline_after_the_first_visit() {
+    if !ready() {
+        return;
+    }
+    let _one = BROWSER.lock().unwrap_or_else(|e| e.into_inner());
+    let (server, base) = serve();
+    run(async {
+        let (_driver, c) = browser().await;
+        c.goto(&base).await.unwrap();
+        wait_rendered(&c).await;
+        let t0 = Instant::now();
+        while js(&c, "return document.documentElement.dataset.offline || '';").await
+            != json!("ready")
+        {
+            assert!(
+                t0.elapsed() < Duration::from_secs(20),
+                "service worker never ready"
+            );
+            tokio::time::sleep(Duration::from_millis(100)).await;
+        }
+        let manifest = js(
+            &c,
+            "return document.querySelector('link[rel=manifest]').href;",
+        )
+        .await;
+        assert!(manifest.as_str().unwrap().ends_with("manifest.webmanifest"));
+        c.find(Locator::Css("[data-action=save]"))
+            .await
+            .unwrap()
+            .click()
+            .await
+            .unwrap();
+        drop(server);
+        c.refresh().await.unwrap();
+        wait_rendered(&c).await;
+        assert!(
+            close(si(&c, "h").await, expect(&DEMO).h),
+            "offline reload did not compute"
+        );
+        assert_eq!(
+            js(
+                &c,
+                "return document.querySelectorAll('[data-saved]').length;"
+            )
+            .await,
+            json!(1)
+        );
+        js(&c, "localStorage.clear(); return true;").await;
+        c.close().await.unwrap();
+    });
+}
