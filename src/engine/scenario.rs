@@ -707,7 +707,8 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
     evaluate_with(s, true)
 }
 
-/// As [`evaluate`]; without the sweeps (the plots' data) when `sweeps` is false, for lists.
+/// As [`evaluate`]; without the sweeps (the plots' data) and the written working when `sweeps` is
+/// false, for lists.
 pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError> {
     for spec in FIELDS.iter().filter(|sp| s.uses(sp.field)) {
         let v = s.get(spec.field);
@@ -890,7 +891,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         q_total,
         job: job_result.as_ref(),
     };
-    let working = working(s, &a, &w);
+    let working = if sweeps { working(s, &a, &w) } else { Vec::new() };
     let role = |r: &str| -> &'static str {
         match r {
             "film" => "film temperature Tf: Churchill–Bernstein, Hilpert, Ranz–Marshall, Jakob, natural convection",
