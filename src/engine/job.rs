@@ -258,7 +258,12 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
     }
     // Freezing of still water in a pipe.
     let tinf = job.stream.t_inf;
-    if g == Geometry::Cylinder && tinf < 273.15 && job.process_temp > 273.15 && t.mass_flow == 0.0 {
+    if g == Geometry::Cylinder
+        && tinf < 273.15
+        && job.process_temp > 273.15
+        && t.mass_flow == 0.0
+        && solution.q > 0.0
+    {
         let r_in = job.construction.r_in;
         let water = WATER_RHO * std::f64::consts::PI * r_in * r_in;
         let c = water * WATER_CP + t.wall_heat_capacity.unwrap_or(0.0);
@@ -286,8 +291,23 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
     // Temperature along a pipe carrying a flow.
     if g == Geometry::Cylinder && t.mass_flow > 0.0 {
         let r_tot = (job.process_temp - tinf) / solution.q;
-        let t_out =
-            tinf + (job.process_temp - tinf) * (-run / (t.mass_flow * t.process_cp * r_tot)).exp();
+        let (lo, hi) = (
+            job.process_temp.min(tinf).min(job.t_surround),
+            job.process_temp.max(tinf).max(job.t_surround),
+        );
+        let t_out = if r_tot.is_finite() && r_tot > 0.0 {
+            // Loss proportional to the fluid's excess over the air, along the run.
+            tinf + (job.process_temp - tinf) * (-run / (t.mass_flow * t.process_cp * r_tot)).exp()
+        } else {
+            // Heat flowing against the air difference (hot surroundings): the inlet's loss held
+            // along the run.
+            job.process_temp - solution.q * run / (t.mass_flow * t.process_cp)
+        };
+        let t_out = if t_out.is_finite() {
+            t_out.clamp(lo, hi)
+        } else {
+            tinf
+        };
         verdicts.push(Verdict {
             id: "flow",
             title: "Along the run",
@@ -312,6 +332,20 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
             .map(|l| l.thickness)
             .collect(),
     })
+}
+
+/// Figures that came out non-finite (a resistance or time beyond f64, from absurd inputs) are
+/// taken off their card, which says so: no NaN or ∞ is ever shown.
+pub fn sanitize(verdicts: &mut [Verdict]) {
+    for v in verdicts {
+        let before = v.figures.len();
+        v.figures.retain(|f| f.1.is_finite());
+        if v.figures.len() < before {
+            v.summary.push_str(
+                " Some figures are beyond what can be computed for these inputs and are left out.",
+            );
+        }
+    }
 }
 
 /// Lumped cooling (or warming) of a solid round bar or sphere in the stream: the time constant

@@ -334,7 +334,7 @@ pub const FIELDS: [FieldSpec; 40] = [
     f(Field::ProcessCp, Group::Job, "cpp", "Heat capacity of the process fluid", Dim::SpecificHeat, (0.0, true, 1e6), "about 4180 J/(kg·K) for water"),
     f(Field::Hours, Group::Job, "hy", "Operating hours", Dim::HoursPerYear, (0.0, false, 8784.0), "per year"),
     f(Field::Price, Group::Job, "pe", "Energy price", Dim::EnergyPrice, (0.0, false, 1e-4), "of the fuel or power that makes up the loss"),
-    f(Field::Efficiency, Group::Job, "ef", "Heater or boiler efficiency", Dim::Fraction, (0.0, true, 1.0), "share of that energy that becomes heat"),
+    f(Field::Efficiency, Group::Job, "ef", "Heater or boiler efficiency", Dim::Fraction, (0.01, false, 1.0), "share of that energy that becomes heat"),
     f(Field::CoolTarget, Group::Job, "T1", "Cool or warm a solid body to", Dim::Temperature, (0.0, true, 3000.0), "its cooling time in this stream (material above)"),
 ];
 
@@ -810,7 +810,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
                     let mut t = *s;
                     t.layer_t[i] = x;
                     let o = quick(&t, p, fluid, &targets).ok()?;
-                    Some((x, o.0, o.1))
+                    (o.0.is_finite() && o.1.is_finite()).then_some((x, o.0, o.1))
                 })
                 .collect()
         }
@@ -826,7 +826,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         let mut t = *s;
         t.speed = u;
         let o = quick(&t, p, fluid, &targets).ok()?;
-        Some((u, o.2, o.0, o.1))
+        (o.0.is_finite() && o.1.is_finite() && o.2.is_finite()).then_some((u, o.2, o.0, o.1))
     })
     .collect();
     let film = a.film.t;
@@ -845,8 +845,11 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
     let q_unit = q_conv_unit + q_rad_unit;
     let q_per_length = s.shape.perimeter_over_d().map(|_| q_unit);
     let q_total = finite_result("heat flow", q_unit * run)?;
-    let annual_energy = q_total.abs() * s.hours * 3600.0 / s.efficiency;
-    let annual_cost = annual_energy * s.price;
+    let annual_energy = finite_result(
+        "energy per year",
+        q_total.abs() * s.hours * 3600.0 / s.efficiency,
+    )?;
+    let annual_cost = finite_result("cost per year", annual_energy * s.price)?;
     let mut verdicts = match &job_result {
         Some(r) => r.verdicts.clone(),
         None => given_verdicts(s, ts, dew_point),
@@ -864,6 +867,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
             ));
         }
     }
+    crate::engine::job::sanitize(&mut verdicts);
     let nusselt = finite_result("Nusselt number", h * outer_d / a.film.k)?;
 
     for props in [&a.film, &a.free, &a.surface] {
@@ -891,7 +895,11 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         q_total,
         job: job_result.as_ref(),
     };
-    let working = if sweeps { working(s, &a, &w) } else { Vec::new() };
+    let working = if sweeps {
+        working(s, &a, &w)
+    } else {
+        Vec::new()
+    };
     let role = |r: &str| -> &'static str {
         match r {
             "film" => "film temperature Tf: Churchill–Bernstein, Hilpert, Ranz–Marshall, Jakob, natural convection",

@@ -247,3 +247,136 @@ proptest! {
         prop_assert!(o.surface_temp >= lo - 1e-9 && o.surface_temp <= hi + 1e-9);
     }
 }
+
+/// Cases for the whole-scenario fuzz: 2,000 in the test command, `LEEWARD_FUZZ_CASES` for the long
+/// run (README: `LEEWARD_FUZZ_CASES=1000000 cargo test --release --test it fuzz`).
+fn fuzz_cases() -> u32 {
+    std::env::var("LEEWARD_FUZZ_CASES")
+        .ok()
+        .and_then(|v| v.parse().ok())
+        .unwrap_or(2_000)
+}
+
+/// Any scenario at all: every choice; each numeric input kept, scaled, or drawn from far beyond its
+/// limits on both sides (zero, negatives, huge and tiny values).
+fn any_scenario() -> impl Strategy<Value = leeward::engine::scenario::Scenario> {
+    use leeward::engine::scenario::{
+        Axis, FluidKind, HumidityInput, PressureInput, Shape, SurfaceMode, WallMaterial, Wind,
+        DEMO, FIELDS,
+    };
+    use leeward::engine::units::Dim;
+    // Per input: 0–2 keep the demo's value, 3–5 scale it by 0.2–5 (temperatures: 150–1500 K),
+    // 6 a wild value from anywhere.
+    let values = proptest::collection::vec(
+        (
+            0..7u8,
+            0.2..5.0f64,
+            prop_oneof![
+                -1e6..1e6f64,
+                -1.0..1.0f64,
+                prop_oneof![
+                    Just(0.0),
+                    Just(1e308),
+                    Just(-1e308),
+                    Just(f64::MIN_POSITIVE),
+                    Just(1e-300)
+                ],
+            ],
+        ),
+        FIELDS.len(),
+    );
+    (
+        values,
+        0..7usize,
+        0..7usize,
+        0..16u32,
+        0..4usize,
+        0..5usize,
+        any::<bool>(),
+    )
+        .prop_map(|(vals, shape, fluid, bits, layers, wall, wild_ok)| {
+            let mut s = DEMO;
+            s.shape = Shape::ALL[shape];
+            s.fluid = FluidKind::ALL[fluid];
+            s.axis = if bits & 1 == 0 {
+                Axis::Horizontal
+            } else {
+                Axis::Vertical
+            };
+            s.wind = [Wind::Horizontal, Wind::Up, Wind::Down][(bits as usize >> 1) % 3];
+            s.pressure_input = if bits & 4 == 0 {
+                PressureInput::Absolute
+            } else {
+                PressureInput::Elevation
+            };
+            s.humidity_input = if bits & 2 == 0 {
+                HumidityInput::Relative
+            } else {
+                HumidityInput::DewPoint
+            };
+            s.surface_mode = if bits & 8 == 0 {
+                SurfaceMode::Given
+            } else {
+                SurfaceMode::Solved
+            };
+            s.layer_count = layers;
+            s.wall = WallMaterial::ALL[wall];
+            for (spec, (how, factor, wild)) in FIELDS.iter().zip(vals) {
+                let demo = s.get(spec.field);
+                match how {
+                    0..=2 => {}
+                    3..=5 if spec.dim == Dim::Temperature => {
+                        s.set(spec.field, 150.0 + 1350.0 * (factor - 0.2) / 4.8)
+                    }
+                    // Half the scenarios stay inside every input's hard limits, so that many of
+                    // them compute an answer; the other half take wild values too.
+                    3..=5 | 6 if !wild_ok => {
+                        let lo = if spec.min_open {
+                            spec.min + 1e-9 * spec.max
+                        } else {
+                            spec.min
+                        };
+                        s.set(spec.field, (demo * factor).clamp(lo, spec.max))
+                    }
+                    3..=5 => s.set(spec.field, demo * factor),
+                    _ => s.set(spec.field, wild),
+                }
+            }
+            s
+        })
+}
+
+static FUZZ_OK: std::sync::atomic::AtomicUsize = std::sync::atomic::AtomicUsize::new(0);
+static FUZZ_ALL: std::sync::atomic::AtomicUsize = std::sync::atomic::AtomicUsize::new(0);
+
+proptest! {
+    #![proptest_config(ProptestConfig::with_cases(fuzz_cases()))]
+
+    /// The whole scenario space, in and far outside every method's domain: never a panic, and every
+    /// number of an answer that is not an error is finite.
+    #[test]
+    fn fuzz_whole_scenario_space(s in any_scenario()) {
+        let r = leeward::engine::scenario::evaluate(&s);
+        FUZZ_OK.fetch_add(r.is_ok() as usize, std::sync::atomic::Ordering::Relaxed);
+        FUZZ_ALL.fetch_add(1, std::sync::atomic::Ordering::Relaxed);
+        if std::env::var_os("LEEWARD_FUZZ_REPORT").is_some() && FUZZ_ALL.load(std::sync::atomic::Ordering::Relaxed) % 1000 == 0 {
+            eprintln!("fuzz: {} of {} cases computed an answer", FUZZ_OK.load(std::sync::atomic::Ordering::Relaxed), FUZZ_ALL.load(std::sync::atomic::Ordering::Relaxed));
+        }
+        if let Ok(o) = r {
+            let mut nums = vec![o.h, o.q_total, o.q_conv_total, o.q_rad_total, o.h_rad, o.surface_temp,
+                o.outer_d, o.annual_energy, o.annual_cost, o.nusselt, o.reynolds, o.prandtl, o.film_temp, o.pressure];
+            nums.extend(o.q_per_length);
+            nums.extend(o.dew_point);
+            for e in &o.analysis.forced { nums.extend([e.nu, e.h, e.groups.re, e.groups.pr]); }
+            for v in &o.verdicts { nums.extend(v.figures.iter().map(|f| f.1)); }
+            for (a, b, c) in &o.thickness_sweep { nums.extend([*a, *b, *c]); }
+            for (a, b, c, d) in &o.wind_sweep { nums.extend([*a, *b, *c, *d]); }
+            for (i, v) in nums.iter().enumerate() {
+                prop_assert!(v.is_finite(), "non-finite #{i} = {v} for {s:?}");
+            }
+            for st in &o.working {
+                prop_assert!(!st.text.contains("NaN") && !st.text.contains("inf"), "{}: {}", st.title, st.text);
+            }
+        }
+    }
+}
