@@ -3,6 +3,7 @@
 #   ./setup.sh serve   set up, build the release page and serve it on http://127.0.0.1:8080
 #   ./setup.sh test    set up, build, and run every test (native engine, integration, browser)
 #   ./setup.sh build   set up and build dist/ and dist/leeward.html only
+#   ./setup.sh bench   set up, build, and print every performance figure (criterion in full)
 #   ./setup.sh tools   set up the tools only
 set -euo pipefail
 cd "$(dirname "$0")"
@@ -134,6 +135,26 @@ build() {
   size_report
 }
 
+# Performance figures: reported, never gated (times vary; the size budget is gated in build).
+# --quick runs each criterion benchmark once (a smoke test that they work) instead of measuring.
+figures() {
+  if [ "${1:-}" = "--quick" ]; then
+    log "benchmarks, each run once (cargo bench measures them: ./setup.sh bench)"
+    cargo test --benches --quiet
+  else
+    log "criterion benchmarks (native, opt-level 3)"
+    cargo bench --bench engine -- --warm-up-time 1 --measurement-time 3
+  fi
+  log "browser figures (headless Chromium; reported only)"
+  cargo run --quiet --example browser_timing || log "browser timing failed (reported only)"
+  log "CoolProp side by side (PyPI CoolProp==8.0.0; reported only)"
+  if python3 -c "import CoolProp" 2>/dev/null || python3 -m pip install --quiet "CoolProp==8.0.0" >/dev/null 2>&1; then
+    python3 tests/bench/coolprop_ratio.py || log "CoolProp comparison failed (reported only)"
+  else
+    log "CoolProp could not be installed: comparison skipped"
+  fi
+}
+
 case "${1:-}" in
   tools) tools ;;
   build) tools; build ;;
@@ -148,6 +169,11 @@ case "${1:-}" in
     cargo test --no-default-features --lib
     log "everything, including the browser tests against dist/"
     LEEWARD_REQUIRE_BROWSER=1 cargo test
+    figures --quick
     ;;
-  *) echo "usage: $0 serve|test|build|tools" >&2; exit 2 ;;
+  bench)
+    tools; build
+    figures
+    ;;
+  *) echo "usage: $0 serve|test|bench|build|tools" >&2; exit 2 ;;
 esac
