@@ -279,6 +279,22 @@ mod tests {
         assert!(nu.flags.is_empty());
     }
 
+    /// Worked example, from memory: Çengel & Ghajar, Heat and Mass Transfer, Example 7-6 — a 10 cm
+    /// steam pipe at 110 °C in 10 °C air at 8 m/s; film properties at 60 °C (k = 0.02808 W/(m·K),
+    /// ν = 1.896×10⁻⁵ m²/s, Pr = 0.7202) give Re = 4.219×10⁴, Nu = 124, h = 34.8 W/(m²·K) and
+    /// 1093 W per metre.
+    #[test]
+    fn cengel_example_7_6_from_memory() {
+        let re: f64 = 8.0 * 0.1 / 1.896e-5;
+        assert!((re - 4.219e4).abs() < 5.0);
+        let nu = churchill_bernstein(re, 0.7202).value;
+        assert!((nu - 124.0).abs() < 0.5, "{nu}");
+        let h = nu * 0.02808 / 0.1;
+        assert!((h - 34.8).abs() < 0.15, "{h}");
+        let q = h * std::f64::consts::PI * 0.1 * 100.0;
+        assert!((q - 1093.0).abs() < 6.0, "{q}");
+    }
+
     #[test]
     fn tends_to_0_3_in_still_fluid_and_is_flagged_there() {
         let nu = churchill_bernstein(1e-12, 0.7);
