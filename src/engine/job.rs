@@ -397,6 +397,20 @@ pub fn lumped(
     }
 }
 
+/// Typical total emissivities of outer surfaces near room temperature (common practice: rounded
+/// values of the kind insulation guides list; a measured value is always better).
+pub const EMISSIVITIES: [(&str, f64); 9] = [
+    ("Painted or oxidised steel", 0.9),
+    ("Black paint", 0.95),
+    ("PVC or plastic jacket", 0.9),
+    ("Cloth or canvas jacket", 0.9),
+    ("Weathered galvanised steel", 0.3),
+    ("New galvanised steel", 0.1),
+    ("Stainless steel jacket", 0.2),
+    ("Oxidised aluminium jacket", 0.15),
+    ("Bright aluminium jacket", 0.05),
+];
+
 /// Nominal pipe sizes and their outside diameters, m: ASME B36.10M (from memory; the ODs are the
 /// same in EN 10220's series 1 to the rounding shown).
 pub const NOMINAL_SIZES: [(&str, f64); 19] = [

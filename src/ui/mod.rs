@@ -378,6 +378,29 @@ pub fn App() -> impl IntoView {
             </div>
         }
     };
+    // Typical emissivities set ε (and the text shown in its field).
+    let emissivity_picker = move || {
+        let opts = crate::engine::job::EMISSIVITIES
+            .iter()
+            .enumerate()
+            .map(|(i, (name, e))| view! { <option value=i.to_string()>{format!("{name}: {e}")}</option> })
+            .collect_view();
+        view! {
+            <div class="field">
+                <label for="in-eps-pick">"Typical emissivities"<small>"common practice, rounded; a measured value is better"</small></label>
+                <select id="in-eps-pick" class="wide" data-choice="emissivity" on:change=move |ev| {
+                    let Ok(i) = event_target_value(&ev).parse::<usize>() else { return };
+                    let Some((_, e)) = crate::engine::job::EMISSIVITIES.get(i) else { return };
+                    scenario.update(|s| s.emissivity = *e);
+                    let u = choice.get_untracked().get(Dim::Ratio);
+                    text_of(Field::Emissivity).set(shown_text(*e, u));
+                }>
+                    <option value="" selected>"Choose a surface, or type ε above"</option>
+                    {opts}
+                </select>
+            </div>
+        }
+    };
     let layer_picker = move || {
         let buttons = (0..=3usize)
             .map(|n| {
@@ -556,6 +579,7 @@ pub fn App() -> impl IntoView {
                     {surface_toggle}
                     {wall_select}
                     {fields_of(Group::Surface)}
+                    {emissivity_picker}
                     {layer_picker}
                     {fields_of(Group::Layers)}
                 </section>

@@ -567,6 +567,18 @@ async fn exercise(c: &Client, base: &str) {
     .unwrap();
     assert!(close(si(c, "h").await, want.h));
 
+    // A typical emissivity from the list sets ε and the radiation follows the engine.
+    pick(c, "#in-eps-pick", "8").await;
+    assert_eq!(
+        js(c, "return document.querySelector('#in-e').value;").await,
+        json!("0.05")
+    );
+    let mut shiny = s;
+    shiny.emissivity = 0.05;
+    assert!(close(si(c, "q_rad").await, expect(&shiny).q_rad_total));
+    pick(c, "#in-eps-pick", "0").await;
+    assert!(close(si(c, "h").await, want.h));
+
     // The link carries the scenario: load it fresh and get the same numbers.
     let url = c.current_url().await.unwrap().to_string();
     assert!(url.contains("D=0.0334"), "link not updated: {url}");
