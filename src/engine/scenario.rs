@@ -127,8 +127,11 @@ pub struct Scenario {
     /// Each layer's conductivity at the data sheet's mean temperatures A and B.
     pub layer_ka: [f64; 3],
     pub layer_kb: [f64; 3],
+    /// An optional third data-sheet point per layer (0: not given) at mean temperature C.
+    pub layer_kc: [f64; 3],
     pub k_temp_a: f64,
     pub k_temp_b: f64,
+    pub k_temp_c: f64,
     pub emissivity: f64,
     pub t_surround: f64,
     pub touch_limit: f64,
@@ -181,8 +184,10 @@ pub const DEMO: Scenario = Scenario {
     layer_t: [0.04, 0.02, 0.02],
     layer_ka: [0.036, 0.036, 0.036],
     layer_kb: [0.045, 0.045, 0.045],
+    layer_kc: [0.0, 0.0, 0.0],
     k_temp_a: 283.15,
     k_temp_b: 373.15,
+    k_temp_c: 473.15,
     // Painted or oxidised steel (common practice).
     emissivity: 0.9,
     t_surround: 278.15,
@@ -235,6 +240,10 @@ pub enum Field {
     Layer3Kb,
     KTempA,
     KTempB,
+    Layer1Kc,
+    Layer2Kc,
+    Layer3Kc,
+    KTempC,
     TouchLimit,
     DewMargin,
     MassFlow,
@@ -295,7 +304,7 @@ const fn f(
 }
 
 #[rustfmt::skip]
-pub const FIELDS: [FieldSpec; 40] = [
+pub const FIELDS: [FieldSpec; 44] = [
     f(Field::Diameter, Group::Body, "D", "Size D", Dim::Length, (0.0, true, 100.0), "as drawn: the width across the stream (bare outside diameter of a pipe)"),
     f(Field::Length, Group::Body, "L", "Length", Dim::RunLength, (0.0, true, 10_000.0), "along the axis; the height when upright"),
     f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air"),
@@ -328,6 +337,10 @@ pub const FIELDS: [FieldSpec; 40] = [
     f(Field::Layer3Kb, Group::Layers, "kb3", "Layer 3 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k"),
     f(Field::KTempA, Group::Layers, "Tka", "Mean temperature A", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's first k"),
     f(Field::KTempB, Group::Layers, "Tkb", "Mean temperature B", Dim::Temperature, (0.0, true, 3000.0), "of its second k"),
+    f(Field::Layer1Kc, Group::Layers, "kc1", "Layer 1 k at mean temperature C", Dim::ThermalConductivity, (0.0, false, 100.0), "optional third point (0: k is linear through A and B)"),
+    f(Field::Layer2Kc, Group::Layers, "kc2", "Layer 2 k at mean temperature C", Dim::ThermalConductivity, (0.0, false, 100.0), "optional third point (0: linear)"),
+    f(Field::Layer3Kc, Group::Layers, "kc3", "Layer 3 k at mean temperature C", Dim::ThermalConductivity, (0.0, false, 100.0), "optional third point (0: linear)"),
+    f(Field::KTempC, Group::Layers, "Tkc", "Mean temperature C", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's third k, if given"),
     f(Field::TouchLimit, Group::Job, "Tl", "Touch limit", Dim::Temperature, (0.0, true, 3000.0), "60 °C is common practice; local codes govern"),
     f(Field::DewMargin, Group::Job, "dm", "Margin above the dew point", Dim::TemperatureDifference, (0.0, false, 50.0), "for cold surfaces in humid air"),
     f(Field::MassFlow, Group::Job, "mf", "Flow through the pipe", Dim::MassFlow, (0.0, false, 1e4), "0 for still water (then the freezing times)"),
@@ -380,6 +393,10 @@ impl Scenario {
             Field::Layer3Kb => self.layer_kb[2],
             Field::KTempA => self.k_temp_a,
             Field::KTempB => self.k_temp_b,
+            Field::Layer1Kc => self.layer_kc[0],
+            Field::Layer2Kc => self.layer_kc[1],
+            Field::Layer3Kc => self.layer_kc[2],
+            Field::KTempC => self.k_temp_c,
             Field::TouchLimit => self.touch_limit,
             Field::DewMargin => self.dew_margin,
             Field::MassFlow => self.mass_flow,
@@ -425,6 +442,10 @@ impl Scenario {
             Field::Layer3Kb => &mut self.layer_kb[2],
             Field::KTempA => &mut self.k_temp_a,
             Field::KTempB => &mut self.k_temp_b,
+            Field::Layer1Kc => &mut self.layer_kc[0],
+            Field::Layer2Kc => &mut self.layer_kc[1],
+            Field::Layer3Kc => &mut self.layer_kc[2],
+            Field::KTempC => &mut self.k_temp_c,
             Field::TouchLimit => &mut self.touch_limit,
             Field::DewMargin => &mut self.dew_margin,
             Field::MassFlow => &mut self.mass_flow,
@@ -459,13 +480,17 @@ impl Scenario {
             Field::SurfaceTemp => !self.solved(),
             Field::ProcessTemp | Field::HInside | Field::WallThickness => self.solved(),
             Field::WallK => self.solved() && self.wall == WallMaterial::User,
-            Field::Layer1T | Field::Layer1Ka | Field::Layer1Kb | Field::KTempA | Field::KTempB => {
-                self.solved() && self.layer_count >= 1
-            }
-            Field::Layer2T | Field::Layer2Ka | Field::Layer2Kb => {
+            Field::Layer1T
+            | Field::Layer1Ka
+            | Field::Layer1Kb
+            | Field::Layer1Kc
+            | Field::KTempA
+            | Field::KTempB
+            | Field::KTempC => self.solved() && self.layer_count >= 1,
+            Field::Layer2T | Field::Layer2Ka | Field::Layer2Kb | Field::Layer2Kc => {
                 self.solved() && self.layer_count >= 2
             }
-            Field::Layer3T | Field::Layer3Ka | Field::Layer3Kb => {
+            Field::Layer3T | Field::Layer3Ka | Field::Layer3Kb | Field::Layer3Kc => {
                 self.solved() && self.layer_count >= 3
             }
             Field::MassFlow | Field::ProcessCp => self.solved() && self.shape == Shape::Cylinder,
@@ -493,17 +518,35 @@ impl Scenario {
         !self.solved() && matches!(self.shape, Shape::Cylinder | Shape::Sphere)
     }
 
-    /// Conductivity of insulation layer `i` as k(θ) through the two data-sheet points.
+    /// Conductivity of insulation layer `i` as k(θ): linear through the data sheet's points at A
+    /// and B, or the quadratic through A, B and C when a third k is given.
     pub fn layer_conductivity(&self, i: usize) -> Conductivity {
-        let (ta, tb) = (self.k_temp_a - 273.15, self.k_temp_b - 273.15);
-        let (ka, kb) = (self.layer_ka[i], self.layer_kb[i]);
-        let slope = if (tb - ta).abs() > 1e-9 {
-            (kb - ka) / (tb - ta)
+        let (x0, x1, x2) = (
+            self.k_temp_a - 273.15,
+            self.k_temp_b - 273.15,
+            self.k_temp_c - 273.15,
+        );
+        let (k0, k1, k2) = (self.layer_ka[i], self.layer_kb[i], self.layer_kc[i]);
+        let distinct = (x1 - x0).abs() > 1e-9 && (x2 - x0).abs() > 1e-9 && (x2 - x1).abs() > 1e-9;
+        if k2 > 0.0 && distinct {
+            // Newton's divided differences, expanded to a + b·θ + c·θ².
+            let d01 = (k1 - k0) / (x1 - x0);
+            let d02 = (k2 - k0) / (x2 - x0);
+            let c = (d02 - d01) / (x2 - x1);
+            let b = d01 - c * (x0 + x1);
+            return Conductivity {
+                a: k0 - b * x0 - c * x0 * x0,
+                b,
+                c,
+            };
+        }
+        let slope = if (x1 - x0).abs() > 1e-9 {
+            (k1 - k0) / (x1 - x0)
         } else {
             0.0
         };
         Conductivity {
-            a: ka - slope * ta,
+            a: k0 - slope * x0,
             b: slope,
             c: 0.0,
         }
@@ -625,6 +668,7 @@ pub fn error_field(e: &EngineError) -> Option<Field> {
             "bore radius" => Some(Field::WallThickness),
             "layer conductivity" => Some(Field::Layer1Kb),
             "mean temperature B" => Some(Field::KTempB),
+            "mean temperature C" => Some(Field::KTempC),
             "emissivity" => Some(Field::Emissivity),
             "relative humidity" | "vapour pressure" => Some(Field::RelativeHumidity),
             "dew point" => Some(Field::DewPoint),
@@ -776,6 +820,18 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
                 value: s.k_temp_b,
                 unit: "K",
                 why: "the two data-sheet mean temperatures must differ when the two k values do",
+            });
+        }
+        let third = s.layer_kc[..s.layer_count.min(3)].iter().any(|k| *k > 0.0);
+        if third
+            && ((s.k_temp_c - s.k_temp_a).abs() < 1e-9 || (s.k_temp_c - s.k_temp_b).abs() < 1e-9)
+        {
+            return Err(EngineError::Undefined {
+                quantity: "mean temperature C",
+                value: s.k_temp_c,
+                unit: "K",
+                why:
+                    "the third data-sheet point needs its own mean temperature, apart from A and B",
             });
         }
         let job = Job {
@@ -1581,6 +1637,26 @@ mod tests {
         .unwrap();
         assert_eq!(o.properties[0].props.mu, film.mu);
         assert!((o.dew_point.unwrap() - m.dew_point).abs() < 1e-9);
+    }
+
+    /// A third data-sheet point makes k the quadratic through all three (hand check at each point).
+    #[test]
+    fn three_point_conductivity_passes_through_each_point() {
+        let mut s = solved_demo();
+        s.layer_kc = [0.060, 0.0, 0.0];
+        let k = s.layer_conductivity(0);
+        for (t, want) in [
+            (s.k_temp_a, 0.036),
+            (s.k_temp_b, 0.045),
+            (s.k_temp_c, 0.060),
+        ] {
+            assert!((k.at(t) - want).abs() < 1e-12, "{t}: {}", k.at(t));
+        }
+        assert!(k.c > 0.0, "the sheet's points curve upward");
+        assert!(evaluate(&s).is_ok());
+        s.k_temp_c = s.k_temp_b;
+        let e = evaluate(&s).unwrap_err();
+        assert_eq!(error_field(&e), Some(Field::KTempC));
     }
 
     #[test]
