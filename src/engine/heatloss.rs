@@ -153,25 +153,18 @@ pub fn solve(job: &Job) -> Result<Solution, EngineError> {
         )
     };
     let first = solve_fixed(job, start)?;
-    let free_at = |sol: &Solution| -> Result<Option<usize>, EngineError> {
-        if (sol.t_surface - s.t_inf).abs() < 1e-9 {
-            return Ok(None);
-        }
-        Ok(Some(
-            body::analyse(&Body {
-                d: sol.outer_d,
-                t_s: sol.t_surface,
-                ..*s
-            })?
-            .recommended,
-        ))
+    // The correlation the solution itself would recommend: the first in the shape's order inside
+    // its ranges, read off the analysis the solve already made there.
+    let free_at = |sol: &Solution| -> Option<usize> {
+        let a = sol.loss.analysis.as_ref()?;
+        Some(a.forced.iter().position(body::Estimate::valid).unwrap_or(0))
     };
-    let at_first = free_at(&first)?;
+    let at_first = free_at(&first);
     if at_first.is_none() || at_first == start {
         return Ok(first);
     }
     let mut second = solve_fixed(job, at_first)?;
-    second.switched = free_at(&second)? != at_first;
+    second.switched = free_at(&second) != at_first;
     Ok(second)
 }
 

@@ -106,9 +106,6 @@ pub struct JobResult {
     pub bare: Option<Solution>,
     pub verdicts: Vec<Verdict>,
     pub notes: Vec<String>,
-    /// Annual energy bought to make up the loss, J/yr, and its cost per year.
-    pub annual_energy: f64,
-    pub annual_cost: f64,
     /// Bore radius and each layer's thickness (the wall first), m, for the cross-section.
     pub r_in: f64,
     pub thicknesses: Vec<f64>,
@@ -117,6 +114,11 @@ pub struct JobResult {
 pub const TOUCH_CAUTION: &str = "Hot surfaces burn. The touch limit here is common practice, not a rule: local codes and your employer's personnel-protection standard govern. Guard or insulate, and check the surface with a contact thermometer before anyone touches it.";
 pub const DEW_CAUTION: &str = "Condensation wets insulation, corrodes steel and drips. A vapour-retarding jacket and sealed joints matter as much as thickness; cold-service design is a job for a qualified designer under local codes.";
 pub const FREEZE_CAUTION: &str = "A frozen line can burst. These times assume still water, no heat tracing and steady weather; wind gusts, colder nights and thin spots (valves, supports) freeze first. Follow local codes and licensed practice for freeze protection.";
+
+/// Energy bought per year to make up a heat flow `q` (W) over `hours` of operation, J/yr.
+pub fn annual_energy(q: f64, hours: f64, efficiency: f64) -> f64 {
+    q.abs() * hours * 3600.0 / efficiency
+}
 
 /// Heat flow per unit (W/m or W) over a run of length `len` (1 for a sphere).
 fn per_run(q: f64, g: Geometry, len: f64) -> f64 {
@@ -142,8 +144,6 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
     let mut notes = Vec::new();
     let run = job.stream.length;
     let q_run = per_run(solution.q, g, run);
-    let annual_energy = q_run.abs() * t.hours * 3600.0 / t.efficiency;
-    let annual_cost = annual_energy * t.price;
     let mut verdicts = Vec::new();
 
     if let (Some(b), Some(rc)) = (&bare, solution.critical_radius) {
@@ -173,12 +173,12 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
                 ("saved", saving, Dim::HeatFlow),
                 (
                     "energy saved",
-                    saving.abs() * t.hours * 3600.0 / t.efficiency,
+                    annual_energy(saving, t.hours, t.efficiency),
                     Dim::EnergyPerYear,
                 ),
                 (
                     "money saved",
-                    saving.abs() * t.hours * 3600.0 / t.efficiency * t.price,
+                    annual_energy(saving, t.hours, t.efficiency) * t.price,
                     Dim::MoneyPerYear,
                 ),
             ],
@@ -322,8 +322,6 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
         bare,
         verdicts,
         notes,
-        annual_energy,
-        annual_cost,
         r_in: job.construction.r_in,
         thicknesses: job
             .construction
@@ -462,9 +460,10 @@ mod tests {
         assert!(bare.q > r.solution.q);
         let touch = r.verdicts.iter().find(|v| v.id == "touch").unwrap();
         assert_eq!(touch.ok, r.solution.t_surface <= 333.15);
-        // Annual energy: q'·L·hours/efficiency.
-        let want = r.solution.q * 10.0 * 8000.0 * 3600.0 / 0.8;
-        assert!((r.annual_energy - want).abs() < 1e-6 * want);
+        // The saving card's energy: (q'_bare − q')·L·hours/efficiency.
+        let saved = (bare.q - r.solution.q) * 10.0 * 8000.0 * 3600.0 / 0.8;
+        let card = r.verdicts.iter().find(|v| v.id == "saving").unwrap();
+        assert!((card.figures[3].1 - saved).abs() < 1e-6 * saved);
     }
 
     #[test]

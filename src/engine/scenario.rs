@@ -577,6 +577,38 @@ impl Scenario {
         }
     }
 
+    /// The body in its stream at pressure `p`, as the correlations see it (surface as typed).
+    pub fn stream(&self, p: f64, fluid: Fluid) -> Body {
+        Body {
+            shape: self.shape,
+            axis: self.axis,
+            wind: if self.uses_wind() {
+                self.wind
+            } else {
+                Wind::Horizontal
+            },
+            d: self.diameter,
+            length: self.length,
+            speed: self.speed,
+            t_inf: self.fluid_temp,
+            t_s: self.surface_temp,
+            p,
+            fluid,
+        }
+    }
+
+    /// The field job: this scenario's process, construction and radiation around `stream`.
+    pub fn job(&self, stream: Body) -> Job {
+        Job {
+            stream,
+            process_temp: self.process_temp,
+            h_inside: (self.h_inside > 0.0).then_some(self.h_inside),
+            construction: self.construction(),
+            emissivity: self.emissivity,
+            t_surround: self.t_surround,
+        }
+    }
+
     /// Whether the wind direction matters (it does not for an upright prism: any wind crosses it).
     pub fn uses_wind(&self) -> bool {
         self.shape == Shape::Sphere || self.axis == Axis::Horizontal
@@ -782,22 +814,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         }
         _ => None,
     };
-    let stream = Body {
-        shape: s.shape,
-        axis: s.axis,
-        wind: if s.uses_wind() {
-            s.wind
-        } else {
-            Wind::Horizontal
-        },
-        d: s.diameter,
-        length: s.length,
-        speed: s.speed,
-        t_inf: s.fluid_temp,
-        t_s: s.surface_temp,
-        p,
-        fluid,
-    };
+    let stream = s.stream(p, fluid);
     let targets = Targets {
         touch_limit: s.touch_limit,
         dew_point,
@@ -834,14 +851,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
                     "the third data-sheet point needs its own mean temperature, apart from A and B",
             });
         }
-        let job = Job {
-            stream,
-            process_temp: s.process_temp,
-            h_inside: (s.h_inside > 0.0).then_some(s.h_inside),
-            construction: s.construction(),
-            emissivity: s.emissivity,
-            t_surround: s.t_surround,
-        };
+        let job = s.job(stream);
         let r = crate::engine::job::evaluate(&job, &targets, s.layer_count)?;
         let a = r
             .solution
@@ -903,7 +913,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
     let q_total = finite_result("heat flow", q_unit * run)?;
     let annual_energy = finite_result(
         "energy per year",
-        q_total.abs() * s.hours * 3600.0 / s.efficiency,
+        crate::engine::job::annual_energy(q_total, s.hours, s.efficiency),
     )?;
     let annual_cost = finite_result("cost per year", annual_energy * s.price)?;
     let mut verdicts = match &job_result {
@@ -1022,36 +1032,14 @@ fn grid_with(top: f64, steps: usize, also: f64) -> Vec<f64> {
 /// The heat flow (W, whole run or body), surface temperature and convective h of a scenario, without
 /// the working or the verdicts: what the sweeps need.
 fn quick(s: &Scenario, p: f64, fluid: Fluid, _t: &Targets) -> Result<(f64, f64, f64), EngineError> {
-    let stream = Body {
-        shape: s.shape,
-        axis: s.axis,
-        wind: if s.uses_wind() {
-            s.wind
-        } else {
-            Wind::Horizontal
-        },
-        d: s.diameter,
-        length: s.length,
-        speed: s.speed,
-        t_inf: s.fluid_temp,
-        t_s: s.surface_temp,
-        p,
-        fluid,
-    };
+    let stream = s.stream(p, fluid);
     let run = if s.shape == Shape::Sphere {
         1.0
     } else {
         s.length
     };
     if s.solved() {
-        let job = Job {
-            stream,
-            process_temp: s.process_temp,
-            h_inside: (s.h_inside > 0.0).then_some(s.h_inside),
-            construction: s.construction(),
-            emissivity: s.emissivity,
-            t_surround: s.t_surround,
-        };
+        let job = s.job(stream);
         let sol = crate::engine::heatloss::solve(&job)?;
         Ok((sol.q * run, sol.t_surface, sol.loss.h_conv))
     } else {

@@ -46,6 +46,29 @@ fn save(s: &Store) -> Result<(), String> {
     st.set_item(KEY, &store::to_json(s)).map_err(|_| "the browser's storage is full or refused the write: nothing was changed; export a file to keep this work".to_string())
 }
 
+/// Read the file just chosen in a file input as text, clear the input (so the same file can be
+/// chosen again), and hand the text to `then`.
+fn read_chosen_file(ev: leptos::ev::Event, then: impl FnOnce(String) + 'static) {
+    let Some(input) = ev
+        .target()
+        .and_then(|t| t.dyn_into::<web_sys::HtmlInputElement>().ok())
+    else {
+        return;
+    };
+    let Some(file) = input.files().and_then(|f| f.get(0)) else {
+        return;
+    };
+    input.set_value("");
+    wasm_bindgen_futures::spawn_local(async move {
+        let text = wasm_bindgen_futures::JsFuture::from(file.text())
+            .await
+            .ok()
+            .and_then(|v| v.as_string())
+            .unwrap_or_default();
+        then(text);
+    });
+}
+
 /// Offer `text` as a download named `name` of type `mime`.
 fn download(name: &str, mime: &str, text: &str) {
     let parts = js_sys::Array::of1(&wasm_bindgen::JsValue::from_str(text));
@@ -111,35 +134,18 @@ pub fn SavedPanel(
         );
     };
     let import = move |ev: leptos::ev::Event| {
-        let Some(input) = ev
-            .target()
-            .and_then(|t| t.dyn_into::<web_sys::HtmlInputElement>().ok())
-        else {
-            return;
-        };
-        let Some(file) = input.files().and_then(|f| f.get(0)) else {
-            return;
-        };
-        input.set_value("");
-        wasm_bindgen_futures::spawn_local(async move {
-            let text = wasm_bindgen_futures::JsFuture::from(file.text())
-                .await
-                .ok()
-                .and_then(|v| v.as_string())
-                .unwrap_or_default();
-            match store::from_json(&text) {
-                Ok(l) => {
-                    let plan = store::plan_import(&saved.get_untracked(), &l.store);
-                    let extra = if l.problems.is_empty() {
-                        String::new()
-                    } else {
-                        format!(" Not importable: {}.", l.problems.join("; "))
-                    };
-                    note.set(Some(format!("The file adds {} and replaces {} saved scenario(s). Confirm below to import.{extra}", plan.add.len(), plan.replace.len())));
-                    pending.set(Some((l.store, plan)));
-                }
-                Err(why) => note.set(Some(format!("Nothing imported: {why}."))),
+        read_chosen_file(ev, move |text| match store::from_json(&text) {
+            Ok(l) => {
+                let plan = store::plan_import(&saved.get_untracked(), &l.store);
+                let extra = if l.problems.is_empty() {
+                    String::new()
+                } else {
+                    format!(" Not importable: {}.", l.problems.join("; "))
+                };
+                note.set(Some(format!("The file adds {} and replaces {} saved scenario(s). Confirm below to import.{extra}", plan.add.len(), plan.replace.len())));
+                pending.set(Some((l.store, plan)));
             }
+            Err(why) => note.set(Some(format!("Nothing imported: {why}."))),
         });
     };
     let export_csv = move |_| {
@@ -147,22 +153,7 @@ pub fn SavedPanel(
         download("leeward-survey.csv", "text/csv", &text);
     };
     let import_csv = move |ev: leptos::ev::Event| {
-        let Some(input) = ev
-            .target()
-            .and_then(|t| t.dyn_into::<web_sys::HtmlInputElement>().ok())
-        else {
-            return;
-        };
-        let Some(file) = input.files().and_then(|f| f.get(0)) else {
-            return;
-        };
-        input.set_value("");
-        wasm_bindgen_futures::spawn_local(async move {
-            let text = wasm_bindgen_futures::JsFuture::from(file.text())
-                .await
-                .ok()
-                .and_then(|v| v.as_string())
-                .unwrap_or_default();
+        read_chosen_file(ev, move |text| {
             let (rows, errors) = survey::from_csv(&text);
             let mut next = saved.get_untracked();
             let n = rows.len();
