@@ -72,17 +72,9 @@ pub fn surface_loss_with(
     fixed: Option<usize>,
     free: Option<&Properties>,
 ) -> Result<SurfaceLoss, EngineError> {
-    let area = if stream.shape.is_sphere() {
-        std::f64::consts::PI * d * d
-    } else {
-        stream
-            .shape
-            .perimeter_over_d()
-            .unwrap_or(std::f64::consts::PI)
-            * d
-    };
+    let area = outer_area(stream, d);
     let h_rad = emissivity * SIGMA * (ts * ts + t_sur * t_sur) * (ts + t_sur);
-    let q_rad = area * emissivity * SIGMA * (ts.powi(4) - t_sur.powi(4));
+    let q_rad = radiated(area, ts, emissivity, t_sur);
     if (ts - stream.t_inf).abs() < 1e-9 {
         return Ok(SurfaceLoss {
             q_conv: 0.0,
@@ -108,6 +100,52 @@ pub fn surface_loss_with(
         h_rad,
         analysis: Some(a),
     })
+}
+
+/// Outer surface per metre (cylinder and prisms) or of the whole body (sphere), m or m².
+fn outer_area(stream: &Body, d: f64) -> f64 {
+    if stream.shape.is_sphere() {
+        std::f64::consts::PI * d * d
+    } else {
+        stream
+            .shape
+            .perimeter_over_d()
+            .unwrap_or(std::f64::consts::PI)
+            * d
+    }
+}
+
+fn radiated(area: f64, ts: f64, emissivity: f64, t_sur: f64) -> f64 {
+    area * emissivity * SIGMA * (ts.powi(4) - t_sur.powi(4))
+}
+
+/// The total of [`surface_loss_with`] alone, W/m or W, for the solver's inner loop: with a fixed
+/// correlation it takes [`body::h_given_free`] and skips the full analysis.
+fn surface_total(
+    stream: &Body,
+    d: f64,
+    ts: f64,
+    emissivity: f64,
+    t_sur: f64,
+    fixed: Option<usize>,
+    free: &Properties,
+) -> Result<f64, EngineError> {
+    let Some(i) = fixed.filter(|&i| i < stream.shape.forced().len()) else {
+        let l = surface_loss_with(stream, d, ts, emissivity, t_sur, None, Some(free))?;
+        return Ok(l.q_conv + l.q_rad);
+    };
+    let area = outer_area(stream, d);
+    let q_rad = radiated(area, ts, emissivity, t_sur);
+    if (ts - stream.t_inf).abs() < 1e-9 {
+        return Ok(q_rad);
+    }
+    let body = Body {
+        d,
+        t_s: ts,
+        ..*stream
+    };
+    let h = body::h_given_free(&body, i, free)?;
+    Ok(area * h * (ts - stream.t_inf) + q_rad)
 }
 
 /// The solved job.
@@ -198,8 +236,8 @@ fn solve_fixed(job: &Job, fixed: Option<usize>) -> Result<Solution, EngineError>
     let mut residual = |q: f64| -> f64 {
         let (t_bore, t) = surface_of(q);
         let ts = t.last().copied().unwrap_or(t_bore);
-        match surface_loss_with(s, outer_d, ts, job.emissivity, tsur, fixed, Some(&free)) {
-            Ok(l) => l.q_conv + l.q_rad - q,
+        match surface_total(s, outer_d, ts, job.emissivity, tsur, fixed, &free) {
+            Ok(total) => total - q,
             Err(e) => {
                 failure.get_or_insert(e);
                 f64::NAN

@@ -185,6 +185,15 @@ fn invert(k: &Conductivity, target: f64, lo: f64, hi: f64) -> f64 {
     if k.b == 0.0 && k.c == 0.0 {
         return 273.15 + target / k.a;
     }
+    if k.c == 0.0 {
+        // a·θ + (b/2)·θ² = target: the root on the branch where k = a + b·θ > 0, written
+        // 2·target/(a + √(a² + 2b·target)) so that it does not cancel when b is small.
+        let disc = k.a * k.a + 2.0 * k.b * target;
+        let th = 2.0 * target / (k.a + disc.max(0.0).sqrt());
+        if th.is_finite() {
+            return (273.15 + th).clamp(lo, hi);
+        }
+    }
     crate::engine::solve::bracketed(
         |t| k.integral(t) - target,
         lo,
@@ -243,6 +252,19 @@ mod tests {
         let q = Geometry::Sphere.shape_factor(0.5, 0.6) * want * (t1 - t2);
         let t = c.march(t1, q, 250.0, 500.0);
         assert!((t[0] - t2).abs() < 1e-8, "{}", t[0]);
+    }
+
+    /// The closed form for a linear k lands where the integral says, for rising and falling k
+    /// and for targets on both sides of 0 °C.
+    #[test]
+    fn linear_k_inverts_exactly() {
+        for b in [1.5e-4, -4e-5, 1e-9] {
+            let k = Conductivity { a: 0.04, b, c: 0.0 };
+            for t in [230.0, 273.15, 300.0, 455.5, 620.0] {
+                let back = invert(&k, k.integral(t), 200.0, 700.0);
+                assert!((back - t).abs() < 1e-9, "b {b}, {t} → {back}");
+            }
+        }
     }
 
     #[test]
