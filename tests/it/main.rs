@@ -6,3 +6,4 @@ mod correlation_reference;
 mod fixture;
 mod fluid_reference;
 mod property_laws;
+mod worked_examples;
