@@ -72,10 +72,9 @@ pub fn surface_loss_with(
     fixed: Option<usize>,
     free: Option<&Properties>,
 ) -> Result<SurfaceLoss, EngineError> {
-    let area = outer_area(stream, d);
+    let (area, q_rad, body) = at_surface(stream, d, ts, emissivity, t_sur);
     let h_rad = emissivity * SIGMA * (ts * ts + t_sur * t_sur) * (ts + t_sur);
-    let q_rad = radiated(area, ts, emissivity, t_sur);
-    if (ts - stream.t_inf).abs() < 1e-9 {
+    let Some(body) = body else {
         return Ok(SurfaceLoss {
             q_conv: 0.0,
             q_rad,
@@ -83,11 +82,6 @@ pub fn surface_loss_with(
             h_rad,
             analysis: None,
         });
-    }
-    let body = Body {
-        d,
-        t_s: ts,
-        ..*stream
     };
     let a = match free {
         Some(f) => body::analyse_given_free(&body, fixed, f.clone())?,
@@ -102,9 +96,16 @@ pub fn surface_loss_with(
     })
 }
 
-/// Outer surface per metre (cylinder and prisms) or of the whole body (sphere), m or m².
-fn outer_area(stream: &Body, d: f64) -> f64 {
-    if stream.shape.is_sphere() {
+/// The outer surface (per metre for cylinders and prisms, m; whole for a sphere, m²), the heat it
+/// radiates at `ts`, and the body at that surface temperature — none when Ts = T∞ (no convection).
+fn at_surface(
+    stream: &Body,
+    d: f64,
+    ts: f64,
+    emissivity: f64,
+    t_sur: f64,
+) -> (f64, f64, Option<Body>) {
+    let area = if stream.shape.is_sphere() {
         std::f64::consts::PI * d * d
     } else {
         stream
@@ -112,11 +113,14 @@ fn outer_area(stream: &Body, d: f64) -> f64 {
             .perimeter_over_d()
             .unwrap_or(std::f64::consts::PI)
             * d
-    }
-}
-
-fn radiated(area: f64, ts: f64, emissivity: f64, t_sur: f64) -> f64 {
-    area * emissivity * SIGMA * (ts.powi(4) - t_sur.powi(4))
+    };
+    let q_rad = area * emissivity * SIGMA * (ts.powi(4) - t_sur.powi(4));
+    let body = ((ts - stream.t_inf).abs() >= 1e-9).then_some(Body {
+        d,
+        t_s: ts,
+        ..*stream
+    });
+    (area, q_rad, body)
 }
 
 /// The total of [`surface_loss_with`] alone, W/m or W, for the solver's inner loop: with a fixed
@@ -134,15 +138,9 @@ fn surface_total(
         let l = surface_loss_with(stream, d, ts, emissivity, t_sur, None, Some(free))?;
         return Ok(l.q_conv + l.q_rad);
     };
-    let area = outer_area(stream, d);
-    let q_rad = radiated(area, ts, emissivity, t_sur);
-    if (ts - stream.t_inf).abs() < 1e-9 {
+    let (area, q_rad, body) = at_surface(stream, d, ts, emissivity, t_sur);
+    let Some(body) = body else {
         return Ok(q_rad);
-    }
-    let body = Body {
-        d,
-        t_s: ts,
-        ..*stream
     };
     let h = body::h_given_free(&body, i, free)?;
     Ok(area * h * (ts - stream.t_inf) + q_rad)
