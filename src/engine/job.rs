@@ -94,6 +94,8 @@ pub struct Targets {
     /// Mass flow through a pipe, kg/s (0: stagnant).
     pub mass_flow: f64,
     pub process_cp: f64,
+    /// The still fluid in a pipe is water (the freezing card); false for an antifreeze mixture.
+    pub process_water: bool,
     /// ρ·cp·(wall cross-section) per metre of the wall, J/(m·K), if known.
     pub wall_heat_capacity: Option<f64>,
 }
@@ -262,6 +264,7 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
         && tinf < 273.15
         && job.process_temp > 273.15
         && t.mass_flow == 0.0
+        && t.process_water
         && solution.q > 0.0
     {
         let r_in = job.construction.r_in;
@@ -448,6 +451,7 @@ mod tests {
             efficiency: 0.8,
             mass_flow: 0.0,
             process_cp: 4180.0,
+            process_water: true,
             wall_heat_capacity: None,
         }
     }

@@ -7,6 +7,7 @@
 use crate::engine::atmosphere;
 use crate::engine::body::{self, Analysis, Body};
 pub use crate::engine::body::{Axis, Shape, Wind};
+use crate::engine::correlations::internal::{liquid_pressure, pipe_flow, PipeFlow};
 use crate::engine::error::{finite_result, EngineError};
 use crate::engine::heatloss::{Job, SIGMA};
 use crate::engine::job::Targets;
@@ -81,6 +82,45 @@ pub enum HumidityInput {
     DewPoint,
 }
 
+/// Where the inside film coefficient of a pipe comes from: typed (0 for none), or computed from
+/// the flow of a process fluid through the bore.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum InsideFilm {
+    Typed,
+    Water,
+    EthyleneGlycol,
+    PropyleneGlycol,
+}
+
+impl InsideFilm {
+    pub const ALL: [InsideFilm; 4] = [
+        InsideFilm::Typed,
+        InsideFilm::Water,
+        InsideFilm::EthyleneGlycol,
+        InsideFilm::PropyleneGlycol,
+    ];
+    /// Stable id in links.
+    pub fn id(&self) -> &'static str {
+        match self {
+            InsideFilm::Typed => "typed",
+            InsideFilm::Water => "water",
+            InsideFilm::EthyleneGlycol => "eg",
+            InsideFilm::PropyleneGlycol => "pg",
+        }
+    }
+    pub fn label(&self) -> &'static str {
+        match self {
+            InsideFilm::Typed => "Type it (0: the bore is at the process temperature)",
+            InsideFilm::Water => "Work it out: water flowing through",
+            InsideFilm::EthyleneGlycol => "Work it out: ethylene glycol–water flowing through",
+            InsideFilm::PropyleneGlycol => "Work it out: propylene glycol–water flowing through",
+        }
+    }
+    pub fn from_id(id: &str) -> Option<Self> {
+        Self::ALL.into_iter().find(|m| m.id() == id)
+    }
+}
+
 /// Whether the surface temperature is typed or solved from the process inside.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
 pub enum SurfaceMode {
@@ -121,6 +161,10 @@ pub struct Scenario {
     pub process_temp: f64,
     /// Inside film coefficient, W/(m²·K); 0: not limiting.
     pub h_inside: f64,
+    /// Typed, or computed from the flow of a process fluid (pipes only).
+    pub inside: InsideFilm,
+    /// Glycol mass fraction of a glycol process fluid, 0–0.6.
+    pub process_glycol: f64,
     pub wall_thickness: f64,
     pub wall_k: f64,
     pub layer_t: [f64; 3],
@@ -177,6 +221,8 @@ pub const DEMO: Scenario = Scenario {
     layer_count: 1,
     process_temp: 343.15,
     h_inside: 0.0,
+    inside: InsideFilm::Typed,
+    process_glycol: 0.3,
     // 2-inch schedule 40 wall (ASME B36.10M, from memory).
     wall_thickness: 0.00391,
     wall_k: 45.0,
@@ -225,6 +271,7 @@ pub enum Field {
     UserBeta,
     ProcessTemp,
     HInside,
+    ProcessGlycol,
     WallThickness,
     WallK,
     Emissivity,
@@ -304,7 +351,7 @@ const fn f(
 }
 
 #[rustfmt::skip]
-pub const FIELDS: [FieldSpec; 44] = [
+pub const FIELDS: [FieldSpec; 45] = [
     f(Field::Diameter, Group::Body, "D", "Size D", Dim::Length, (0.0, true, 100.0), "as drawn: the width across the stream (bare outside diameter of a pipe)"),
     f(Field::Length, Group::Body, "L", "Length", Dim::RunLength, (0.0, true, 10_000.0), "along the axis; the height when upright"),
     f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air"),
@@ -322,6 +369,7 @@ pub const FIELDS: [FieldSpec; 44] = [
     f(Field::SurfaceTemp, Group::Surface, "Ts", "Surface temperature", Dim::Temperature, (0.0, true, 3000.0), "of the outer surface"),
     f(Field::ProcessTemp, Group::Surface, "Tp", "Process temperature", Dim::Temperature, (0.0, true, 3000.0), "of the fluid inside"),
     f(Field::HInside, Group::Surface, "hi", "Inside film coefficient", Dim::HeatTransferCoefficient, (0.0, false, 1e6), "0 if the bore sits at the process temperature"),
+    f(Field::ProcessGlycol, Group::Surface, "xgp", "Glycol in the process fluid", Dim::Fraction, (0.0, false, 0.6), "by mass, 0–60 %"),
     f(Field::WallThickness, Group::Surface, "tw", "Wall thickness", Dim::Length, (0.0, false, 1.0), "of the pipe or vessel"),
     f(Field::WallK, Group::Surface, "kw", "Wall conductivity", Dim::ThermalConductivity, (0.0, true, 1e4), "of your wall material"),
     f(Field::Emissivity, Group::Surface, "e", "Emissivity", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 painted or oxidised, 0.1 bright aluminium (common practice)"),
@@ -378,6 +426,7 @@ impl Scenario {
             Field::UserBeta => self.user_beta,
             Field::ProcessTemp => self.process_temp,
             Field::HInside => self.h_inside,
+            Field::ProcessGlycol => self.process_glycol,
             Field::WallThickness => self.wall_thickness,
             Field::WallK => self.wall_k,
             Field::Emissivity => self.emissivity,
@@ -427,6 +476,7 @@ impl Scenario {
             Field::UserBeta => &mut self.user_beta,
             Field::ProcessTemp => &mut self.process_temp,
             Field::HInside => &mut self.h_inside,
+            Field::ProcessGlycol => &mut self.process_glycol,
             Field::WallThickness => &mut self.wall_thickness,
             Field::WallK => &mut self.wall_k,
             Field::Emissivity => &mut self.emissivity,
@@ -478,7 +528,15 @@ impl Scenario {
                 self.fluid == K::User
             }
             Field::SurfaceTemp => !self.solved(),
-            Field::ProcessTemp | Field::HInside | Field::WallThickness => self.solved(),
+            Field::ProcessTemp | Field::WallThickness => self.solved(),
+            Field::HInside => self.solved() && !self.inside_computed(),
+            Field::ProcessGlycol => {
+                self.inside_computed()
+                    && matches!(
+                        self.inside,
+                        InsideFilm::EthyleneGlycol | InsideFilm::PropyleneGlycol
+                    )
+            }
             Field::WallK => self.solved() && self.wall == WallMaterial::User,
             Field::Layer1T
             | Field::Layer1Ka
@@ -493,7 +551,10 @@ impl Scenario {
             Field::Layer3T | Field::Layer3Ka | Field::Layer3Kb | Field::Layer3Kc => {
                 self.solved() && self.layer_count >= 3
             }
-            Field::MassFlow | Field::ProcessCp => self.solved() && self.shape == Shape::Cylinder,
+            Field::MassFlow => self.solved() && self.shape == Shape::Cylinder,
+            Field::ProcessCp => {
+                self.solved() && self.shape == Shape::Cylinder && !self.inside_computed()
+            }
             Field::CoolTarget => self.cools(),
             _ => true,
         }
@@ -511,6 +572,52 @@ impl Scenario {
     pub fn solved(&self) -> bool {
         self.surface_mode == SurfaceMode::Solved
             && matches!(self.shape, Shape::Cylinder | Shape::Sphere)
+    }
+
+    /// Whether the inside film is worked out from a process fluid's flow (solved pipes only).
+    pub fn inside_computed(&self) -> bool {
+        self.solved() && self.shape == Shape::Cylinder && self.inside != InsideFilm::Typed
+    }
+
+    /// The process fluid whose flow sets the inside film, when it is worked out.
+    pub fn process_fluid(&self) -> Option<Fluid> {
+        if !self.inside_computed() {
+            return None;
+        }
+        Some(match self.inside {
+            InsideFilm::EthyleneGlycol => Fluid::Glycol(Glycol::Ethylene, self.process_glycol),
+            InsideFilm::PropyleneGlycol => Fluid::Glycol(Glycol::Propylene, self.process_glycol),
+            _ => Fluid::Water,
+        })
+    }
+
+    /// The process fluid at the process temperature and, with a flow through the bore, the
+    /// inside film it makes. `Ok(None)` when the film is typed; the flow part is `None` for still
+    /// fluid (the bore then sits at the process temperature) or a bore the wall leaves no room for.
+    pub fn inside_flow(&self) -> Result<Option<(Properties, Option<PipeFlow>)>, EngineError> {
+        let Some(fluid) = self.process_fluid() else {
+            return Ok(None);
+        };
+        let t = self.process_temp;
+        let props = fluid
+            .at(t, liquid_pressure(&fluid, t))
+            .map_err(|e| match e {
+                EngineError::WrongPhase {
+                    t, boundary, why, ..
+                } => EngineError::WrongPhase {
+                    asked: PROCESS_FLUID,
+                    t,
+                    boundary,
+                    why,
+                },
+                other => other,
+            })?;
+        let d_in = self.diameter - 2.0 * self.wall_thickness;
+        if self.mass_flow <= 0.0 || d_in <= 0.0 {
+            return Ok(Some((props, None)));
+        }
+        let flow = pipe_flow(&fluid, t, self.mass_flow, d_in, self.length)?;
+        Ok(Some((props, Some(flow))))
     }
 
     /// Whether the lumped cooling of a solid round bar or sphere is offered (surface typed).
@@ -609,6 +716,16 @@ impl Scenario {
         }
     }
 
+    /// As [`Scenario::job`], with the inside film worked out from the flow (`Some`, see
+    /// [`Scenario::inside_flow`]) in place of the typed one.
+    pub fn job_with(&self, stream: Body, h_inside: Option<Option<f64>>) -> Job {
+        let mut j = self.job(stream);
+        if let Some(h) = h_inside {
+            j.h_inside = h;
+        }
+        j
+    }
+
     /// Whether the wind direction matters (it does not for an upright prism: any wind crosses it).
     pub fn uses_wind(&self) -> bool {
         self.shape == Shape::Sphere || self.axis == Axis::Horizontal
@@ -691,6 +808,9 @@ pub fn read_field(spec: &FieldSpec, text: &str, shown: &Unit) -> Result<f64, Str
 pub fn error_field(e: &EngineError) -> Option<Field> {
     match e {
         EngineError::NoTemperatureDifference { .. } => Some(Field::SurfaceTemp),
+        EngineError::WrongPhase { asked, .. } if *asked == PROCESS_FLUID => {
+            Some(Field::ProcessTemp)
+        }
         EngineError::WrongPhase { .. } => Some(Field::FluidTemp),
         EngineError::NonFiniteResult { quantity } if quantity.contains("opposing") => {
             Some(Field::Speed)
@@ -710,6 +830,10 @@ pub fn error_field(e: &EngineError) -> Option<Field> {
         _ => None,
     }
 }
+
+/// How a phase error of the process fluid names it, so the page puts it beside the process
+/// temperature.
+pub const PROCESS_FLUID: &str = "the process fluid";
 
 /// One step of the working, written so it can be checked by hand.
 #[derive(Debug, Clone, PartialEq)]
@@ -758,6 +882,8 @@ pub struct Outcome {
     pub outer_d: f64,
     /// The solved job (process inside, layers) when the surface temperature is worked out.
     pub job: Option<JobResult>,
+    /// The inside film worked out from the flow through the bore, when it is.
+    pub inside: Option<PipeFlow>,
     /// Verdict cards: touch, condensation, freezing, the run, insulated against bare.
     pub verdicts: Vec<Verdict>,
     /// Energy bought per year to make up the loss, J/yr, and its cost per year.
@@ -815,6 +941,8 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         _ => None,
     };
     let stream = s.stream(p, fluid);
+    let inside = s.inside_flow()?;
+    let h_inside = inside.as_ref().map(|(_, flow)| flow.as_ref().map(|f| f.h));
     let targets = Targets {
         touch_limit: s.touch_limit,
         dew_point,
@@ -823,7 +951,8 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         price: s.price,
         efficiency: s.efficiency,
         mass_flow: s.mass_flow,
-        process_cp: s.process_cp,
+        process_cp: inside.as_ref().map(|(pr, _)| pr.cp).unwrap_or(s.process_cp),
+        process_water: !matches!(s.process_fluid(), Some(Fluid::Glycol(..))),
         wall_heat_capacity: s.wall.properties().map(|(_, rho, cp)| {
             let r1 = s.diameter / 2.0;
             let r0 = r1 - s.wall_thickness;
@@ -851,8 +980,11 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
                     "the third data-sheet point needs its own mean temperature, apart from A and B",
             });
         }
-        let job = s.job(stream);
-        let r = crate::engine::job::evaluate(&job, &targets, s.layer_count)?;
+        let job = s.job_with(stream, h_inside);
+        let mut r = crate::engine::job::evaluate(&job, &targets, s.layer_count)?;
+        if let Some((_, None)) = &inside {
+            r.notes.push("No flow through the pipe: the inside film is not worked out, and the bore is taken at the process temperature (still fluid).".into());
+        }
         let a = r
             .solution
             .loss
@@ -875,7 +1007,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
                 .filter_map(|x| {
                     let mut t = *s;
                     t.layer_t[i] = x;
-                    let o = quick(&t, p, fluid, &targets).ok()?;
+                    let o = quick(&t, p, fluid, h_inside).ok()?;
                     (o.0.is_finite() && o.1.is_finite()).then_some((x, o.0, o.1))
                 })
                 .collect()
@@ -891,7 +1023,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
     .filter_map(|u| {
         let mut t = *s;
         t.speed = u;
-        let o = quick(&t, p, fluid, &targets).ok()?;
+        let o = quick(&t, p, fluid, h_inside).ok()?;
         (o.0.is_finite() && o.1.is_finite() && o.2.is_finite()).then_some((u, o.2, o.0, o.1))
     })
     .collect();
@@ -948,6 +1080,14 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         flags.extend(n.flags.iter().cloned());
     }
     flags.extend(a.flags.iter().cloned());
+    if let Some((props, flow)) = &inside {
+        let more = flow.as_ref().map(|f| &f.flags).unwrap_or(&props.flags);
+        for f in more {
+            if !flags.contains(f) {
+                flags.push(f.clone());
+            }
+        }
+    }
 
     let w = WorkingInputs {
         p,
@@ -960,6 +1100,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         h_rad,
         q_total,
         job: job_result.as_ref(),
+        inside: inside.as_ref(),
     };
     let working = if sweeps {
         working(s, &a, &w)
@@ -1005,6 +1146,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         surface_temp: ts,
         outer_d,
         job: job_result,
+        inside: inside.and_then(|(_, f)| f),
         verdicts,
         annual_energy,
         annual_cost,
@@ -1031,7 +1173,12 @@ fn grid_with(top: f64, steps: usize, also: f64) -> Vec<f64> {
 
 /// The heat flow (W, whole run or body), surface temperature and convective h of a scenario, without
 /// the working or the verdicts: what the sweeps need.
-fn quick(s: &Scenario, p: f64, fluid: Fluid, _t: &Targets) -> Result<(f64, f64, f64), EngineError> {
+fn quick(
+    s: &Scenario,
+    p: f64,
+    fluid: Fluid,
+    h_inside: Option<Option<f64>>,
+) -> Result<(f64, f64, f64), EngineError> {
     let stream = s.stream(p, fluid);
     let run = if s.shape == Shape::Sphere {
         1.0
@@ -1039,7 +1186,7 @@ fn quick(s: &Scenario, p: f64, fluid: Fluid, _t: &Targets) -> Result<(f64, f64, 
         s.length
     };
     if s.solved() {
-        let job = s.job(stream);
+        let job = s.job_with(stream, h_inside);
         let sol = crate::engine::heatloss::solve(&job)?;
         Ok((sol.q * run, sol.t_surface, sol.loss.h_conv))
     } else {
@@ -1065,6 +1212,7 @@ struct WorkingInputs<'a> {
     h_rad: f64,
     q_total: f64,
     job: Option<&'a JobResult>,
+    inside: Option<&'a (Properties, Option<PipeFlow>)>,
 }
 
 /// Touch and condensation verdicts for a typed surface temperature (no thickness to offer).
@@ -1105,6 +1253,54 @@ fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step> {
     let g = |v: f64| format_sig(v, 5);
     let rec = a.recommended();
     let mut out = Vec::new();
+    if let Some((pr, flow)) = w.inside {
+        let props = format!(
+            "{} at the process temperature {} K, {} Pa: ρ = {} kg/m³, μ = {} Pa·s, k = {} W/(m·K), cp = {} J/(kg·K), Pr = {}",
+            s.process_fluid().map(|f| f.name()).unwrap_or(""),
+            g(pr.t),
+            g(pr.p),
+            g(pr.rho),
+            g(pr.mu),
+            g(pr.k),
+            g(pr.cp),
+            g(pr.pr)
+        );
+        let text = match flow {
+            None => format!("{props}. No flow through the bore: the inside film is not worked out; the bore is at the process temperature."),
+            Some(f) => {
+                let formula = match f.regime {
+                    crate::engine::correlations::internal::PipeRegime::Laminar => format!(
+                        "Baehr & Stephan: Gz = (d/L)·Re·Pr = {}; Nu = [3.657/tanh(2.264·Gz^−⅓ + 1.7·Gz^−⅔) + 0.0499·Gz·tanh(1/Gz)] / tanh(2.432·Pr^⅙·Gz^−⅙)",
+                        g(f.d / f.length * f.re * f.pr)
+                    ),
+                    crate::engine::correlations::internal::PipeRegime::Transition { weight } => format!(
+                        "interpolated with weight γ = (Re − 2300)/(10⁴ − 2300) = {} between Baehr & Stephan at Re = 2300 and Gnielinski at Re = 10⁴",
+                        g(weight)
+                    ),
+                    crate::engine::correlations::internal::PipeRegime::Turbulent => format!(
+                        "Gnielinski with Filonenko's f = (1.82·log₁₀Re − 1.64)⁻² = {}: Nu = (f/8)(Re − 1000)Pr / (1 + 12.7·√(f/8)·(Pr^⅔ − 1)) · (1 + (d/L)^⅔)",
+                        g(crate::engine::correlations::internal::filonenko(f.re))
+                    ),
+                };
+                format!(
+                    "{props}. Bore d = {} m, run L = {} m, flow ṁ = {} kg/s, mean velocity {} m/s; Re = 4ṁ/(π·d·μ) = {}, {}. {} = {}; h_i = Nu·k/d = {} W/(m²·K). Properties at the bulk temperature, no wall-property correction.",
+                    g(f.d),
+                    g(f.length),
+                    g(f.mass_flow),
+                    g(f.velocity),
+                    g(f.re),
+                    f.regime.describe(),
+                    formula,
+                    g(f.nu),
+                    g(f.h)
+                )
+            }
+        };
+        out.push(Step {
+            title: "Inside film (flow through the bore)",
+            text,
+        });
+    }
     if let Some(j) = w.job {
         let sol = &j.solution;
         let temps = sol
@@ -1328,6 +1524,9 @@ pub fn to_fragment(s: &Scenario, system: System) -> String {
     }
     if s.solved() {
         out.push_str(&format!("&wm={}&nl={}", s.wall.id(), s.layer_count));
+        if s.shape == Shape::Cylinder {
+            out.push_str(&format!("&hf={}", s.inside.id()));
+        }
     } else if s.cools() {
         out.push_str(&format!("&wm={}", s.wall.id()));
     }
@@ -1440,6 +1639,11 @@ pub fn from_fragment(fragment: &str) -> Result<(Scenario, System), String> {
             "wm" => {
                 s.wall = WallMaterial::from_id(value)
                     .ok_or_else(|| "the link names an unknown wall material".to_string())?
+            }
+            "hf" => {
+                s.inside = InsideFilm::from_id(value).ok_or_else(|| {
+                    "the link names an unknown way to give the inside film".to_string()
+                })?
             }
             "nl" => {
                 s.layer_count = match value {
@@ -1665,6 +1869,100 @@ mod tests {
         s.layer_t = [0.01, 0.02, 0.03];
         let (back, _) = from_fragment(&to_fragment(&s, System::Si)).unwrap();
         assert_eq!(back, s);
+    }
+
+    /// A hot-water line with 2 kg/s through it: the worked-out inside film, its place in the
+    /// balance, the link, and the process fluid's own limits.
+    #[test]
+    fn inside_film_from_the_flow() {
+        let mut s = solved_demo();
+        s.mass_flow = 2.0;
+        s.process_temp = 353.15;
+        s.inside = InsideFilm::Water;
+        let o = evaluate(&s).unwrap();
+        let f = o.inside.as_ref().expect("a flow makes an inside film");
+        let d_in = s.diameter - 2.0 * s.wall_thickness;
+        let by_hand = crate::engine::correlations::internal::pipe_flow(
+            &Fluid::Water,
+            353.15,
+            2.0,
+            d_in,
+            s.length,
+        )
+        .unwrap();
+        assert_eq!(f.h, by_hand.h);
+        // The bore sits below the process temperature by q/(h_i·π·d).
+        let sol = &o.job.as_ref().unwrap().solution;
+        let drop = sol.q / (f.h * std::f64::consts::PI * d_in);
+        assert!((s.process_temp - sol.t_bore - drop).abs() < 1e-9 * drop.max(1e-9));
+        assert!(
+            drop > 0.0 && drop < 0.5,
+            "a turbulent water film barely matters: {drop}"
+        );
+        // The film is the only change: typed with the same value, the answer is the same.
+        let mut typed = s;
+        typed.inside = InsideFilm::Typed;
+        typed.h_inside = f.h;
+        let ot = evaluate(&typed).unwrap();
+        assert_eq!(ot.job.unwrap().solution.q, sol.q);
+        assert!(o.working.iter().any(|w| w.text.contains("Gnielinski")));
+        assert!(!s.uses(Field::HInside) && !s.uses(Field::ProcessCp) && s.uses(Field::MassFlow));
+        // The link carries the choice.
+        let (back, _) = from_fragment(&to_fragment(&s, System::Si)).unwrap();
+        assert_eq!(back, s);
+        // Still water: no film, a note, the freezing card as before.
+        let mut still = s;
+        still.mass_flow = 0.0;
+        still.fluid_temp = 258.15;
+        still.process_temp = 283.15;
+        let os = evaluate(&still).unwrap();
+        assert!(os.inside.is_none());
+        assert!(os
+            .job
+            .as_ref()
+            .unwrap()
+            .notes
+            .iter()
+            .any(|n| n.contains("No flow")));
+        assert!(os.verdicts.iter().any(|v| v.id == "freeze"));
+        // Still glycol does not freeze like water: no freezing card.
+        still.inside = InsideFilm::PropyleneGlycol;
+        still.process_glycol = 0.4;
+        let og = evaluate(&still).unwrap();
+        assert!(!og.verdicts.iter().any(|v| v.id == "freeze"));
+        assert!(still.uses(Field::ProcessGlycol));
+        // Water below its freezing point inside is an error beside the process temperature.
+        let mut frozen = s;
+        frozen.process_temp = 268.15;
+        let e = evaluate(&frozen).unwrap_err();
+        assert_eq!(error_field(&e), Some(Field::ProcessTemp), "{e}");
+        // A sphere (a tank) keeps the typed film whatever the choice says.
+        let mut tank = s;
+        tank.shape = Shape::Sphere;
+        assert!(!tank.inside_computed() && tank.uses(Field::HInside));
+    }
+
+    /// The outlet of a flowing line uses the process fluid's own cp when the film is worked out.
+    #[test]
+    fn run_temperature_drop_uses_the_fluids_cp() {
+        let mut s = solved_demo();
+        s.mass_flow = 0.05;
+        s.inside = InsideFilm::EthyleneGlycol;
+        s.process_glycol = 0.3;
+        s.process_temp = 343.15;
+        let o = evaluate(&s).unwrap();
+        let flow = o.verdicts.iter().find(|v| v.id == "flow").unwrap();
+        let drop = flow.figures.iter().find(|f| f.0 == "drop").unwrap().1;
+        let cp = o.inside.as_ref().unwrap().props.cp;
+        assert!(cp > 3400.0 && cp < 3900.0, "{cp}");
+        // Against the same line with water's typed cp: a lower cp drops more.
+        let mut typed = s;
+        typed.inside = InsideFilm::Typed;
+        typed.h_inside = o.inside.as_ref().unwrap().h;
+        typed.process_cp = 4180.0;
+        let ot = evaluate(&typed).unwrap();
+        let flow_t = ot.verdicts.iter().find(|v| v.id == "flow").unwrap();
+        assert!(drop > flow_t.figures.iter().find(|f| f.0 == "drop").unwrap().1);
     }
 
     #[test]

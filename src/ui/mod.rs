@@ -8,8 +8,8 @@ mod saved;
 mod shapes;
 
 use crate::engine::scenario::{
-    self, Axis, Field, FieldSpec, FluidKind, Group, HumidityInput, Outcome, PressureInput,
-    Scenario, Shape, SurfaceMode, WallMaterial, Wind, FIELDS,
+    self, Axis, Field, FieldSpec, FluidKind, Group, HumidityInput, InsideFilm, Outcome,
+    PressureInput, Scenario, Shape, SurfaceMode, WallMaterial, Wind, FIELDS,
 };
 use crate::engine::units::{self, format_sig, Dim, System, UnitChoice};
 
@@ -355,6 +355,23 @@ pub fn App() -> impl IntoView {
             </div>
         }
     };
+    // Where the inside film comes from: typed, or worked out from a process fluid's flow.
+    let inside_select = move || {
+        let opts = InsideFilm::ALL
+            .into_iter()
+            .map(|m| view! { <option value=m.id() prop:selected=move || scenario.with(|s| s.inside == m)>{m.label()}</option> })
+            .collect_view();
+        view! {
+            <div class="field" class:hidden=move || !scenario.with(|s| s.solved() && s.shape == Shape::Cylinder)>
+                <label for="in-inside">"Inside film"<small>"worked out from the flow set under 4 · The job"</small></label>
+                <select id="in-inside" class="wide" data-choice="inside" on:change=move |ev| {
+                    if let Some(m) = InsideFilm::from_id(&event_target_value(&ev)) {
+                        scenario.update(|s| s.inside = m);
+                    }
+                }>{opts}</select>
+            </div>
+        }
+    };
     // Nominal pipe sizes set D (and the text shown in the D field).
     let size_picker = move || {
         let opts = crate::engine::job::NOMINAL_SIZES
@@ -578,6 +595,7 @@ pub fn App() -> impl IntoView {
                     <h2 id="surface-title">"3 · Surface"</h2>
                     {surface_toggle}
                     {wall_select}
+                    {inside_select}
                     {fields_of(Group::Surface)}
                     {emissivity_picker}
                     {layer_picker}
@@ -611,6 +629,8 @@ pub fn App() -> impl IntoView {
                     <div><dt>"Film temperature"</dt><dd>{out("film_temperature", |o| Some(o.film_temp), Some(Dim::Temperature))}</dd></div>
                     <div><dt>"Pressure used"</dt><dd>{out("pressure", |o| Some(o.pressure), Some(Dim::Pressure))}</dd></div>
                     <div class:hidden=move || shown.with(|s| s.outcome.as_ref().is_none_or(|o| o.dew_point.is_none()))><dt>"Dew point of the stream"</dt><dd>{out("dew_point", |o| o.dew_point, Some(Dim::Temperature))}</dd></div>
+                    <div class:hidden=move || shown.with(|s| s.outcome.as_ref().is_none_or(|o| o.inside.is_none()))><dt>"Inside film h_i (worked out)"</dt><dd>{out("h_inside", |o| o.inside.as_ref().map(|f| f.h), Some(Dim::HeatTransferCoefficient))}{flag_mark}</dd></div>
+                    <div class:hidden=move || shown.with(|s| s.outcome.as_ref().is_none_or(|o| o.inside.is_none()))><dt>"Reynolds number in the bore"</dt><dd>{out("re_inside", |o| o.inside.as_ref().map(|f| f.re), None)}</dd></div>
                 </dl>
                 <p class="spread" data-spread>{move || shown.with(|s| s.outcome.as_ref().map(|o| spread_text(o, &choice.get())))}</p>
                 <p class="method">{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Recommended: {} ({}). {} {}", o.method, o.analysis.mode(), o.regime, o.analysis.notes.join(" "))))}</p>

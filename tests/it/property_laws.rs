@@ -261,8 +261,8 @@ fn fuzz_cases() -> u32 {
 /// limits on both sides (zero, negatives, huge and tiny values).
 fn any_scenario() -> impl Strategy<Value = leeward::engine::scenario::Scenario> {
     use leeward::engine::scenario::{
-        Axis, FluidKind, HumidityInput, PressureInput, Shape, SurfaceMode, WallMaterial, Wind,
-        DEMO, FIELDS,
+        Axis, FluidKind, HumidityInput, InsideFilm, PressureInput, Shape, SurfaceMode,
+        WallMaterial, Wind, DEMO, FIELDS,
     };
     use leeward::engine::units::Dim;
     // Per input: 0–2 keep the demo's value, 3–5 scale it by 0.2–5 (temperatures: 150–1500 K),
@@ -293,8 +293,9 @@ fn any_scenario() -> impl Strategy<Value = leeward::engine::scenario::Scenario> 
         0..4usize,
         0..5usize,
         any::<bool>(),
+        0..4usize,
     )
-        .prop_map(|(vals, shape, fluid, bits, layers, wall, wild_ok)| {
+        .prop_map(|(vals, shape, fluid, bits, layers, wall, wild_ok, inside)| {
             let mut s = DEMO;
             s.shape = Shape::ALL[shape];
             s.fluid = FluidKind::ALL[fluid];
@@ -321,6 +322,7 @@ fn any_scenario() -> impl Strategy<Value = leeward::engine::scenario::Scenario> 
             };
             s.layer_count = layers;
             s.wall = WallMaterial::ALL[wall];
+            s.inside = InsideFilm::ALL[inside];
             for (spec, (how, factor, wild)) in FIELDS.iter().zip(vals) {
                 let demo = s.get(spec.field);
                 match how {

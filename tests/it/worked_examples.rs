@@ -121,6 +121,7 @@ fn time_for_still_water_to_reach_freezing() {
         efficiency: 1.0,
         mass_flow: 0.0,
         process_cp: 4180.0,
+        process_water: true,
         wall_heat_capacity: None,
     };
     let r = job::evaluate(&job, &targets, 1).unwrap();

@@ -8,6 +8,7 @@
 
 pub mod bars;
 pub mod cylinder;
+pub mod internal;
 pub mod local;
 pub mod mixed;
 pub mod natural;

@@ -1,0 +1,264 @@
+//! Forced convection inside a round pipe: the mean inside film coefficient of a process fluid
+//! flowing through the bore, for the field job's energy balance.
+//!
+//! Mean Nusselt number over a run of length L on the bore diameter d, properties at the bulk
+//! (process) temperature:
+//! - laminar, Re ≤ 2300: Baehr & Stephan's mean Nu for a uniform wall temperature with the
+//!   velocity and temperature profiles developing together;
+//! - turbulent, Re ≥ 10⁴: Gnielinski (1976) with Filonenko's smooth-tube friction factor and
+//!   Gnielinski's run-length factor 1 + (d/L)^⅔;
+//! - between them, the linear interpolation in Re of the VDI Heat Atlas (Gnielinski 1995) from
+//!   the laminar value at 2300 to the turbulent one at 10⁴.
+//!
+//! No wall-property correction ((Pr/Pr_w)^0.11 for liquids) is applied: the bore temperature is
+//! what the balance solves for, and the correction is a few per cent for the temperature
+//! differences of a lagged line.
+
+use crate::engine::error::{finite_result, EngineError};
+use crate::engine::props::{Fluid, Properties};
+use crate::engine::validity::{Flag, Range};
+
+/// Highest Re of the laminar form; lowest of the transition.
+pub const LAMINAR_TOP: f64 = 2300.0;
+/// Lowest Re at which the turbulent form is used alone.
+pub const TURBULENT_FROM: f64 = 1e4;
+
+pub const GNIELINSKI: &str = "Gnielinski (1976), inside a pipe";
+const GNIELINSKI_SRC: &str =
+    "Rohsenow, Hartnett & Cho, Handbook of Heat Transfer (1998), as quoted by ht 1.2.0";
+pub const GNIELINSKI_RE: Range = Range {
+    quantity: "Re",
+    lo: 2300.0,
+    hi: 5e6,
+    unit: "",
+    source: GNIELINSKI_SRC,
+};
+pub const GNIELINSKI_PR: Range = Range {
+    quantity: "Pr",
+    lo: 0.5,
+    hi: 2000.0,
+    unit: "",
+    source: GNIELINSKI_SRC,
+};
+
+pub const BAEHR_STEPHAN: &str = "Baehr & Stephan, laminar entry";
+/// The combined-entry form is given for Pr of about 0.1 and above (Incropera & DeWitt, the
+/// laminar combined-entry section; from memory).
+pub const BAEHR_STEPHAN_PR: Range = Range {
+    quantity: "Pr",
+    lo: 0.1,
+    hi: f64::INFINITY,
+    unit: "",
+    source: "Incropera & DeWitt, combined entry, from memory",
+};
+
+/// The flow regime in the bore.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum PipeRegime {
+    Laminar,
+    /// Between Re 2300 and 10⁴: `weight` of the turbulent value, (Re − 2300)/(10⁴ − 2300).
+    Transition {
+        weight: f64,
+    },
+    Turbulent,
+}
+
+impl PipeRegime {
+    pub fn describe(&self) -> &'static str {
+        match self {
+            PipeRegime::Laminar => "laminar (Re ≤ 2300)",
+            PipeRegime::Transition { .. } => {
+                "transitional (2300 < Re < 10⁴): interpolated, VDI Heat Atlas (Gnielinski 1995)"
+            }
+            PipeRegime::Turbulent => "turbulent (Re ≥ 10⁴)",
+        }
+    }
+}
+
+/// Darcy friction factor of a smooth tube, Filonenko (1954): f = (1.82·log₁₀Re − 1.64)⁻².
+pub fn filonenko(re: f64) -> f64 {
+    (1.82 * re.log10() - 1.64).powi(-2)
+}
+
+/// Gnielinski's mean Nu for turbulent flow over a run with `d_over_l` = d/L:
+/// Nu = (f/8)(Re − 1000)Pr / (1 + 12.7·√(f/8)·(Pr^⅔ − 1)) · (1 + (d/L)^⅔).
+pub fn gnielinski(re: f64, pr: f64, d_over_l: f64) -> f64 {
+    let f8 = filonenko(re) / 8.0;
+    f8 * (re - 1000.0) * pr / (1.0 + 12.7 * f8.sqrt() * (pr.cbrt().powi(2) - 1.0))
+        * (1.0 + d_over_l.cbrt().powi(2))
+}
+
+/// Baehr & Stephan's mean Nu, uniform wall temperature, simultaneously developing flow, with the
+/// Graetz number Gz = (d/L)·Re·Pr:
+/// Nu = [3.657 / tanh(2.264·Gz^−⅓ + 1.7·Gz^−⅔) + 0.0499·Gz·tanh(1/Gz)] / tanh(2.432·Pr^⅙·Gz^−⅙).
+pub fn baehr_stephan(re: f64, pr: f64, d_over_l: f64) -> f64 {
+    let gz = d_over_l * re * pr;
+    let c = gz.cbrt();
+    (3.657 / (2.264 / c + 1.7 / (c * c)).tanh() + 0.0499 * gz * (1.0 / gz).tanh())
+        / (2.432 * pr.powf(1.0 / 6.0) / gz.powf(1.0 / 6.0)).tanh()
+}
+
+/// Mean Nu in the bore and the regime it was taken in.
+pub fn nusselt(re: f64, pr: f64, d_over_l: f64) -> (f64, PipeRegime) {
+    if re <= LAMINAR_TOP {
+        (baehr_stephan(re, pr, d_over_l), PipeRegime::Laminar)
+    } else if re >= TURBULENT_FROM {
+        (gnielinski(re, pr, d_over_l), PipeRegime::Turbulent)
+    } else {
+        let w = (re - LAMINAR_TOP) / (TURBULENT_FROM - LAMINAR_TOP);
+        let lam = baehr_stephan(LAMINAR_TOP, pr, d_over_l);
+        let turb = gnielinski(TURBULENT_FROM, pr, d_over_l);
+        (
+            (1.0 - w) * lam + w * turb,
+            PipeRegime::Transition { weight: w },
+        )
+    }
+}
+
+/// The inside film of a flow through the bore.
+#[derive(Debug, Clone, PartialEq)]
+pub struct PipeFlow {
+    /// The process fluid at the bulk temperature.
+    pub props: Properties,
+    /// Bore diameter and run length, m; mass flow, kg/s; mean velocity, m/s.
+    pub d: f64,
+    pub length: f64,
+    pub mass_flow: f64,
+    pub velocity: f64,
+    pub re: f64,
+    pub pr: f64,
+    pub nu: f64,
+    /// Mean inside film coefficient, W/(m²·K).
+    pub h: f64,
+    pub regime: PipeRegime,
+    pub method: &'static str,
+    pub flags: Vec<Flag>,
+}
+
+/// The pressure a process liquid is taken at: 1 atm, or just above its saturation pressure when
+/// it is hotter than its normal boiling point (a line under pressure keeps it liquid), Pa.
+pub fn liquid_pressure(fluid: &Fluid, t: f64) -> f64 {
+    match fluid {
+        Fluid::Water if t > 373.124 && t < 647.096 => {
+            (crate::engine::props::water::psat_mpa(t) * 1e6 * 1.001).max(101_325.0)
+        }
+        _ => 101_325.0,
+    }
+}
+
+/// The mean inside film coefficient of `mass_flow` (kg/s) of `fluid` at bulk temperature `t` (K)
+/// through a bore of diameter `d` (m) over a run of `length` (m).
+pub fn pipe_flow(
+    fluid: &Fluid,
+    t: f64,
+    mass_flow: f64,
+    d: f64,
+    length: f64,
+) -> Result<PipeFlow, EngineError> {
+    let props = fluid.at(t, liquid_pressure(fluid, t))?;
+    let area = std::f64::consts::PI * d * d / 4.0;
+    let velocity = mass_flow / (props.rho * area);
+    let re = 4.0 * mass_flow / (std::f64::consts::PI * d * props.mu);
+    let pr = props.pr;
+    let d_over_l = d / length;
+    let (nu, regime) = nusselt(re, pr, d_over_l);
+    let mut flags: Vec<Flag> = props.flags.clone();
+    let method = match regime {
+        PipeRegime::Laminar => {
+            flags.extend(BAEHR_STEPHAN_PR.check(BAEHR_STEPHAN, pr, false));
+            BAEHR_STEPHAN
+        }
+        PipeRegime::Transition { .. } => {
+            flags.extend(BAEHR_STEPHAN_PR.check(BAEHR_STEPHAN, pr, false));
+            flags.extend(GNIELINSKI_PR.check(GNIELINSKI, pr, false));
+            "Baehr & Stephan to Gnielinski, interpolated (VDI Heat Atlas)"
+        }
+        PipeRegime::Turbulent => {
+            flags.extend(GNIELINSKI_RE.check(GNIELINSKI, re, false));
+            flags.extend(GNIELINSKI_PR.check(GNIELINSKI, pr, false));
+            GNIELINSKI
+        }
+    };
+    let h = finite_result("inside film coefficient", nu * props.k / d)?;
+    Ok(PipeFlow {
+        props,
+        d,
+        length,
+        mass_flow,
+        velocity,
+        re,
+        pr,
+        nu,
+        h,
+        regime,
+        method,
+        flags,
+    })
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::engine::props::Glycol;
+
+    #[test]
+    fn continuous_at_both_ends_of_the_transition() {
+        for pr in [0.7, 5.0, 50.0] {
+            for dl in [1e-3, 0.01, 0.1] {
+                let (lam, _) = nusselt(LAMINAR_TOP, pr, dl);
+                let (just_above, r) = nusselt(LAMINAR_TOP * (1.0 + 1e-12), pr, dl);
+                assert!(matches!(r, PipeRegime::Transition { .. }));
+                assert!((just_above / lam - 1.0).abs() < 1e-9, "{pr} {dl}");
+                let (turb, _) = nusselt(TURBULENT_FROM, pr, dl);
+                let (just_below, _) = nusselt(TURBULENT_FROM * (1.0 - 1e-12), pr, dl);
+                assert!((just_below / turb - 1.0).abs() < 1e-9, "{pr} {dl}");
+            }
+        }
+    }
+
+    #[test]
+    fn long_laminar_run_tends_to_the_developed_value() {
+        // Gz → 0: the mean Nu tends to 3.657, the developed value for a uniform wall temperature.
+        let nu = baehr_stephan(100.0, 5.0, 1e-9);
+        assert!((nu - 3.657).abs() < 1e-3, "{nu}");
+        // A short run has the higher mean (the thin entry boundary layer).
+        assert!(baehr_stephan(1000.0, 5.0, 0.1) > 2.0 * nu);
+    }
+
+    #[test]
+    fn turbulent_grows_with_re_and_pr_and_the_entry_adds() {
+        let base = gnielinski(1e5, 5.0, 0.0);
+        assert!(gnielinski(2e5, 5.0, 0.0) > base);
+        assert!(gnielinski(1e5, 10.0, 0.0) > base);
+        let short = gnielinski(1e5, 5.0, 0.05);
+        assert!((short / base - (1.0 + 0.05f64.powf(2.0 / 3.0))).abs() < 1e-12);
+    }
+
+    #[test]
+    fn water_in_a_pipe() {
+        // 1 kg/s of water at 60 °C through a 52.5 mm bore over 20 m: turbulent, Re near 4×10⁴.
+        let f = pipe_flow(&Fluid::Water, 333.15, 1.0, 0.0525, 20.0).unwrap();
+        assert_eq!(f.regime, PipeRegime::Turbulent);
+        assert!(f.re > 3e4 && f.re < 6e4, "{}", f.re);
+        assert!(f.flags.is_empty(), "{:?}", f.flags);
+        assert!(f.h > 2000.0 && f.h < 10_000.0, "{}", f.h);
+        // Water above its normal boiling point is taken at its saturation pressure and stays liquid.
+        let hot = pipe_flow(&Fluid::Water, 423.15, 1.0, 0.0525, 20.0).unwrap();
+        assert!(
+            hot.props.p > 4.7e5 && hot.props.p < 4.8e5,
+            "{}",
+            hot.props.p
+        );
+    }
+
+    #[test]
+    fn cold_glycol_is_laminar_and_frozen_glycol_is_refused() {
+        let g = Fluid::Glycol(Glycol::Propylene, 0.4);
+        let f = pipe_flow(&g, 263.15, 0.05, 0.0525, 20.0).unwrap();
+        assert_eq!(f.regime, PipeRegime::Laminar);
+        assert!(pipe_flow(&g, 240.0, 0.05, 0.0525, 20.0).is_err());
+        // Out of Gnielinski's Re range: shown, and flagged.
+        let fast = pipe_flow(&Fluid::Water, 353.15, 500.0, 0.0525, 20.0).unwrap();
+        assert!(fast.flags.iter().any(|x| x.range.quantity == "Re"));
+    }
+}
