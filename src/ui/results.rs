@@ -497,7 +497,7 @@ fn cross_section(j: &crate::engine::scenario::JobResult, c: &UnitChoice) -> impl
         })
         .collect_view();
     view! {
-        <svg viewBox="0 0 340 180" class="section" role="img" aria-label="Cross-section of the wall and insulation with the temperature at each face">
+        <svg viewBox="0 0 420 180" class="section" role="img" aria-label="Cross-section of the wall and insulation with the temperature at each face">
             {rings}
             <circle cx="90" cy="90" r=px[0] class="ring bore"/>
             {temps}
