@@ -173,12 +173,34 @@ pub struct Estimate {
     pub h: f64,
     /// k at the reference temperature, W/(m·K).
     pub k: f64,
-    /// The band and constants used (banded tables) or the parts of a composite form.
-    pub detail: Option<String>,
+    /// The band and constants used (banded tables) or the parts of a composite form, written
+    /// only when shown: see [`Estimate::detail`].
+    detail_of: DetailOf,
     pub flags: Vec<Flag>,
 }
 
+/// A correlation's detail writer (text for the page, so not made in a solver's loop).
+#[derive(Clone, Copy)]
+struct DetailOf(fn(&Groups) -> Option<String>);
+
+impl PartialEq for DetailOf {
+    fn eq(&self, other: &Self) -> bool {
+        std::ptr::fn_addr_eq(self.0, other.0)
+    }
+}
+
+impl std::fmt::Debug for DetailOf {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        f.write_str("DetailOf")
+    }
+}
+
 impl Estimate {
+    /// The band and constants used (banded tables) or the parts of a composite form.
+    pub fn detail(&self) -> Option<String> {
+        (self.detail_of.0)(&self.groups)
+    }
+
     /// Inside every published range (near-edge notes allowed).
     pub fn valid(&self) -> bool {
         self.flags.iter().all(|f| f.kind != FlagKind::Outside)
@@ -284,7 +306,7 @@ pub fn analyse_given_free(
             nu_still: (c.nu_still)(&groups),
             h: finite_result("heat-transfer coefficient", value * at.k / b.d)?,
             k: at.k,
-            detail: (c.detail)(&groups),
+            detail_of: DetailOf(c.detail),
             flags: nu.flags,
         });
     }
@@ -405,16 +427,27 @@ fn blended(
 /// free-stream properties given: the arithmetic of [`analyse_given_free`] without the other
 /// correlations, their band descriptions or the flags. A solver's inner loop calls this; the
 /// full analysis is made once at the solution (a test holds the two equal).
+///
+/// In air the surface's properties are evaluated only for a correlation that reads them (air is
+/// defined at every surface temperature the solver tries, so nothing is refused by skipping
+/// them); in other fluids always, as the full analysis does, so that a surface state the fluid
+/// cannot be in (water boiling at the wall) is refused on both paths alike.
 pub fn h_given_free(b: &Body, fixed: usize, free: &Properties) -> Result<f64, EngineError> {
     let film = b.fluid.at(0.5 * (b.t_s + b.t_inf), b.p)?;
-    let surface = b.fluid.at(b.t_s, b.p)?;
     let list = b.shape.forced();
     let c = &list[fixed.min(list.len() - 1)];
     let at = match c.reference {
         Reference::Film => &film,
         Reference::FreeStream => free,
     };
-    let groups = groups_at(b, at, &surface, b.fluid.is_gas());
+    let air = matches!(b.fluid, Fluid::DryAir | Fluid::HumidAir(_));
+    let groups = if c.surface || !air {
+        let surface = b.fluid.at(b.t_s, b.p)?;
+        groups_at(b, at, &surface, b.fluid.is_gas())
+    } else {
+        // Not read by this correlation: Pr_s and μs stand at the reference values.
+        groups_at(b, at, at, b.fluid.is_gas())
+    };
     let nu = finite_result("Nusselt number", (c.nu)(&groups).value)?;
     let h = finite_result("heat-transfer coefficient", nu * at.k / b.d)?;
     let mut notes = Vec::new();
@@ -430,6 +463,27 @@ pub fn h_given_free(b: &Body, fixed: usize, free: &Properties) -> Result<f64, En
         exponent,
     )?
     .0)
+}
+
+/// The index of the forced correlation [`analyse_given_free`] would recommend for this body:
+/// the first in the shape's order inside all its ranges (0 when none is). The same rule on the
+/// same numbers, without the estimates' text or the natural-convection part.
+pub fn recommended_given_free(b: &Body, free: &Properties) -> Result<usize, EngineError> {
+    let film = b.fluid.at(0.5 * (b.t_s + b.t_inf), b.p)?;
+    let surface = b.fluid.at(b.t_s, b.p)?;
+    let gas = b.fluid.is_gas();
+    for (i, c) in b.shape.forced().iter().enumerate() {
+        let at = match c.reference {
+            Reference::Film => &film,
+            Reference::FreeStream => free,
+        };
+        let nu = (c.nu)(&groups_at(b, at, &surface, gas));
+        finite_result("Nusselt number", nu.value)?;
+        if nu.flags.iter().all(|f| f.kind != FlagKind::Outside) {
+            return Ok(i);
+        }
+    }
+    Ok(0)
 }
 
 fn natural_estimate(

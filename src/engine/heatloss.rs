@@ -123,9 +123,9 @@ fn at_surface(
     (area, q_rad, body)
 }
 
-/// The total of [`surface_loss_with`] alone, W/m or W, for the solver's inner loop: with a fixed
-/// correlation it takes [`body::h_given_free`] and skips the full analysis.
-fn surface_total(
+/// As [`surface_loss_with`] without the full analysis (`analysis` is `None`): with a fixed
+/// correlation it takes [`body::h_given_free`], for the solver's inner loop and the lean solve.
+fn surface_lean(
     stream: &Body,
     d: f64,
     ts: f64,
@@ -133,17 +133,25 @@ fn surface_total(
     t_sur: f64,
     fixed: Option<usize>,
     free: &Properties,
-) -> Result<f64, EngineError> {
+) -> Result<SurfaceLoss, EngineError> {
     let Some(i) = fixed.filter(|&i| i < stream.shape.forced().len()) else {
-        let l = surface_loss_with(stream, d, ts, emissivity, t_sur, None, Some(free))?;
-        return Ok(l.q_conv + l.q_rad);
+        let mut l = surface_loss_with(stream, d, ts, emissivity, t_sur, None, Some(free))?;
+        l.analysis = None;
+        return Ok(l);
     };
     let (area, q_rad, body) = at_surface(stream, d, ts, emissivity, t_sur);
-    let Some(body) = body else {
-        return Ok(q_rad);
+    let h_rad = emissivity * SIGMA * (ts * ts + t_sur * t_sur) * (ts + t_sur);
+    let h = match body {
+        Some(body) => body::h_given_free(&body, i, free)?,
+        None => 0.0,
     };
-    let h = body::h_given_free(&body, i, free)?;
-    Ok(area * h * (ts - stream.t_inf) + q_rad)
+    Ok(SurfaceLoss {
+        q_conv: area * h * (ts - stream.t_inf),
+        q_rad,
+        h_conv: h,
+        h_rad,
+        analysis: None,
+    })
 }
 
 /// The solved job.
@@ -151,6 +159,7 @@ fn surface_total(
 pub struct Solution {
     /// Heat flow from the process to the surroundings, W/m or W.
     pub q: f64,
+    /// What leaves the surface; `loss.analysis` is `None` from [`solve_lean`].
     pub loss: SurfaceLoss,
     pub t_surface: f64,
     /// Temperature of the bore face (after the inside film).
@@ -175,36 +184,95 @@ pub struct Solution {
 /// if the solution recommends another, the balance is solved again with that one. Should it flip
 /// back, the second choice is kept and `switched` says so.
 pub fn solve(job: &Job) -> Result<Solution, EngineError> {
-    let s = &job.stream;
-    let start = if (job.process_temp - s.t_inf).abs() < 1e-9 {
-        None
-    } else {
-        Some(
-            body::analyse(&Body {
-                d: 2.0 * job.construction.r_out(),
-                t_s: job.process_temp,
-                ..*s
-            })?
-            .recommended,
-        )
-    };
-    let first = solve_fixed(job, start)?;
-    // The correlation the solution itself would recommend: the first in the shape's order inside
-    // its ranges, read off the analysis the solve already made there.
-    let free_at = |sol: &Solution| -> Option<usize> {
-        let a = sol.loss.analysis.as_ref()?;
-        Some(a.forced.iter().position(body::Estimate::valid).unwrap_or(0))
-    };
-    let at_first = free_at(&first);
-    if at_first.is_none() || at_first == start {
-        return Ok(first);
-    }
-    let mut second = solve_fixed(job, at_first)?;
-    second.switched = free_at(&second) != at_first;
-    Ok(second)
+    solve_as(job, true)
 }
 
-fn solve_fixed(job: &Job, fixed: Option<usize>) -> Result<Solution, EngineError> {
+/// As [`solve`], without the full convection analysis at the solution (`loss.analysis` is
+/// `None`; every number is the same): for the thickness search and the plots, which need the heat
+/// flow and the temperatures only.
+pub fn solve_lean(job: &Job) -> Result<Solution, EngineError> {
+    solve_as(job, false)
+}
+
+fn solve_as(job: &Job, full: bool) -> Result<Solution, EngineError> {
+    let s = &job.stream;
+    let free = s.fluid.at(s.t_inf, s.p)?;
+    let d = 2.0 * job.construction.r_out();
+    // The correlation the surface at `ts` would recommend (none when it is at the air's
+    // temperature: no convection).
+    let recommended_at = |ts: f64| -> Result<Option<usize>, EngineError> {
+        if (ts - s.t_inf).abs() < 1e-9 {
+            return Ok(None);
+        }
+        body::recommended_given_free(&Body { d, t_s: ts, ..*s }, &free).map(Some)
+    };
+    let start = recommended_at(job.process_temp)?;
+    let first = solve_fixed(job, start, &free)?;
+    let at_first = recommended_at(first.t_surface)?;
+    let (core, fixed, switched) = if at_first.is_none() || at_first == start {
+        (first, start, false)
+    } else {
+        let second = solve_fixed(job, at_first, &free)?;
+        let switched = recommended_at(second.t_surface)? != at_first;
+        (second, at_first, switched)
+    };
+    let loss = if full {
+        surface_loss_with(
+            s,
+            d,
+            core.t_surface,
+            job.emissivity,
+            job.t_surround,
+            fixed,
+            Some(&free),
+        )?
+    } else {
+        surface_lean(
+            s,
+            d,
+            core.t_surface,
+            job.emissivity,
+            job.t_surround,
+            fixed,
+            &free,
+        )?
+    };
+    let g = job.geometry();
+    let h_total = loss.h_conv + loss.h_rad;
+    let critical_radius = job.construction.layers.last().and_then(|l| {
+        let n = core.interfaces.len();
+        let t_in = if n >= 2 {
+            core.interfaces[n - 2]
+        } else {
+            core.t_bore
+        };
+        let k = l.k.mean(t_in, core.t_surface);
+        (h_total > 0.0).then(|| critical_radius(g, k, h_total))
+    });
+    Ok(Solution {
+        q: core.q,
+        residual: loss.q_conv + loss.q_rad - core.q,
+        loss,
+        t_surface: core.t_surface,
+        t_bore: core.t_bore,
+        interfaces: core.interfaces,
+        outer_d: d,
+        iterations: core.iterations,
+        critical_radius,
+        switched,
+    })
+}
+
+/// The heat flow and temperatures of one solve with the correlation held at `fixed`.
+struct Core {
+    q: f64,
+    t_surface: f64,
+    t_bore: f64,
+    interfaces: Vec<f64>,
+    iterations: u32,
+}
+
+fn solve_fixed(job: &Job, fixed: Option<usize>, free: &Properties) -> Result<Core, EngineError> {
     let s = &job.stream;
     let (tp, tinf, tsur) = (job.process_temp, s.t_inf, job.t_surround);
     let t_lo = tp.min(tinf).min(tsur);
@@ -229,13 +297,12 @@ fn solve_fixed(job: &Job, fixed: Option<usize>) -> Result<Solution, EngineError>
         let t = job.construction.march(t_bore, q, t_lo, t_hi);
         (t_bore, t)
     };
-    let free = s.fluid.at(tinf, s.p)?;
     let mut failure: Option<EngineError> = None;
     let mut residual = |q: f64| -> f64 {
         let (t_bore, t) = surface_of(q);
         let ts = t.last().copied().unwrap_or(t_bore);
-        match surface_total(s, outer_d, ts, job.emissivity, tsur, fixed, &free) {
-            Ok(total) => total - q,
+        match surface_lean(s, outer_d, ts, job.emissivity, tsur, fixed, free) {
+            Ok(l) => l.q_conv + l.q_rad - q,
             Err(e) => {
                 failure.get_or_insert(e);
                 f64::NAN
@@ -255,7 +322,8 @@ fn solve_fixed(job: &Job, fixed: Option<usize>) -> Result<Solution, EngineError>
         // coefficient as it is at q = 0), then a step of 5 % towards the root. An end moves only
         // where the residual's sign proves the root lies beyond it, so the bracket stays valid.
         // In t = q/q0 the residual's sign (times q0's) is + left of the root and − right of it.
-        let (mut lo, mut hi) = (0.0f64, 1.0f64);
+        // The residuals already known at the ends are handed to the solver with them.
+        let (mut lo, mut hi) = ((0.0f64, Some(q0)), (1.0f64, None));
         let r_out = (tp - tinf).abs() / q0.abs();
         let tm = 0.5 * (tp + tinf);
         let mut r_cond = job.h_inside.map(|hi| 1.0 / (hi * a_in)).unwrap_or(0.0);
@@ -268,21 +336,25 @@ fn solve_fixed(job: &Job, fixed: Option<usize>) -> Result<Solution, EngineError>
         }
         let t_guess = r_out / (r_cond + r_out);
         if t_guess.is_finite() && t_guess > 0.0 && t_guess < 1.0 {
-            let g1 = residual(t_guess * q0) * q0.signum();
+            let r1 = residual(t_guess * q0);
+            let g1 = r1 * q0.signum();
             let t_step = (t_guess * if g1 > 0.0 { 1.05 } else { 0.95 }).min(1.0);
-            let g2 = residual(t_step * q0) * q0.signum();
-            for (t, gt) in [(t_guess, g1), (t_step, g2)] {
+            let r2 = residual(t_step * q0);
+            for (t, rt) in [(t_guess, r1), (t_step, r2)] {
+                let gt = rt * q0.signum();
                 if gt.is_finite() && t > 0.0 && t < 1.0 {
                     if gt > 0.0 {
-                        lo = lo.max(t);
-                    } else {
-                        hi = hi.min(t);
+                        if t > lo.0 {
+                            lo = (t, Some(rt));
+                        }
+                    } else if t < hi.0 {
+                        hi = (t, Some(rt));
                     }
                 }
             }
         }
-        let (lo, hi) = (lo * q0, hi * q0);
-        match solve::bracketed_rel(&mut residual, lo, hi, 1e-12) {
+        let (lo, hi) = ((lo.0 * q0, lo.1), (hi.0 * q0, hi.1));
+        match solve::bracketed_rel_known(&mut residual, lo, hi, 1e-12) {
             Ok(r) => r,
             Err(_) => {
                 return Err(failure.unwrap_or(EngineError::NonFiniteResult {
@@ -297,33 +369,12 @@ fn solve_fixed(job: &Job, fixed: Option<usize>) -> Result<Solution, EngineError>
     let q = finite_result("heat flow", root.x)?;
     let (t_bore, interfaces) = surface_of(q);
     let t_surface = interfaces.last().copied().unwrap_or(t_bore);
-    let loss = surface_loss_with(
-        s,
-        outer_d,
-        t_surface,
-        job.emissivity,
-        tsur,
-        fixed,
-        Some(&free),
-    )?;
-    let h_total = loss.h_conv + loss.h_rad;
-    let critical_radius = job.construction.layers.last().and_then(|l| {
-        let n = interfaces.len();
-        let t_in = if n >= 2 { interfaces[n - 2] } else { t_bore };
-        let k = l.k.mean(t_in, t_surface);
-        (h_total > 0.0).then(|| critical_radius(g, k, h_total))
-    });
-    Ok(Solution {
+    Ok(Core {
         q,
-        residual: loss.q_conv + loss.q_rad - q,
-        loss,
         t_surface,
         t_bore,
         interfaces,
-        outer_d,
         iterations: root.iterations,
-        critical_radius,
-        switched: false,
     })
 }
 
@@ -339,15 +390,17 @@ pub fn thickness_for(
     if n == 0 {
         return Ok(None);
     }
-    let with = |t: f64| -> Result<Solution, EngineError> {
+    // The search needs only the numbers: lean solves, and the full one at the answer.
+    let at = |t: f64, full: bool| -> Result<Solution, EngineError> {
         let mut j = job.clone();
         j.construction.layers[n - 1].thickness = t;
-        solve(&j)
+        solve_as(&j, full)
     };
+    let with = |t: f64| at(t, false);
     let f0 = measure(&with(0.0)?) - target;
     let f1 = measure(&with(max_thickness)?) - target;
     if f0 == 0.0 {
-        return Ok(Some((0.0, with(0.0)?)));
+        return Ok(Some((0.0, at(0.0, true)?)));
     }
     if f0.signum() == f1.signum() {
         return Ok(None);
@@ -369,7 +422,7 @@ pub fn thickness_for(
         return Err(e);
     }
     match root {
-        Ok(r) => Ok(Some((r.x, with(r.x)?))),
+        Ok(r) => Ok(Some((r.x, at(r.x, true)?))),
         Err(_) => Ok(None),
     }
 }
@@ -445,6 +498,24 @@ mod tests {
                 "{}",
                 s.t_surface
             );
+        }
+    }
+
+    /// The lean solve gives the same numbers as the full one, bit for bit; only the analysis is
+    /// left out.
+    #[test]
+    fn lean_solve_equals_the_full_one() {
+        for (ins, eps) in [(0.0, 0.9), (0.05, 0.1), (0.2, 0.9), (0.0, 0.0)] {
+            for speed in [0.0, 0.3, 4.0, 30.0] {
+                let mut j = job(ins, eps);
+                j.stream.speed = speed;
+                let full = solve(&j).unwrap();
+                let lean = solve_lean(&j).unwrap();
+                assert!(full.loss.analysis.is_some() && lean.loss.analysis.is_none());
+                let mut stripped = full.clone();
+                stripped.loss.analysis = None;
+                assert_eq!(stripped, lean, "{ins} {eps} {speed}");
+            }
         }
     }
 

@@ -139,7 +139,7 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
     let bare = if insulated_layers > 0 {
         let mut b = job.clone();
         b.construction.layers.truncate(n - insulated_layers);
-        Some(heatloss::solve(&b)?)
+        Some(heatloss::solve_lean(&b)?)
     } else {
         None
     };

@@ -1187,7 +1187,7 @@ fn quick(
     };
     if s.solved() {
         let job = s.job_with(stream, h_inside);
-        let sol = crate::engine::heatloss::solve(&job)?;
+        let sol = crate::engine::heatloss::solve_lean(&job)?;
         Ok((sol.q * run, sol.t_surface, sol.loss.h_conv))
     } else {
         let l = crate::engine::heatloss::surface_loss(
@@ -1395,10 +1395,7 @@ fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step> {
             "{}: {}{} = {}; h_F = Nu·k/D = {} × {} W/(m·K) / {} m = {} W/(m²·K)",
             rec.name,
             rec.formula,
-            rec.detail
-                .as_ref()
-                .map(|d| format!(" ({d})"))
-                .unwrap_or_default(),
+            rec.detail().map(|d| format!(" ({d})")).unwrap_or_default(),
             g(rec.nu),
             g(rec.nu),
             g(rec.k),

@@ -42,14 +42,39 @@ pub fn bracketed_rel(
     bracketed_until(f, a, b, |x, fx| fx.abs() <= rtol * x.abs())
 }
 
+/// As [`bracketed_rel`], for a caller that already has f at either end (`Some(f(a))`,
+/// `Some(f(b))`): those values are used, not evaluated again.
+pub fn bracketed_rel_known(
+    f: impl FnMut(f64) -> f64,
+    (a, fa): (f64, Option<f64>),
+    (b, fb): (f64, Option<f64>),
+    rtol: f64,
+) -> Result<Root, SolveError> {
+    bracketed_known(f, (a, fa), (b, fb), |x, fx| fx.abs() <= rtol * x.abs())
+}
+
 fn bracketed_until(
-    mut f: impl FnMut(f64) -> f64,
+    f: impl FnMut(f64) -> f64,
     a: f64,
     b: f64,
     done: impl Fn(f64, f64) -> bool,
 ) -> Result<Root, SolveError> {
-    let (mut a, mut b) = if a <= b { (a, b) } else { (b, a) };
-    let (mut fa, mut fb) = (f(a), f(b));
+    bracketed_known(f, (a, None), (b, None), done)
+}
+
+fn bracketed_known(
+    mut f: impl FnMut(f64) -> f64,
+    (a, fa): (f64, Option<f64>),
+    (b, fb): (f64, Option<f64>),
+    done: impl Fn(f64, f64) -> bool,
+) -> Result<Root, SolveError> {
+    let ((mut a, fa), (mut b, fb)) = if a <= b {
+        ((a, fa), (b, fb))
+    } else {
+        ((b, fb), (a, fa))
+    };
+    let mut fa = fa.unwrap_or_else(|| f(a));
+    let mut fb = fb.unwrap_or_else(|| f(b));
     for (x, v) in [(a, fa), (b, fb)] {
         if !v.is_finite() {
             return Err(SolveError::NonFinite { x });
@@ -152,6 +177,26 @@ mod tests {
         // A step function: converges to the jump.
         let r = bracketed(|x| if x < 0.3 { -1.0 } else { 1.0 }, 0.0, 1.0, 0.0).unwrap();
         assert!((r.x - 0.3).abs() < 1e-12);
+    }
+
+    #[test]
+    fn known_ends_are_not_evaluated_again() {
+        let mut calls = Vec::new();
+        let r = bracketed_rel_known(
+            |x| {
+                calls.push(x);
+                x * x - 2.0
+            },
+            (2.0, Some(2.0)),
+            (0.0, Some(-2.0)),
+            1e-15,
+        )
+        .unwrap();
+        assert!((r.x - 2f64.sqrt()).abs() < 1e-15);
+        assert!(!calls.contains(&0.0) && !calls.contains(&2.0), "{calls:?}");
+        // The same root as when the solver evaluates the ends itself.
+        let plain = bracketed_rel(|x| x * x - 2.0, 0.0, 2.0, 1e-15).unwrap();
+        assert_eq!(plain, r);
     }
 
     #[test]

@@ -33,7 +33,7 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
             view! {
                 <tr class:recommended=rec data-correlation=e.id data-h=format!("{}", e.h) data-valid=e.valid().to_string()>
                     <th scope="row">{e.name}{rec.then_some(view! { <span class="rec-mark">" ★ recommended"</span> })}
-                        {e.detail.clone().map(|d| view! { <small class="detail">{d}</small> })}</th>
+                        {e.detail().map(|d| view! { <small class="detail">{d}</small> })}</th>
                     <td>{e.reference.short()}</td>
                     <td>{format_sig(e.groups.re, 4)}</td>
                     <td>{format_sig(e.nu, 4)}</td>

@@ -130,6 +130,7 @@ const fn entry(
         nu,
         nu_still: zero,
         detail,
+        surface: false,
     }
 }
 

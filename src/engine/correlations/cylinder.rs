@@ -212,6 +212,7 @@ pub const FORCED: [Forced; 4] = [
         nu: cb,
         nu_still: cb_still,
         detail: no_detail,
+        surface: false,
     },
     Forced {
         id: "hilpert",
@@ -221,6 +222,7 @@ pub const FORCED: [Forced; 4] = [
         nu: hp,
         nu_still: zero,
         detail: hp_detail,
+        surface: false,
     },
     Forced {
         id: "zukauskas",
@@ -230,6 +232,7 @@ pub const FORCED: [Forced; 4] = [
         nu: zk,
         nu_still: zero,
         detail: zk_detail,
+        surface: true,
     },
     Forced {
         id: "gnielinski",
@@ -239,6 +242,7 @@ pub const FORCED: [Forced; 4] = [
         nu: gnielinski,
         nu_still: gn_still,
         detail: gn_detail,
+        surface: true,
     },
 ];
 

@@ -89,6 +89,8 @@ pub struct Forced {
     pub nu_still: fn(&Groups) -> f64,
     /// For the working: the band and constants used, or the parts of a composite form.
     pub detail: fn(&Groups) -> Option<String>,
+    /// It reads the surface's properties (Pr_s or μs in a correction factor).
+    pub surface: bool,
 }
 
 /// No detail beyond the formula.

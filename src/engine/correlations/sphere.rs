@@ -106,6 +106,7 @@ pub const FORCED: [Forced; 3] = [
         nu: whitaker,
         nu_still: two,
         detail: no_detail,
+        surface: true,
     },
     Forced {
         id: "gnielinski-sphere",
@@ -115,6 +116,7 @@ pub const FORCED: [Forced; 3] = [
         nu: gnielinski_sphere,
         nu_still: two,
         detail: no_detail,
+        surface: false,
     },
     Forced {
         id: "ranz-marshall",
@@ -124,6 +126,7 @@ pub const FORCED: [Forced; 3] = [
         nu: ranz_marshall,
         nu_still: two,
         detail: no_detail,
+        surface: false,
     },
 ];
 

@@ -101,15 +101,39 @@ const LAMBDA_R: [(f64, f64, i32, i32, f64); 6] = [
 ];
 
 fn residual(terms: &[(f64, f64, i32, i32, f64)], tau: f64, delta: f64) -> f64 {
+    residual_with(terms, twentieth_power(tau), delta)
+}
+
+/// τ^(1/20): every exponent of τ in Tables II and IV is a multiple of 0.05, so each power is an
+/// integer power of this one number (one exponential for all of them).
+fn twentieth_power(tau: f64) -> f64 {
+    (0.05 * tau.ln()).exp()
+}
+
+/// τ^t from `a` = τ^(1/20), for t a multiple of 0.05.
+fn tau_pow(a: f64, t: f64) -> f64 {
+    let k = (20.0 * t).round();
+    debug_assert!(
+        (20.0 * t - k).abs() < 1e-9,
+        "exponent {t} is not a multiple of 0.05"
+    );
+    a.powi(k as i32)
+}
+
+fn residual_with(terms: &[(f64, f64, i32, i32, f64)], a: f64, delta: f64) -> f64 {
+    // The exponential factor exp(−γ·δ^l) once per distinct (γ, l): every term with l ≠ 0 has
+    // γ = 1 in both tables.
+    let (e1, e2) = ((-delta).exp(), (-delta * delta).exp());
     terms
         .iter()
         .map(|&(n, t, d, l, g)| {
-            let e = if l == 0 {
-                1.0
-            } else {
-                (-g * delta.powi(l)).exp()
+            let e = match (l, g) {
+                (0, _) => 1.0,
+                (1, 1.0) => e1,
+                (2, 1.0) => e2,
+                _ => (-g * delta.powi(l)).exp(),
             };
-            n * tau.powf(t) * delta.powi(d) * e
+            n * tau_pow(a, t) * delta.powi(d) * e
         })
         .sum()
 }
@@ -145,11 +169,11 @@ pub fn transport(t: f64, rho_mol: f64) -> (f64, f64) {
     let delta = rho_mol / RHO_C;
     let eta0 = viscosity_dilute_upas(t);
     let (n1, (n2, t2), (n3, t3)) = LAMBDA_0;
-    let ln_tau = tau.ln();
-    let l0 = n1 * eta0 + n2 * (t2 * ln_tau).exp() + n3 * (t3 * ln_tau).exp();
+    let a = twentieth_power(tau);
+    let l0 = n1 * eta0 + n2 * tau_pow(a, t2) + n3 * tau_pow(a, t3);
     (
-        eta0 + residual(&ETA_R, tau, delta),
-        l0 + residual(&LAMBDA_R, tau, delta),
+        eta0 + residual_with(&ETA_R, a, delta),
+        l0 + residual_with(&LAMBDA_R, a, delta),
     )
 }
 
@@ -178,7 +202,7 @@ pub fn cp0_over_r(t: f64) -> f64 {
     let mut cv = -12.0 * n[0] * tau.powi(-3)
         - 6.0 * n[1] * tau.powi(-2)
         - 2.0 * n[2] / tau
-        - 0.75 * n[5] * tau.powf(1.5)
+        - 0.75 * n[5] * tau * tau.sqrt()
         + n[6];
     // ln(1 − exp(−c·τ)) terms.
     for (ni, ci) in [(n[7], n[10]), (n[8], n[11])] {
