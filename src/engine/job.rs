@@ -98,6 +98,10 @@ pub struct Targets {
     pub process_water: bool,
     /// ρ·cp·(wall cross-section) per metre of the wall, J/(m·K), if known.
     pub wall_heat_capacity: Option<f64>,
+    /// Highest heat loss per metre of pipe wanted, W/m (0: none).
+    pub loss_target: f64,
+    /// Time still water must hold out before it has frozen through, s (0: none).
+    pub freeze_target: f64,
 }
 
 /// Everything the job adds to the convection result.
@@ -270,25 +274,93 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
         let r_in = job.construction.r_in;
         let water = WATER_RHO * std::f64::consts::PI * r_in * r_in;
         let c = water * WATER_CP + t.wall_heat_capacity.unwrap_or(0.0);
-        // Overall resistance per metre from the water to the air at the solution.
-        let r_tot = (job.process_temp - tinf) / solution.q;
-        let t_cool = c * r_tot * ((job.process_temp - tinf) / (273.15 - tinf)).ln();
-        let t_freeze = water * ICE_LATENT * r_tot / (273.15 - tinf);
+        // The two times from the overall resistance per metre, water to air, at a solution.
+        let times = |s: &Solution| -> (f64, f64) {
+            let r_tot = (job.process_temp - tinf) / s.q;
+            (
+                c * r_tot * ((job.process_temp - tinf) / (273.15 - tinf)).ln(),
+                water * ICE_LATENT * r_tot / (273.15 - tinf),
+            )
+        };
+        let (t_cool, t_freeze) = times(&solution);
         let mut summary = "Still water: time to cool to 0 °C, then to freeze through (lumped water and wall, constant resistance, the approach of ISO 12241; from memory).".to_string();
         if t.wall_heat_capacity.is_none() {
             summary.push_str(" The wall's heat capacity is left out for a material of your own (the times are then a little short).");
         }
+        let mut figures = vec![
+            ("to 0 °C", t_cool, Dim::Duration),
+            ("then frozen through", t_freeze, Dim::Duration),
+            ("in all", t_cool + t_freeze, Dim::Duration),
+        ];
+        let mut ok = false;
+        if t.freeze_target > 0.0 {
+            figures.push(("wanted", t.freeze_target, Dim::Duration));
+            if t_cool + t_freeze >= t.freeze_target {
+                ok = true;
+                summary.push_str(" It holds out for the time wanted.");
+            } else if insulated_layers == 0 {
+                summary.push_str(" It freezes sooner than wanted; add an insulation layer to see the thickness that would hold out.");
+            } else {
+                let total = |s: &Solution| {
+                    let (a, b) = times(s);
+                    a + b
+                };
+                match heatloss::thickness_for(job, 0.5, t.freeze_target, total)? {
+                    Some((th, _)) => {
+                        figures.push(("outer layer thickness for the time", th, Dim::Length));
+                        summary.push_str(" It freezes sooner than wanted; the outer layer would need the thickness shown.");
+                    }
+                    None => summary.push_str(" It freezes sooner than wanted, and no outer-layer thickness up to 0.5 m holds out that long: insulation only slows freezing, it cannot stop it. Heat tracing, a flow kept moving, or draining the line is the usual remedy (common practice)."),
+                }
+            }
+        }
         verdicts.push(Verdict {
             id: "freeze",
             title: "Freezing",
-            ok: false,
+            ok,
             summary,
-            figures: vec![
-                ("to 0 °C", t_cool, Dim::Duration),
-                ("then frozen through", t_freeze, Dim::Duration),
-                ("in all", t_cool + t_freeze, Dim::Duration),
-            ],
+            figures,
             caution: Some(FREEZE_CAUTION),
+        });
+    }
+    // A loss target per metre of pipe.
+    if g == Geometry::Cylinder && t.loss_target > 0.0 {
+        let q = solution.q.abs();
+        let mut figures = vec![
+            ("loss per metre", q, Dim::HeatFlowPerLength),
+            ("target", t.loss_target, Dim::HeatFlowPerLength),
+        ];
+        let met = q <= t.loss_target;
+        let summary = if met {
+            "The loss per metre is within the target.".to_string()
+        } else if insulated_layers == 0 {
+            "The loss per metre is above the target. Add an insulation layer to see the thickness that meets it.".to_string()
+        } else {
+            let mut thin = job.clone();
+            thin.construction.layers[n - 1].thickness = 0.0;
+            let without = heatloss::solve_lean(&thin)?.q.abs();
+            match heatloss::thickness_for(job, 0.5, t.loss_target, |s| s.q.abs())? {
+                Some((th, _)) => {
+                    figures.push(("outer layer thickness for the target", th, Dim::Length));
+                    "The loss per metre is above the target; the outer layer would need the thickness shown.".to_string()
+                }
+                None if without <= t.loss_target => "The loss per metre is above the target, and the layer makes it worse: without the outer layer the loss is within it (the line is below the critical radius, where a thin layer adds surface faster than resistance).".to_string(),
+                None => {
+                    let mut thick = job.clone();
+                    thick.construction.layers[n - 1].thickness = 0.5;
+                    let least = heatloss::solve_lean(&thick)?.q.abs();
+                    figures.push(("loss with 0.5 m of the outer layer", least, Dim::HeatFlowPerLength));
+                    "The loss per metre is above the target, and no outer-layer thickness up to 0.5 m meets it: the target is below what this construction can reach. A better insulant (lower k) or a lower process temperature is needed.".to_string()
+                }
+            }
+        };
+        verdicts.push(Verdict {
+            id: "loss",
+            title: "Loss target",
+            ok: met,
+            summary,
+            figures,
+            caution: None,
         });
     }
     // Temperature along a pipe carrying a flow.
@@ -453,6 +525,8 @@ mod tests {
             process_cp: 4180.0,
             process_water: true,
             wall_heat_capacity: None,
+            loss_target: 0.0,
+            freeze_target: 0.0,
         }
     }
 
@@ -520,6 +594,78 @@ mod tests {
             350.0,
         );
         assert!(!thick.ok, "a thick poor conductor fails the Biot check");
+    }
+
+    /// The freeze-time inverse: a wanted time longer than the job holds out gives the outer-layer
+    /// thickness at which the lumped times add up to it; a time no insulation can reach says so.
+    #[test]
+    fn freeze_time_target_gives_a_thickness_or_says_none_can() {
+        let mut j = job(0.01, 0.9);
+        j.stream.t_inf = 263.15;
+        j.t_surround = 263.15;
+        j.process_temp = 283.15;
+        let mut t = targets();
+        let r = evaluate(&j, &t, 1).unwrap();
+        let now = r
+            .verdicts
+            .iter()
+            .find(|v| v.id == "freeze")
+            .unwrap()
+            .figures[2]
+            .1;
+        t.freeze_target = 2.0 * now;
+        let r = evaluate(&j, &t, 1).unwrap();
+        let f = r.verdicts.iter().find(|v| v.id == "freeze").unwrap();
+        assert!(!f.ok);
+        let th = f
+            .figures
+            .iter()
+            .find(|x| x.0 == "outer layer thickness for the time")
+            .expect("a thickness")
+            .1;
+        assert!(th > 0.01 && th < 0.5, "{th}");
+        // At that thickness the job holds out for the time wanted.
+        let mut thick = j.clone();
+        thick.construction.layers[1].thickness = th;
+        let r2 = evaluate(&thick, &t, 1).unwrap();
+        let f2 = r2.verdicts.iter().find(|v| v.id == "freeze").unwrap();
+        assert!((f2.figures[2].1 / t.freeze_target - 1.0).abs() < 1e-6);
+        assert!(f2.ok);
+        // A year: no thickness up to 0.5 m holds out (0.5 m gives about a month here).
+        t.freeze_target = 365.0 * 86_400.0;
+        let r3 = evaluate(&j, &t, 1).unwrap();
+        let f3 = r3.verdicts.iter().find(|v| v.id == "freeze").unwrap();
+        assert!(f3.summary.contains("cannot stop it"), "{}", f3.summary);
+    }
+
+    /// The loss-per-metre inverse, met and unmet, and a target below what any thickness reaches.
+    #[test]
+    fn loss_target_gives_a_thickness_or_says_none_can() {
+        let j = job(0.01, 0.9);
+        let mut t = targets();
+        let q = evaluate(&j, &t, 1).unwrap().solution.q;
+        t.loss_target = 0.5 * q;
+        let r = evaluate(&j, &t, 1).unwrap();
+        let v = r.verdicts.iter().find(|v| v.id == "loss").unwrap();
+        assert!(!v.ok);
+        let th = v.figures[2].1;
+        let mut at = j.clone();
+        at.construction.layers[1].thickness = th;
+        let q_at = heatloss::solve(&at).unwrap().q;
+        assert!((q_at / (0.5 * q) - 1.0).abs() < 1e-6, "{q_at}");
+        t.loss_target = 2.0 * q;
+        let r = evaluate(&j, &t, 1).unwrap();
+        assert!(r.verdicts.iter().find(|v| v.id == "loss").unwrap().ok);
+        // 1 W/m from a 180 °C line through this insulant would take metres of it.
+        t.loss_target = 1.0;
+        let r = evaluate(&j, &t, 1).unwrap();
+        let v = r.verdicts.iter().find(|v| v.id == "loss").unwrap();
+        assert!(
+            v.summary.contains("below what this construction can reach"),
+            "{}",
+            v.summary
+        );
+        assert!(v.figures[2].1 > 1.0);
     }
 
     #[test]

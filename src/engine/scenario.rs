@@ -188,6 +188,10 @@ pub struct Scenario {
     pub efficiency: f64,
     /// Target temperature for the lumped cooling of a solid body, K.
     pub cool_target: f64,
+    /// Highest heat loss per metre of pipe wanted, W/m (0: none).
+    pub loss_target: f64,
+    /// Time still water must hold out before it has frozen through, s (0: none).
+    pub freeze_target: f64,
 }
 
 /// The demo that opens by default (invented): a bare 2-inch line (60.3 mm outside diameter), a
@@ -247,6 +251,8 @@ pub const DEMO: Scenario = Scenario {
     price: 0.06 / 3.6e6,
     efficiency: 0.8,
     cool_target: 313.15,
+    loss_target: 0.0,
+    freeze_target: 0.0,
 };
 
 pub const DEMO_TITLE: &str = "Demo: a bare 2-inch line on a windy roof";
@@ -299,6 +305,8 @@ pub enum Field {
     Price,
     Efficiency,
     CoolTarget,
+    LossTarget,
+    FreezeTarget,
 }
 
 /// The group a field is shown in.
@@ -351,7 +359,7 @@ const fn f(
 }
 
 #[rustfmt::skip]
-pub const FIELDS: [FieldSpec; 45] = [
+pub const FIELDS: [FieldSpec; 47] = [
     f(Field::Diameter, Group::Body, "D", "Size D", Dim::Length, (0.0, true, 100.0), "as drawn: the width across the stream (bare outside diameter of a pipe)"),
     f(Field::Length, Group::Body, "L", "Length", Dim::RunLength, (0.0, true, 10_000.0), "along the axis; the height when upright"),
     f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air"),
@@ -391,6 +399,8 @@ pub const FIELDS: [FieldSpec; 45] = [
     f(Field::KTempC, Group::Layers, "Tkc", "Mean temperature C", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's third k, if given"),
     f(Field::TouchLimit, Group::Job, "Tl", "Touch limit", Dim::Temperature, (0.0, true, 3000.0), "60 °C is common practice; local codes govern"),
     f(Field::DewMargin, Group::Job, "dm", "Margin above the dew point", Dim::TemperatureDifference, (0.0, false, 50.0), "for cold surfaces in humid air"),
+    f(Field::LossTarget, Group::Job, "qt", "Loss target", Dim::HeatFlowPerLength, (0.0, false, 1e6), "highest loss per metre wanted; 0 for none"),
+    f(Field::FreezeTarget, Group::Job, "tft", "Hold out against freezing for", Dim::Duration, (0.0, false, 3.6e7), "still water in frost; 0 for none"),
     f(Field::MassFlow, Group::Job, "mf", "Flow through the pipe", Dim::MassFlow, (0.0, false, 1e4), "0 for still water (then the freezing times)"),
     f(Field::ProcessCp, Group::Job, "cpp", "Heat capacity of the process fluid", Dim::SpecificHeat, (0.0, true, 1e6), "about 4180 J/(kg·K) for water"),
     f(Field::Hours, Group::Job, "hy", "Operating hours", Dim::HoursPerYear, (0.0, false, 8784.0), "per year"),
@@ -454,6 +464,8 @@ impl Scenario {
             Field::Price => self.price,
             Field::Efficiency => self.efficiency,
             Field::CoolTarget => self.cool_target,
+            Field::LossTarget => self.loss_target,
+            Field::FreezeTarget => self.freeze_target,
         }
     }
 
@@ -504,6 +516,8 @@ impl Scenario {
             Field::Price => &mut self.price,
             Field::Efficiency => &mut self.efficiency,
             Field::CoolTarget => &mut self.cool_target,
+            Field::LossTarget => &mut self.loss_target,
+            Field::FreezeTarget => &mut self.freeze_target,
         };
         *slot = v;
     }
@@ -551,7 +565,10 @@ impl Scenario {
             Field::Layer3T | Field::Layer3Ka | Field::Layer3Kb | Field::Layer3Kc => {
                 self.solved() && self.layer_count >= 3
             }
-            Field::MassFlow => self.solved() && self.shape == Shape::Cylinder,
+            Field::MassFlow | Field::LossTarget => self.solved() && self.shape == Shape::Cylinder,
+            Field::FreezeTarget => {
+                self.solved() && self.shape == Shape::Cylinder && self.mass_flow == 0.0
+            }
             Field::ProcessCp => {
                 self.solved() && self.shape == Shape::Cylinder && !self.inside_computed()
             }
@@ -958,6 +975,8 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
             let r0 = r1 - s.wall_thickness;
             rho * cp * std::f64::consts::PI * (r1 * r1 - r0 * r0)
         }),
+        loss_target: s.loss_target,
+        freeze_target: s.freeze_target,
     };
     let (a, ts, outer_d, job_result) = if s.solved() {
         if s.layer_count > 0 && (s.k_temp_a - s.k_temp_b).abs() < 1e-9 && s.layer_ka != s.layer_kb {
@@ -1864,6 +1883,8 @@ mod tests {
         s.wall = WallMaterial::User;
         s.wall_k = 0.4;
         s.layer_t = [0.01, 0.02, 0.03];
+        s.loss_target = 25.0;
+        s.freeze_target = 36_000.0;
         let (back, _) = from_fragment(&to_fragment(&s, System::Si)).unwrap();
         assert_eq!(back, s);
     }

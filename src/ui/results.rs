@@ -365,7 +365,11 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
                     values: o.thickness_sweep.iter().map(|p| p.1).collect(),
                 },
                 Some((outer, o.q_total)),
-                vec![],
+                if s.loss_target > 0.0 && s.shape == crate::engine::scenario::Shape::Cylinder {
+                    vec![("loss target", s.loss_target * s.length)]
+                } else {
+                    vec![]
+                },
                 c,
             )
             .into_any(),

@@ -557,6 +557,34 @@ async fn exercise(c: &Client, base: &str) {
         .click()
         .await
         .unwrap();
+    // The inside film worked out from a flow of water: the engine's h_i and loss; water frozen
+    // inside is a message beside the process temperature.
+    pick(c, "[data-choice=inside]", "water").await;
+    assert!(hidden(c, "hi").await && !hidden(c, "mf").await && !hidden(c, "qt").await);
+    paste_into(c, "mf", "7200").await; // kg/h, the SI default: 2 kg/s
+    let mut flowing = job;
+    flowing.inside = scenario::InsideFilm::Water;
+    flowing.mass_flow = 2.0;
+    let want_flow = expect(&flowing);
+    let h_inside = si(c, "h_inside").await;
+    assert!(
+        close(h_inside, want_flow.inside.as_ref().unwrap().h),
+        "h_i {h_inside} on the page, {} from the engine",
+        want_flow.inside.as_ref().unwrap().h
+    );
+    assert!(close(si(c, "q_total").await, want_flow.q_total));
+    paste_into(c, "Tp", "-5").await;
+    assert!(
+        text_of(c, "[data-msg-for=Tp]")
+            .await
+            .contains("process fluid"),
+        "no message beside the process temperature"
+    );
+    assert_no_nan_shown(c).await;
+    paste_into(c, "Tp", "70").await;
+    paste_into(c, "mf", "0").await;
+    pick(c, "[data-choice=inside]", "typed").await;
+    assert!(close(si(c, "q_total").await, want_job.q_total));
     c.find(Locator::Css(
         "[data-toggle=surface-mode] button:nth-child(1)",
     ))

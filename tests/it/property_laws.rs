@@ -295,57 +295,59 @@ fn any_scenario() -> impl Strategy<Value = leeward::engine::scenario::Scenario> 
         any::<bool>(),
         0..4usize,
     )
-        .prop_map(|(vals, shape, fluid, bits, layers, wall, wild_ok, inside)| {
-            let mut s = DEMO;
-            s.shape = Shape::ALL[shape];
-            s.fluid = FluidKind::ALL[fluid];
-            s.axis = if bits & 1 == 0 {
-                Axis::Horizontal
-            } else {
-                Axis::Vertical
-            };
-            s.wind = [Wind::Horizontal, Wind::Up, Wind::Down][(bits as usize >> 1) % 3];
-            s.pressure_input = if bits & 4 == 0 {
-                PressureInput::Absolute
-            } else {
-                PressureInput::Elevation
-            };
-            s.humidity_input = if bits & 2 == 0 {
-                HumidityInput::Relative
-            } else {
-                HumidityInput::DewPoint
-            };
-            s.surface_mode = if bits & 8 == 0 {
-                SurfaceMode::Given
-            } else {
-                SurfaceMode::Solved
-            };
-            s.layer_count = layers;
-            s.wall = WallMaterial::ALL[wall];
-            s.inside = InsideFilm::ALL[inside];
-            for (spec, (how, factor, wild)) in FIELDS.iter().zip(vals) {
-                let demo = s.get(spec.field);
-                match how {
-                    0..=2 => {}
-                    3..=5 if spec.dim == Dim::Temperature => {
-                        s.set(spec.field, 150.0 + 1350.0 * (factor - 0.2) / 4.8)
+        .prop_map(
+            |(vals, shape, fluid, bits, layers, wall, wild_ok, inside)| {
+                let mut s = DEMO;
+                s.shape = Shape::ALL[shape];
+                s.fluid = FluidKind::ALL[fluid];
+                s.axis = if bits & 1 == 0 {
+                    Axis::Horizontal
+                } else {
+                    Axis::Vertical
+                };
+                s.wind = [Wind::Horizontal, Wind::Up, Wind::Down][(bits as usize >> 1) % 3];
+                s.pressure_input = if bits & 4 == 0 {
+                    PressureInput::Absolute
+                } else {
+                    PressureInput::Elevation
+                };
+                s.humidity_input = if bits & 2 == 0 {
+                    HumidityInput::Relative
+                } else {
+                    HumidityInput::DewPoint
+                };
+                s.surface_mode = if bits & 8 == 0 {
+                    SurfaceMode::Given
+                } else {
+                    SurfaceMode::Solved
+                };
+                s.layer_count = layers;
+                s.wall = WallMaterial::ALL[wall];
+                s.inside = InsideFilm::ALL[inside];
+                for (spec, (how, factor, wild)) in FIELDS.iter().zip(vals) {
+                    let demo = s.get(spec.field);
+                    match how {
+                        0..=2 => {}
+                        3..=5 if spec.dim == Dim::Temperature => {
+                            s.set(spec.field, 150.0 + 1350.0 * (factor - 0.2) / 4.8)
+                        }
+                        // Half the scenarios stay inside every input's hard limits, so that many of
+                        // them compute an answer; the other half take wild values too.
+                        3..=6 if !wild_ok => {
+                            let lo = if spec.min_open {
+                                spec.min + 1e-9 * spec.max
+                            } else {
+                                spec.min
+                            };
+                            s.set(spec.field, (demo * factor).clamp(lo, spec.max))
+                        }
+                        3..=5 => s.set(spec.field, demo * factor),
+                        _ => s.set(spec.field, wild),
                     }
-                    // Half the scenarios stay inside every input's hard limits, so that many of
-                    // them compute an answer; the other half take wild values too.
-                    3..=6 if !wild_ok => {
-                        let lo = if spec.min_open {
-                            spec.min + 1e-9 * spec.max
-                        } else {
-                            spec.min
-                        };
-                        s.set(spec.field, (demo * factor).clamp(lo, spec.max))
-                    }
-                    3..=5 => s.set(spec.field, demo * factor),
-                    _ => s.set(spec.field, wild),
                 }
-            }
-            s
-        })
+                s
+            },
+        )
 }
 
 static FUZZ_OK: std::sync::atomic::AtomicUsize = std::sync::atomic::AtomicUsize::new(0);

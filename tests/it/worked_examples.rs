@@ -123,6 +123,8 @@ fn time_for_still_water_to_reach_freezing() {
         process_cp: 4180.0,
         process_water: true,
         wall_heat_capacity: None,
+        loss_target: 0.0,
+        freeze_target: 0.0,
     };
     let r = job::evaluate(&job, &targets, 1).unwrap();
     let card = r.verdicts.iter().find(|v| v.id == "freeze").unwrap();
