@@ -123,6 +123,31 @@ fn at_surface(
     (area, q_rad, body)
 }
 
+/// As [`surface_loss`] without the full analysis (`analysis` is `None`; the numbers are the
+/// same): the recommended correlation's h alone, for the plots' sweeps.
+pub fn surface_loss_lean(
+    stream: &Body,
+    d: f64,
+    ts: f64,
+    emissivity: f64,
+    t_sur: f64,
+) -> Result<SurfaceLoss, EngineError> {
+    let free = stream.fluid.at(stream.t_inf, stream.p)?;
+    let fixed = if (ts - stream.t_inf).abs() < 1e-9 {
+        None
+    } else {
+        Some(body::recommended_given_free(
+            &Body {
+                d,
+                t_s: ts,
+                ..*stream
+            },
+            &free,
+        )?)
+    };
+    surface_lean(stream, d, ts, emissivity, t_sur, fixed, &free)
+}
+
 /// As [`surface_loss_with`] without the full analysis (`analysis` is `None`): with a fixed
 /// correlation it takes [`body::h_given_free`], for the solver's inner loop and the lean solve.
 fn surface_lean(
@@ -515,6 +540,24 @@ mod tests {
                 let mut stripped = full.clone();
                 stripped.loss.analysis = None;
                 assert_eq!(stripped, lean, "{ins} {eps} {speed}");
+            }
+        }
+    }
+
+    /// The sweeps' lean surface loss equals the full one at every speed and surface temperature.
+    #[test]
+    fn lean_surface_loss_equals_the_full_one() {
+        let j = job(0.0, 0.9);
+        for speed in [0.0, 0.2, 2.0, 15.0, 60.0] {
+            for ts in [250.0, 290.0, 350.0, 700.0] {
+                let mut b = j.stream;
+                b.speed = speed;
+                let full = surface_loss(&b, 0.1143, ts, 0.9, 268.15).unwrap();
+                let lean = surface_loss_lean(&b, 0.1143, ts, 0.9, 268.15).unwrap();
+                assert!(full.analysis.is_some() && lean.analysis.is_none());
+                let mut stripped = full.clone();
+                stripped.analysis = None;
+                assert_eq!(stripped, lean, "{speed} {ts}");
             }
         }
     }

@@ -544,12 +544,18 @@ mod tests {
         assert!((card.figures[3].1 - saved).abs() < 1e-6 * saved);
     }
 
-    #[test]
-    fn freezing_times_follow_the_lumped_model() {
-        let mut j = job(0.03, 0.9);
+    /// The test line with still water at 10 °C inside, in −10 °C air under a −10 °C sky.
+    fn frost(insulation: f64) -> Job {
+        let mut j = job(insulation, 0.9);
         j.stream.t_inf = 263.15;
         j.t_surround = 263.15;
         j.process_temp = 283.15;
+        j
+    }
+
+    #[test]
+    fn freezing_times_follow_the_lumped_model() {
+        let j = frost(0.03);
         let r = evaluate(&j, &targets(), 1).unwrap();
         let f = r.verdicts.iter().find(|v| v.id == "freeze").unwrap();
         let (cool, frozen) = (f.figures[0].1, f.figures[1].1);
@@ -600,10 +606,7 @@ mod tests {
     /// thickness at which the lumped times add up to it; a time no insulation can reach says so.
     #[test]
     fn freeze_time_target_gives_a_thickness_or_says_none_can() {
-        let mut j = job(0.01, 0.9);
-        j.stream.t_inf = 263.15;
-        j.t_surround = 263.15;
-        j.process_temp = 283.15;
+        let j = frost(0.01);
         let mut t = targets();
         let r = evaluate(&j, &t, 1).unwrap();
         let now = r

@@ -1209,7 +1209,7 @@ fn quick(
         let sol = crate::engine::heatloss::solve_lean(&job)?;
         Ok((sol.q * run, sol.t_surface, sol.loss.h_conv))
     } else {
-        let l = crate::engine::heatloss::surface_loss(
+        let l = crate::engine::heatloss::surface_loss_lean(
             &stream,
             s.diameter,
             s.surface_temp,
@@ -1268,21 +1268,31 @@ fn given_verdicts(s: &Scenario, ts: f64, dew_point: Option<f64>) -> Vec<Verdict>
     out
 }
 
+/// One property set in words for the working: "`fluid` `at` T K, p Pa: ρ = …".
+fn property_text(fluid: &str, at: &str, pr: &Properties) -> String {
+    let g = |v: f64| format_sig(v, 5);
+    format!(
+        "{fluid} {at} {} K, {} Pa: ρ = {} kg/m³, μ = {} Pa·s, k = {} W/(m·K), cp = {} J/(kg·K); ν = μ/ρ = {} m²/s, Pr = {}",
+        g(pr.t),
+        g(pr.p),
+        g(pr.rho),
+        g(pr.mu),
+        g(pr.k),
+        g(pr.cp),
+        g(pr.nu),
+        g(pr.pr)
+    )
+}
+
 fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step> {
     let g = |v: f64| format_sig(v, 5);
     let rec = a.recommended();
     let mut out = Vec::new();
     if let Some((pr, flow)) = w.inside {
-        let props = format!(
-            "{} at the process temperature {} K, {} Pa: ρ = {} kg/m³, μ = {} Pa·s, k = {} W/(m·K), cp = {} J/(kg·K), Pr = {}",
+        let props = property_text(
             s.process_fluid().map(|f| f.name()).unwrap_or(""),
-            g(pr.t),
-            g(pr.p),
-            g(pr.rho),
-            g(pr.mu),
-            g(pr.k),
-            g(pr.cp),
-            g(pr.pr)
+            "at the process temperature",
+            pr,
         );
         let text = match flow {
             None => format!("{props}. No flow through the bore: the inside film is not worked out; the bore is at the process temperature."),
@@ -1377,18 +1387,7 @@ fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step> {
     ] {
         out.push(Step {
             title,
-            text: format!(
-                "{} at {} K, {} Pa: ρ = {} kg/m³, μ = {} Pa·s, k = {} W/(m·K), cp = {} J/(kg·K); ν = μ/ρ = {} m²/s, Pr = {}",
-                w.fluid,
-                g(pr.t),
-                g(pr.p),
-                g(pr.rho),
-                g(pr.mu),
-                g(pr.k),
-                g(pr.cp),
-                g(pr.nu),
-                g(pr.pr)
-            ),
+            text: property_text(w.fluid, "at", pr),
         });
     }
     let at = if rec.reference == crate::engine::correlations::Reference::Film {

@@ -2,6 +2,8 @@
 //! Budgets (README, Performance): one property set ≤ 1 µs; all correlations of one shape for one
 //! state, properties included, ≤ 1 µs; a full scenario evaluation (with its working) recorded.
 
+mod field_job;
+
 use criterion::{black_box, criterion_group, criterion_main, Criterion};
 use leeward::engine::props::{air, glycol, humid_air, water, Glycol, Humidity};
 use leeward::engine::scenario::{evaluate, DEMO};
@@ -80,29 +82,7 @@ fn correlations(c: &mut Criterion) {
 /// The field job: properties, correlations, two insulation layers, radiation and the solve
 /// (budget 5 µs median), and a thickness inverse (budget 100 µs).
 fn field_job(c: &mut Criterion) {
-    use leeward::engine::scenario::{SurfaceMode, DEMO};
-    let mut s = DEMO;
-    s.surface_mode = SurfaceMode::Solved;
-    s.layer_count = 2;
-    let job = leeward::engine::heatloss::Job {
-        stream: leeward::engine::body::Body {
-            shape: s.shape,
-            axis: s.axis,
-            wind: s.wind,
-            d: s.diameter,
-            length: s.length,
-            speed: s.speed,
-            t_inf: s.fluid_temp,
-            t_s: 0.0,
-            p: s.pressure,
-            fluid: leeward::engine::props::Fluid::DryAir,
-        },
-        process_temp: 453.15,
-        h_inside: None,
-        construction: s.construction(),
-        emissivity: 0.9,
-        t_surround: 268.15,
-    };
+    let job = field_job::job();
     c.bench_function("field job: two layers, radiation, the solve", |b| {
         b.iter(|| leeward::engine::heatloss::solve(black_box(&job)).unwrap())
     });

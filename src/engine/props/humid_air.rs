@@ -134,6 +134,19 @@ pub struct Moisture {
 
 /// Resolve the humidity at air temperature `t` (K) and pressure `p` (Pa).
 pub fn moisture(t: f64, p: f64, h: Humidity) -> Result<Moisture, EngineError> {
+    let (pv, ps) = vapour(t, p, h)?;
+    let dew = if pv > 0.0 { dew_point(pv) } else { 0.0 };
+    Ok(Moisture {
+        vapour_pressure: pv,
+        mole_fraction: pv / p,
+        dew_point: dew,
+        relative_humidity: pv / ps,
+    })
+}
+
+/// The vapour pressure for this humidity and the saturation pressure at `t`, Pa, with every check
+/// of [`moisture`] but without the dew point (a root search the properties do not need).
+fn vapour(t: f64, p: f64, h: Humidity) -> Result<(f64, f64), EngineError> {
     finite("air temperature", t)?;
     finite("air pressure", p)?;
     let ps = psat(t);
@@ -208,13 +221,7 @@ pub fn moisture(t: f64, p: f64, h: Humidity) -> Result<Moisture, EngineError> {
             why: "is at or above the total pressure: the air cannot hold that much water",
         });
     }
-    let dew = if pv > 0.0 { dew_point(pv) } else { 0.0 };
-    Ok(Moisture {
-        vapour_pressure: pv,
-        mole_fraction: pv / p,
-        dew_point: dew,
-        relative_humidity: pv / ps,
-    })
+    Ok((pv, ps))
 }
 
 /// Wilke's Φ_ij for the pair (i, j).
@@ -224,9 +231,9 @@ fn phi(mu_i: f64, mu_j: f64, m_i: f64, m_j: f64) -> f64 {
 
 /// Properties of humid air at T (K), p (Pa).
 pub fn properties(t: f64, p: f64, h: Humidity) -> Result<Properties, EngineError> {
-    let m = moisture(t, p, h)?;
-    let dry = air::properties(t, p * (1.0 - m.mole_fraction))?;
-    let xv = m.mole_fraction;
+    let (pv, _) = vapour(t, p, h)?;
+    let xv = pv / p;
+    let dry = air::properties(t, p * (1.0 - xv))?;
     let xa = 1.0 - xv;
     let mut flags = dry.flags.clone();
     if xv == 0.0 {
@@ -239,8 +246,8 @@ pub fn properties(t: f64, p: f64, h: Humidity) -> Result<Properties, EngineError
     }
     flags.extend(VAPOUR_T.check("water vapour properties", t, false));
     let (ma, mv) = (air::MOLAR_MASS, M_WATER);
-    let rho_v = m.vapour_pressure * mv * 1e-3 / (air::R_MOLAR * t);
-    let vap = water::region2(t, m.vapour_pressure * 1e-6);
+    let rho_v = pv * mv * 1e-3 / (air::R_MOLAR * t);
+    let vap = water::region2(t, pv * 1e-6);
     let (mu_v, k_v) = (water::viscosity(t, rho_v), water::conductivity(t, rho_v));
     let mix_mass = xa * ma + xv * mv;
     let rho = p * mix_mass * 1e-3 / (air::R_MOLAR * t);
