@@ -217,6 +217,53 @@ pub fn critical_radius(g: Geometry, k: f64, h: f64) -> f64 {
 mod tests {
     use super::*;
 
+    /// With a constant outside coefficient, the loss through one layer of constant k rises and
+    /// then falls as the layer thickens; the engine's own march and a bracketed balance put the
+    /// peak at r = k/h for a cylinder and 2k/h for a sphere (the textbook critical radius).
+    #[test]
+    fn loss_peaks_at_the_critical_radius() {
+        let (k, h, r_in, t_in, t_inf) = (0.5, 10.0, 0.01, 400.0, 300.0);
+        for g in [Geometry::Cylinder, Geometry::Sphere] {
+            let loss = |r_out: f64| -> f64 {
+                let c = Construction {
+                    geometry: g,
+                    r_in,
+                    layers: vec![Layer {
+                        thickness: r_out - r_in,
+                        k: Conductivity::constant(k),
+                    }],
+                };
+                let area = g.area(r_out);
+                let balance = |q: f64| {
+                    let ts = *c.march(t_in, q, t_inf, t_in).last().unwrap();
+                    h * area * (ts - t_inf) - q
+                };
+                crate::engine::solve::bracketed(balance, 0.0, h * area * (t_in - t_inf), 1e-13)
+                    .unwrap()
+                    .x
+            };
+            // Golden-section search for the thickest loss over r_out in (r_in, 1 m).
+            let phi = (5f64.sqrt() - 1.0) / 2.0;
+            let (mut a, mut b) = (r_in * 1.001, 1.0);
+            for _ in 0..80 {
+                let (x1, x2) = (b - phi * (b - a), a + phi * (b - a));
+                if loss(x1) > loss(x2) {
+                    b = x2;
+                } else {
+                    a = x1;
+                }
+            }
+            let peak = 0.5 * (a + b);
+            let rc = critical_radius(g, k, h);
+            assert!(
+                (peak / rc - 1.0).abs() < 1e-3,
+                "{g:?}: peak {peak}, k/h rule {rc}"
+            );
+            // Thicker than that, more insulation loses less.
+            assert!(loss(2.0 * rc) < loss(1.5 * rc) && loss(1.5 * rc) < loss(rc));
+        }
+    }
+
     #[test]
     fn constant_k_matches_the_log_law() {
         let c = Construction {
