@@ -388,7 +388,16 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
             title: "Along the run",
             ok: true,
             summary: "Outlet temperature of the flow over the run length, with the inlet's loss per degree held along it.".to_string(),
-            figures: vec![("inlet", job.process_temp, Dim::Temperature), ("outlet", t_out, Dim::Temperature), ("drop", job.process_temp - t_out, Dim::TemperatureDifference)],
+            figures: vec![
+                ("inlet", job.process_temp, Dim::Temperature),
+                ("outlet", t_out, Dim::Temperature),
+                // A line colder than its surroundings warms along the run.
+                if t_out <= job.process_temp {
+                    ("drop", job.process_temp - t_out, Dim::TemperatureDifference)
+                } else {
+                    ("rise", t_out - job.process_temp, Dim::TemperatureDifference)
+                },
+            ],
             caution: None,
         });
     }
@@ -680,5 +689,17 @@ mod tests {
         let f = r.verdicts.iter().find(|v| v.id == "flow").unwrap();
         let out = f.figures[1].1;
         assert!(out < j.process_temp && out > j.stream.t_inf);
+        assert_eq!(f.figures[2].0, "drop");
+        assert!((f.figures[2].1 - (j.process_temp - out)).abs() < 1e-12);
+        // A cold line in warmer air warms along the run: a rise, shown positive.
+        let mut cold = j.clone();
+        cold.process_temp = 263.15;
+        cold.t_surround = 288.15;
+        cold.stream.t_inf = 288.15;
+        let r = evaluate(&cold, &t, 1).unwrap();
+        let f = r.verdicts.iter().find(|v| v.id == "flow").unwrap();
+        assert!(f.figures[1].1 > 263.15 && f.figures[1].1 < 288.15);
+        assert_eq!(f.figures[2].0, "rise");
+        assert!(f.figures[2].1 > 0.0);
     }
 }

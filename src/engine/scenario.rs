@@ -110,10 +110,10 @@ impl InsideFilm {
     }
     pub fn label(&self) -> &'static str {
         match self {
-            InsideFilm::Typed => "Type it (0: the bore is at the process temperature)",
-            InsideFilm::Water => "Work it out: water flowing through",
-            InsideFilm::EthyleneGlycol => "Work it out: ethylene glycol–water flowing through",
-            InsideFilm::PropyleneGlycol => "Work it out: propylene glycol–water flowing through",
+            InsideFilm::Typed => "Typed below (0: none)",
+            InsideFilm::Water => "Flow of water",
+            InsideFilm::EthyleneGlycol => "Flow of ethylene glycol–water",
+            InsideFilm::PropyleneGlycol => "Flow of propylene glycol–water",
         }
     }
     pub fn from_id(id: &str) -> Option<Self> {

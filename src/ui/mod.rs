@@ -363,7 +363,7 @@ pub fn App() -> impl IntoView {
             .collect_view();
         view! {
             <div class="field" class:hidden=move || !scenario.with(|s| s.solved() && s.shape == Shape::Cylinder)>
-                <label for="in-inside">"Inside film"<small>"worked out from the flow set under 4 · The job"</small></label>
+                <label for="in-inside">"Inside film"<small>"typed, or worked out from the flow set under 4 · The job"</small></label>
                 <select id="in-inside" class="wide" data-choice="inside" on:change=move |ev| {
                     if let Some(m) = InsideFilm::from_id(&event_target_value(&ev)) {
                         scenario.update(|s| s.inside = m);

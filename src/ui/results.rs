@@ -472,7 +472,7 @@ fn cross_section(j: &crate::engine::scenario::JobResult, c: &UnitChoice) -> impl
         r += t;
         faces.push(r);
     }
-    let scale = 80.0 / r_out.max(1e-9);
+    let scale = 70.0 / r_out.max(1e-9);
     let mut px: Vec<f64> = faces.iter().map(|r| r * scale).collect();
     for i in 1..px.len() {
         if px[i] - px[i - 1] < 3.0 {
@@ -483,7 +483,7 @@ fn cross_section(j: &crate::engine::scenario::JobResult, c: &UnitChoice) -> impl
         .rev()
         .map(|i| {
             let class = if i == 0 { "ring wall" } else { "ring ins" };
-            view! { <circle cx="90" cy="90" r=px[i + 1] class=class/> }
+            view! { <circle cx="80" cy="90" r=px[i + 1] class=class/> }
         })
         .collect_view();
     let temps = std::iter::once(sol.t_bore)
@@ -491,19 +491,20 @@ fn cross_section(j: &crate::engine::scenario::JobResult, c: &UnitChoice) -> impl
         .enumerate()
         .map(|(i, t)| {
             let y = 20.0 + 18.0 * i as f64;
+            // Short names here (the list below the drawing gives them in full).
             let name = match i {
                 0 => "bore".to_string(),
                 k if k == n => "surface".to_string(),
-                1 => "outside of the wall".to_string(),
-                k => format!("outside of layer {}", k - 1),
+                1 => "wall".to_string(),
+                k => format!("layer {}", k - 1),
             };
-            view! { <text x="190" y=y class="tick">{format!("{name}: {}", with_unit(t, Dim::Temperature, c))}</text> }
+            view! { <text x="165" y=y class="tick">{format!("{name}: {}", with_unit(t, Dim::Temperature, c))}</text> }
         })
         .collect_view();
     view! {
-        <svg viewBox="0 0 420 180" class="section" role="img" aria-label="Cross-section of the wall and insulation with the temperature at each face">
+        <svg viewBox="0 0 360 180" class="section" role="img" aria-label="Cross-section of the wall and insulation with the temperature at each face">
             {rings}
-            <circle cx="90" cy="90" r=px[0] class="ring bore"/>
+            <circle cx="80" cy="90" r=px[0] class="ring bore"/>
             {temps}
         </svg>
     }
