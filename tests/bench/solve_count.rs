@@ -7,8 +7,8 @@
 //!         target/native/examples/solve_count solve 1000
 //!     callgrind_annotate /tmp/cg.out | head -40
 //!
-//! The argument picks the work (`solve`, `inverse`, or `demo`: the demo scenario's whole
-//! evaluation) and the count.
+//! The argument picks the work (`solve`, `inverse`, `demo`: the demo scenario's whole evaluation,
+//! or `water`: every cylinder correlation in water) and the count.
 
 #[path = "field_job.rs"]
 mod field_job;
@@ -27,6 +27,23 @@ fn main() {
     let mut iterations = 0;
     for _ in 0..n {
         match what.as_str() {
+            "water" => {
+                // The criterion benchmark's cylinder in water: every correlation, three IF97 sets.
+                use leeward::engine::body::{analyse, Axis, Body, Shape, Wind};
+                let b = Body {
+                    shape: Shape::Cylinder,
+                    axis: Axis::Horizontal,
+                    wind: Wind::Horizontal,
+                    d: 0.0603,
+                    length: 12.0,
+                    speed: 3.0,
+                    t_inf: 288.15,
+                    t_s: 338.15,
+                    p: 101_325.0,
+                    fluid: leeward::engine::props::Fluid::Water,
+                };
+                sum += analyse(black_box(&b)).expect("analyses").h;
+            }
             "demo" => {
                 let o = leeward::engine::scenario::evaluate(black_box(
                     &leeward::engine::scenario::DEMO,
