@@ -44,7 +44,7 @@ fn properties(c: &mut Criterion) {
 /// All correlations of one shape for one state, the three property sets (film, free stream,
 /// surface) included: budget 1 µs native.
 fn correlations(c: &mut Criterion) {
-    use leeward::engine::body::{analyse, Axis, Body, Shape, Wind};
+    use leeward::engine::body::{analyse, Shape};
     use leeward::engine::props::Fluid;
     for (name, shape, fluid) in [
         (
@@ -63,18 +63,7 @@ fn correlations(c: &mut Criterion) {
             Fluid::Water,
         ),
     ] {
-        let b = Body {
-            shape,
-            axis: Axis::Horizontal,
-            wind: Wind::Horizontal,
-            d: 0.0603,
-            length: 12.0,
-            speed: 3.0,
-            t_inf: 288.15,
-            t_s: 338.15,
-            p: 101_325.0,
-            fluid,
-        };
+        let b = field_job::body(shape, fluid);
         c.bench_function(name, |bch| bch.iter(|| analyse(black_box(&b)).unwrap()));
     }
 }

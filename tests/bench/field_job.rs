@@ -1,8 +1,8 @@
-//! The field job the benchmarks time, shared by `engine.rs` (criterion) and `solve_count.rs`
-//! (instruction counts): the demo line with two insulation layers, 180 °C inside, in dry air under
-//! a 268 K sky.
+//! The work the benchmarks time, shared by `engine.rs` (criterion) and `solve_count.rs`
+//! (instruction counts): the field job (the demo line with two insulation layers, 180 °C inside,
+//! in dry air under a 268 K sky) and the body the correlation benchmarks analyse.
 
-use leeward::engine::body::Body;
+use leeward::engine::body::{Axis, Body, Shape, Wind};
 use leeward::engine::heatloss::Job;
 use leeward::engine::props::Fluid;
 use leeward::engine::scenario::{SurfaceMode, DEMO};
@@ -29,5 +29,21 @@ pub fn job() -> Job {
         construction: s.construction(),
         emissivity: 0.9,
         t_surround: 268.15,
+    }
+}
+
+/// A 60.3 mm body, level, in a 3 m/s stream at 15 °C with its surface at 65 °C.
+pub fn body(shape: Shape, fluid: Fluid) -> Body {
+    Body {
+        shape,
+        axis: Axis::Horizontal,
+        wind: Wind::Horizontal,
+        d: 0.0603,
+        length: 12.0,
+        speed: 3.0,
+        t_inf: 288.15,
+        t_s: 338.15,
+        p: 101_325.0,
+        fluid,
     }
 }

@@ -29,19 +29,8 @@ fn main() {
         match what.as_str() {
             "water" => {
                 // The criterion benchmark's cylinder in water: every correlation, three IF97 sets.
-                use leeward::engine::body::{analyse, Axis, Body, Shape, Wind};
-                let b = Body {
-                    shape: Shape::Cylinder,
-                    axis: Axis::Horizontal,
-                    wind: Wind::Horizontal,
-                    d: 0.0603,
-                    length: 12.0,
-                    speed: 3.0,
-                    t_inf: 288.15,
-                    t_s: 338.15,
-                    p: 101_325.0,
-                    fluid: leeward::engine::props::Fluid::Water,
-                };
+                use leeward::engine::body::{analyse, Shape};
+                let b = field_job::body(Shape::Cylinder, leeward::engine::props::Fluid::Water);
                 sum += analyse(black_box(&b)).expect("analyses").h;
             }
             "demo" => {
