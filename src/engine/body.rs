@@ -203,7 +203,7 @@ impl Estimate {
 
     /// Inside every published range (near-edge notes allowed).
     pub fn valid(&self) -> bool {
-        self.flags.iter().all(|f| f.kind != FlagKind::Outside)
+        inside_ranges(&self.flags)
     }
 }
 
@@ -289,10 +289,7 @@ pub fn analyse_given_free(
 
     let mut forced = Vec::with_capacity(4);
     for c in b.shape.forced() {
-        let at = match c.reference {
-            Reference::Film => &film,
-            Reference::FreeStream => &free,
-        };
+        let at = at_reference(c.reference, &film, &free);
         let groups = groups_at(b, at, &surface, gas);
         let nu = (c.nu)(&groups);
         let value = finite_result("Nusselt number", nu.value)?;
@@ -436,10 +433,7 @@ pub fn h_given_free(b: &Body, fixed: usize, free: &Properties) -> Result<f64, En
     let film = b.fluid.at(0.5 * (b.t_s + b.t_inf), b.p)?;
     let list = b.shape.forced();
     let c = &list[fixed.min(list.len() - 1)];
-    let at = match c.reference {
-        Reference::Film => &film,
-        Reference::FreeStream => free,
-    };
+    let at = at_reference(c.reference, &film, free);
     let air = matches!(b.fluid, Fluid::DryAir | Fluid::HumidAir(_));
     let groups = if c.surface || !air {
         let surface = b.fluid.at(b.t_s, b.p)?;
@@ -465,21 +459,32 @@ pub fn h_given_free(b: &Body, fixed: usize, free: &Properties) -> Result<f64, En
     .0)
 }
 
+/// No flag says a value lies outside its range (near-edge notes allowed): the rule that makes a
+/// correlation eligible for the recommendation.
+fn inside_ranges(flags: &[Flag]) -> bool {
+    flags.iter().all(|f| f.kind != FlagKind::Outside)
+}
+
+/// The properties a correlation with this reference temperature takes.
+fn at_reference<'a>(r: Reference, film: &'a Properties, free: &'a Properties) -> &'a Properties {
+    match r {
+        Reference::Film => film,
+        Reference::FreeStream => free,
+    }
+}
+
 /// The index of the forced correlation [`analyse_given_free`] would recommend for this body:
-/// the first in the shape's order inside all its ranges (0 when none is). The same rule on the
-/// same numbers, without the estimates' text or the natural-convection part.
+/// the first in the shape's order inside all its ranges (0 when none is). The same rule
+/// ([`inside_ranges`]) on the same numbers, without the estimates' text or the natural part.
 pub fn recommended_given_free(b: &Body, free: &Properties) -> Result<usize, EngineError> {
     let film = b.fluid.at(0.5 * (b.t_s + b.t_inf), b.p)?;
     let surface = b.fluid.at(b.t_s, b.p)?;
     let gas = b.fluid.is_gas();
     for (i, c) in b.shape.forced().iter().enumerate() {
-        let at = match c.reference {
-            Reference::Film => &film,
-            Reference::FreeStream => free,
-        };
+        let at = at_reference(c.reference, &film, free);
         let nu = (c.nu)(&groups_at(b, at, &surface, gas));
         finite_result("Nusselt number", nu.value)?;
-        if nu.flags.iter().all(|f| f.kind != FlagKind::Outside) {
+        if inside_ranges(&nu.flags) {
             return Ok(i);
         }
     }

@@ -72,8 +72,7 @@ pub fn surface_loss_with(
     fixed: Option<usize>,
     free: Option<&Properties>,
 ) -> Result<SurfaceLoss, EngineError> {
-    let (area, q_rad, body) = at_surface(stream, d, ts, emissivity, t_sur);
-    let h_rad = emissivity * SIGMA * (ts * ts + t_sur * t_sur) * (ts + t_sur);
+    let (area, q_rad, h_rad, body) = at_surface(stream, d, ts, emissivity, t_sur);
     let Some(body) = body else {
         return Ok(SurfaceLoss {
             q_conv: 0.0,
@@ -96,15 +95,41 @@ pub fn surface_loss_with(
     })
 }
 
+/// The linearised radiation coefficient εσ(Ts² + Tsur²)(Ts + Tsur), W/(m²·K).
+pub fn radiation_coefficient(emissivity: f64, ts: f64, t_sur: f64) -> f64 {
+    emissivity * SIGMA * (ts * ts + t_sur * t_sur) * (ts + t_sur)
+}
+
+/// The body with its surface at `ts` and diameter `d` — none when Ts = T∞ (no convection).
+fn body_at(stream: &Body, d: f64, ts: f64) -> Option<Body> {
+    ((ts - stream.t_inf).abs() >= 1e-9).then_some(Body {
+        d,
+        t_s: ts,
+        ..*stream
+    })
+}
+
+/// The forced correlation a surface at `ts` would recommend (none without convection).
+fn recommended_at(
+    stream: &Body,
+    d: f64,
+    ts: f64,
+    free: &Properties,
+) -> Result<Option<usize>, EngineError> {
+    body_at(stream, d, ts)
+        .map(|b| body::recommended_given_free(&b, free))
+        .transpose()
+}
+
 /// The outer surface (per metre for cylinders and prisms, m; whole for a sphere, m²), the heat it
-/// radiates at `ts`, and the body at that surface temperature — none when Ts = T∞ (no convection).
+/// radiates at `ts`, the radiation coefficient, and the body at that surface temperature.
 fn at_surface(
     stream: &Body,
     d: f64,
     ts: f64,
     emissivity: f64,
     t_sur: f64,
-) -> (f64, f64, Option<Body>) {
+) -> (f64, f64, f64, Option<Body>) {
     let area = if stream.shape.is_sphere() {
         std::f64::consts::PI * d * d
     } else {
@@ -115,12 +140,12 @@ fn at_surface(
             * d
     };
     let q_rad = area * emissivity * SIGMA * (ts.powi(4) - t_sur.powi(4));
-    let body = ((ts - stream.t_inf).abs() >= 1e-9).then_some(Body {
-        d,
-        t_s: ts,
-        ..*stream
-    });
-    (area, q_rad, body)
+    (
+        area,
+        q_rad,
+        radiation_coefficient(emissivity, ts, t_sur),
+        body_at(stream, d, ts),
+    )
 }
 
 /// As [`surface_loss`] without the full analysis (`analysis` is `None`; the numbers are the
@@ -133,18 +158,7 @@ pub fn surface_loss_lean(
     t_sur: f64,
 ) -> Result<SurfaceLoss, EngineError> {
     let free = stream.fluid.at(stream.t_inf, stream.p)?;
-    let fixed = if (ts - stream.t_inf).abs() < 1e-9 {
-        None
-    } else {
-        Some(body::recommended_given_free(
-            &Body {
-                d,
-                t_s: ts,
-                ..*stream
-            },
-            &free,
-        )?)
-    };
+    let fixed = recommended_at(stream, d, ts, &free)?;
     surface_lean(stream, d, ts, emissivity, t_sur, fixed, &free)
 }
 
@@ -164,8 +178,7 @@ fn surface_lean(
         l.analysis = None;
         return Ok(l);
     };
-    let (area, q_rad, body) = at_surface(stream, d, ts, emissivity, t_sur);
-    let h_rad = emissivity * SIGMA * (ts * ts + t_sur * t_sur) * (ts + t_sur);
+    let (area, q_rad, h_rad, body) = at_surface(stream, d, ts, emissivity, t_sur);
     let h = match body {
         Some(body) => body::h_given_free(&body, i, free)?,
         None => 0.0,
@@ -223,22 +236,14 @@ fn solve_as(job: &Job, full: bool) -> Result<Solution, EngineError> {
     let s = &job.stream;
     let free = s.fluid.at(s.t_inf, s.p)?;
     let d = 2.0 * job.construction.r_out();
-    // The correlation the surface at `ts` would recommend (none when it is at the air's
-    // temperature: no convection).
-    let recommended_at = |ts: f64| -> Result<Option<usize>, EngineError> {
-        if (ts - s.t_inf).abs() < 1e-9 {
-            return Ok(None);
-        }
-        body::recommended_given_free(&Body { d, t_s: ts, ..*s }, &free).map(Some)
-    };
-    let start = recommended_at(job.process_temp)?;
+    let start = recommended_at(s, d, job.process_temp, &free)?;
     let first = solve_fixed(job, start, &free)?;
-    let at_first = recommended_at(first.t_surface)?;
+    let at_first = recommended_at(s, d, first.t_surface, &free)?;
     let (core, fixed, switched) = if at_first.is_none() || at_first == start {
         (first, start, false)
     } else {
         let second = solve_fixed(job, at_first, &free)?;
-        let switched = recommended_at(second.t_surface)? != at_first;
+        let switched = recommended_at(s, d, second.t_surface, &free)? != at_first;
         (second, at_first, switched)
     };
     let loss = if full {

@@ -1050,8 +1050,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
     let rec = a.recommended().clone();
     let h = a.h;
     let dt = ts - s.fluid_temp;
-    let h_rad =
-        s.emissivity * SIGMA * (ts * ts + s.t_surround * s.t_surround) * (ts + s.t_surround);
+    let h_rad = crate::engine::heatloss::radiation_coefficient(s.emissivity, ts, s.t_surround);
     let rad_flux = s.emissivity * SIGMA * (ts.powi(4) - s.t_surround.powi(4));
     let (area_unit, run) = match s.shape.perimeter_over_d() {
         Some(k) => (k * outer_d, s.length),
