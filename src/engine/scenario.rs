@@ -7,7 +7,7 @@
 use crate::engine::atmosphere;
 use crate::engine::body::{self, Analysis, Body};
 pub use crate::engine::body::{Axis, Shape, Wind};
-use crate::engine::correlations::internal::{liquid_pressure, pipe_flow, PipeFlow};
+use crate::engine::correlations::internal::{pipe_flow, process_properties, PipeFlow};
 use crate::engine::error::{finite_result, EngineError};
 use crate::engine::heatloss::{Job, SIGMA};
 use crate::engine::job::Targets;
@@ -118,6 +118,36 @@ impl InsideFilm {
     }
     pub fn from_id(id: &str) -> Option<Self> {
         Self::ALL.into_iter().find(|m| m.id() == id)
+    }
+}
+
+/// The inside film as a scenario has it, once worked out.
+#[derive(Debug, Clone, PartialEq)]
+pub enum Inside {
+    /// Typed (0: none): the job takes `h_inside` as it stands.
+    Typed,
+    /// A process fluid is chosen but nothing flows: the bore is at the process temperature.
+    Still(Properties),
+    /// Worked out from the flow through the bore.
+    Flowing(PipeFlow),
+}
+
+impl Inside {
+    /// The process fluid's properties at the process temperature, when a fluid is chosen.
+    pub fn props(&self) -> Option<&Properties> {
+        match self {
+            Inside::Typed => None,
+            Inside::Still(p) => Some(p),
+            Inside::Flowing(f) => Some(&f.props),
+        }
+    }
+    /// The range flags of the process fluid and of the inside correlation.
+    pub fn flags(&self) -> &[Flag] {
+        match self {
+            Inside::Typed => &[],
+            Inside::Still(p) => &p.flags,
+            Inside::Flowing(f) => &f.flags,
+        }
     }
 }
 
@@ -544,6 +574,7 @@ impl Scenario {
             Field::SurfaceTemp => !self.solved(),
             Field::ProcessTemp | Field::WallThickness => self.solved(),
             Field::HInside => self.solved() && !self.inside_computed(),
+            Field::MassFlow | Field::LossTarget => self.offers_inside_film(),
             Field::ProcessGlycol => {
                 self.inside_computed()
                     && matches!(
@@ -565,13 +596,8 @@ impl Scenario {
             Field::Layer3T | Field::Layer3Ka | Field::Layer3Kb | Field::Layer3Kc => {
                 self.solved() && self.layer_count >= 3
             }
-            Field::MassFlow | Field::LossTarget => self.solved() && self.shape == Shape::Cylinder,
-            Field::FreezeTarget => {
-                self.solved() && self.shape == Shape::Cylinder && self.mass_flow == 0.0
-            }
-            Field::ProcessCp => {
-                self.solved() && self.shape == Shape::Cylinder && !self.inside_computed()
-            }
+            Field::FreezeTarget => self.offers_inside_film() && self.mass_flow == 0.0,
+            Field::ProcessCp => self.offers_inside_film() && !self.inside_computed(),
             Field::CoolTarget => self.cools(),
             _ => true,
         }
@@ -591,9 +617,15 @@ impl Scenario {
             && matches!(self.shape, Shape::Cylinder | Shape::Sphere)
     }
 
+    /// A pipe carrying a process fluid, solved from inside: the flow, the inside-film choice, the
+    /// loss and freezing targets apply (not to a sphere or a typed surface).
+    pub fn offers_inside_film(&self) -> bool {
+        self.solved() && self.shape == Shape::Cylinder
+    }
+
     /// Whether the inside film is worked out from a process fluid's flow (solved pipes only).
     pub fn inside_computed(&self) -> bool {
-        self.solved() && self.shape == Shape::Cylinder && self.inside != InsideFilm::Typed
+        self.offers_inside_film() && self.inside != InsideFilm::Typed
     }
 
     /// The process fluid whose flow sets the inside film, when it is worked out.
@@ -608,33 +640,34 @@ impl Scenario {
         })
     }
 
-    /// The process fluid at the process temperature and, with a flow through the bore, the
-    /// inside film it makes. `Ok(None)` when the film is typed; the flow part is `None` for still
-    /// fluid (the bore then sits at the process temperature) or a bore the wall leaves no room for.
-    pub fn inside_flow(&self) -> Result<Option<(Properties, Option<PipeFlow>)>, EngineError> {
+    /// The inside film: typed, or the process fluid at the process temperature and, with a flow
+    /// through the bore, the film it makes. A bore the wall leaves no room for is left to the
+    /// construction's own check.
+    pub fn inside_flow(&self) -> Result<Inside, EngineError> {
         let Some(fluid) = self.process_fluid() else {
-            return Ok(None);
+            return Ok(Inside::Typed);
         };
-        let t = self.process_temp;
-        let props = fluid
-            .at(t, liquid_pressure(&fluid, t))
-            .map_err(|e| match e {
-                EngineError::WrongPhase {
-                    t, boundary, why, ..
-                } => EngineError::WrongPhase {
-                    asked: PROCESS_FLUID,
-                    t,
-                    boundary,
-                    why,
-                },
-                other => other,
-            })?;
+        let props = process_properties(&fluid, self.process_temp).map_err(|e| match e {
+            EngineError::WrongPhase {
+                t, boundary, why, ..
+            } => EngineError::WrongPhase {
+                asked: PROCESS_FLUID,
+                t,
+                boundary,
+                why,
+            },
+            other => other,
+        })?;
         let d_in = self.diameter - 2.0 * self.wall_thickness;
         if self.mass_flow <= 0.0 || d_in <= 0.0 {
-            return Ok(Some((props, None)));
+            return Ok(Inside::Still(props));
         }
-        let flow = pipe_flow(&fluid, t, self.mass_flow, d_in, self.length)?;
-        Ok(Some((props, Some(flow))))
+        Ok(Inside::Flowing(pipe_flow(
+            props,
+            self.mass_flow,
+            d_in,
+            self.length,
+        )?))
     }
 
     /// Whether the lumped cooling of a solid round bar or sphere is offered (surface typed).
@@ -733,12 +766,14 @@ impl Scenario {
         }
     }
 
-    /// As [`Scenario::job`], with the inside film worked out from the flow (`Some`, see
-    /// [`Scenario::inside_flow`]) in place of the typed one.
-    pub fn job_with(&self, stream: Body, h_inside: Option<Option<f64>>) -> Job {
+    /// As [`Scenario::job`], with the inside film of [`Scenario::inside_flow`] in place of the
+    /// typed one when a process fluid is chosen.
+    pub fn job_with(&self, stream: Body, inside: &Inside) -> Job {
         let mut j = self.job(stream);
-        if let Some(h) = h_inside {
-            j.h_inside = h;
+        match inside {
+            Inside::Typed => {}
+            Inside::Still(_) => j.h_inside = None,
+            Inside::Flowing(f) => j.h_inside = Some(f.h),
         }
         j
     }
@@ -959,7 +994,6 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
     };
     let stream = s.stream(p, fluid);
     let inside = s.inside_flow()?;
-    let h_inside = inside.as_ref().map(|(_, flow)| flow.as_ref().map(|f| f.h));
     let targets = Targets {
         touch_limit: s.touch_limit,
         dew_point,
@@ -968,7 +1002,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         price: s.price,
         efficiency: s.efficiency,
         mass_flow: s.mass_flow,
-        process_cp: inside.as_ref().map(|(pr, _)| pr.cp).unwrap_or(s.process_cp),
+        process_cp: inside.props().map(|pr| pr.cp).unwrap_or(s.process_cp),
         process_water: !matches!(s.process_fluid(), Some(Fluid::Glycol(..))),
         wall_heat_capacity: s.wall.properties().map(|(_, rho, cp)| {
             let r1 = s.diameter / 2.0;
@@ -999,9 +1033,9 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
                     "the third data-sheet point needs its own mean temperature, apart from A and B",
             });
         }
-        let job = s.job_with(stream, h_inside);
+        let job = s.job_with(stream, &inside);
         let mut r = crate::engine::job::evaluate(&job, &targets, s.layer_count)?;
-        if let Some((_, None)) = &inside {
+        if let Inside::Still(_) = &inside {
             r.notes.push("No flow through the pipe: the inside film is not worked out, and the bore is taken at the process temperature (still fluid).".into());
         }
         let a = r
@@ -1026,7 +1060,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
                 .filter_map(|x| {
                     let mut t = *s;
                     t.layer_t[i] = x;
-                    let o = quick(&t, p, fluid, h_inside).ok()?;
+                    let o = quick(&t, p, fluid, &inside).ok()?;
                     (o.0.is_finite() && o.1.is_finite()).then_some((x, o.0, o.1))
                 })
                 .collect()
@@ -1042,7 +1076,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
     .filter_map(|u| {
         let mut t = *s;
         t.speed = u;
-        let o = quick(&t, p, fluid, h_inside).ok()?;
+        let o = quick(&t, p, fluid, &inside).ok()?;
         (o.0.is_finite() && o.1.is_finite() && o.2.is_finite()).then_some((u, o.2, o.0, o.1))
     })
     .collect();
@@ -1098,12 +1132,9 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         flags.extend(n.flags.iter().cloned());
     }
     flags.extend(a.flags.iter().cloned());
-    if let Some((props, flow)) = &inside {
-        let more = flow.as_ref().map(|f| &f.flags).unwrap_or(&props.flags);
-        for f in more {
-            if !flags.contains(f) {
-                flags.push(f.clone());
-            }
+    for f in inside.flags() {
+        if !flags.contains(f) {
+            flags.push(f.clone());
         }
     }
 
@@ -1118,7 +1149,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         h_rad,
         q_total,
         job: job_result.as_ref(),
-        inside: inside.as_ref(),
+        inside: &inside,
     };
     let working = if sweeps {
         working(s, &a, &w)
@@ -1164,7 +1195,10 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         surface_temp: ts,
         outer_d,
         job: job_result,
-        inside: inside.and_then(|(_, f)| f),
+        inside: match inside {
+            Inside::Flowing(f) => Some(f),
+            _ => None,
+        },
         verdicts,
         annual_energy,
         annual_cost,
@@ -1195,7 +1229,7 @@ fn quick(
     s: &Scenario,
     p: f64,
     fluid: Fluid,
-    h_inside: Option<Option<f64>>,
+    inside: &Inside,
 ) -> Result<(f64, f64, f64), EngineError> {
     let stream = s.stream(p, fluid);
     let run = if s.shape == Shape::Sphere {
@@ -1204,7 +1238,7 @@ fn quick(
         s.length
     };
     if s.solved() {
-        let job = s.job_with(stream, h_inside);
+        let job = s.job_with(stream, inside);
         let sol = crate::engine::heatloss::solve_lean(&job)?;
         Ok((sol.q * run, sol.t_surface, sol.loss.h_conv))
     } else {
@@ -1230,7 +1264,7 @@ struct WorkingInputs<'a> {
     h_rad: f64,
     q_total: f64,
     job: Option<&'a JobResult>,
-    inside: Option<&'a (Properties, Option<PipeFlow>)>,
+    inside: &'a Inside,
 }
 
 /// Touch and condensation verdicts for a typed surface temperature (no thickness to offer).
@@ -1287,15 +1321,14 @@ fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step> {
     let g = |v: f64| format_sig(v, 5);
     let rec = a.recommended();
     let mut out = Vec::new();
-    if let Some((pr, flow)) = w.inside {
+    if let Some(pr) = w.inside.props() {
         let props = property_text(
             s.process_fluid().map(|f| f.name()).unwrap_or(""),
             "at the process temperature",
             pr,
         );
-        let text = match flow {
-            None => format!("{props}. No flow through the bore: the inside film is not worked out; the bore is at the process temperature."),
-            Some(f) => {
+        let text = match w.inside {
+            Inside::Flowing(f) => {
                 let formula = match f.regime {
                     crate::engine::correlations::internal::PipeRegime::Laminar => format!(
                         "Baehr & Stephan: Gz = (d/L)·Re·Pr = {}; Nu = [3.657/tanh(2.264·Gz^−⅓ + 1.7·Gz^−⅔) + 0.0499·Gz·tanh(1/Gz)] / tanh(2.432·Pr^⅙·Gz^−⅙)",
@@ -1323,6 +1356,7 @@ fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step> {
                     g(f.h)
                 )
             }
+            _ => format!("{props}. No flow through the bore: the inside film is not worked out; the bore is at the process temperature."),
         };
         out.push(Step {
             title: "Inside film (flow through the bore)",
@@ -1538,7 +1572,7 @@ pub fn to_fragment(s: &Scenario, system: System) -> String {
     }
     if s.solved() {
         out.push_str(&format!("&wm={}&nl={}", s.wall.id(), s.layer_count));
-        if s.shape == Shape::Cylinder {
+        if s.offers_inside_film() {
             out.push_str(&format!("&hf={}", s.inside.id()));
         }
     } else if s.cools() {
@@ -1899,8 +1933,7 @@ mod tests {
         let f = o.inside.as_ref().expect("a flow makes an inside film");
         let d_in = s.diameter - 2.0 * s.wall_thickness;
         let by_hand = crate::engine::correlations::internal::pipe_flow(
-            &Fluid::Water,
-            353.15,
+            process_properties(&Fluid::Water, 353.15).unwrap(),
             2.0,
             d_in,
             s.length,

@@ -362,7 +362,7 @@ pub fn App() -> impl IntoView {
             .map(|m| view! { <option value=m.id() prop:selected=move || scenario.with(|s| s.inside == m)>{m.label()}</option> })
             .collect_view();
         view! {
-            <div class="field" class:hidden=move || !scenario.with(|s| s.solved() && s.shape == Shape::Cylinder)>
+            <div class="field" class:hidden=move || !scenario.with(|s| s.offers_inside_film())>
                 <label for="in-inside">"Inside film"<small>"typed, or worked out from the flow set under 4 · The job"</small></label>
                 <select id="in-inside" class="wide" data-choice="inside" on:change=move |ev| {
                     if let Some(m) = InsideFilm::from_id(&event_target_value(&ev)) {

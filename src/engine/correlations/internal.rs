@@ -137,7 +137,7 @@ pub struct PipeFlow {
 
 /// The pressure a process liquid is taken at: 1 atm, or just above its saturation pressure when
 /// it is hotter than its normal boiling point (a line under pressure keeps it liquid), Pa.
-pub fn liquid_pressure(fluid: &Fluid, t: f64) -> f64 {
+fn liquid_pressure(fluid: &Fluid, t: f64) -> f64 {
     match fluid {
         Fluid::Water if t > 373.124 && t < 647.096 => {
             (crate::engine::props::water::psat_mpa(t) * 1e6 * 1.001).max(101_325.0)
@@ -146,16 +146,21 @@ pub fn liquid_pressure(fluid: &Fluid, t: f64) -> f64 {
     }
 }
 
-/// The mean inside film coefficient of `mass_flow` (kg/s) of `fluid` at bulk temperature `t` (K)
-/// through a bore of diameter `d` (m) over a run of `length` (m).
+/// A process liquid's properties at its bulk temperature `t` (K), at the pressure of
+/// [`liquid_pressure`]; an error where it is frozen or cannot be liquid.
+pub fn process_properties(fluid: &Fluid, t: f64) -> Result<Properties, EngineError> {
+    fluid.at(t, liquid_pressure(fluid, t))
+}
+
+/// The mean inside film coefficient of `mass_flow` (kg/s) of a process fluid with properties
+/// `props` (at its bulk temperature, see [`process_properties`]) through a bore of diameter `d`
+/// (m) over a run of `length` (m).
 pub fn pipe_flow(
-    fluid: &Fluid,
-    t: f64,
+    props: Properties,
     mass_flow: f64,
     d: f64,
     length: f64,
 ) -> Result<PipeFlow, EngineError> {
-    let props = fluid.at(t, liquid_pressure(fluid, t))?;
     let area = std::f64::consts::PI * d * d / 4.0;
     let velocity = mass_flow / (props.rho * area);
     let re = 4.0 * mass_flow / (std::f64::consts::PI * d * props.mu);
@@ -237,13 +242,14 @@ mod tests {
     #[test]
     fn water_in_a_pipe() {
         // 1 kg/s of water at 60 °C through a 52.5 mm bore over 20 m: turbulent, Re near 4×10⁴.
-        let f = pipe_flow(&Fluid::Water, 333.15, 1.0, 0.0525, 20.0).unwrap();
+        let water = |t: f64| process_properties(&Fluid::Water, t).unwrap();
+        let f = pipe_flow(water(333.15), 1.0, 0.0525, 20.0).unwrap();
         assert_eq!(f.regime, PipeRegime::Turbulent);
         assert!(f.re > 3e4 && f.re < 6e4, "{}", f.re);
         assert!(f.flags.is_empty(), "{:?}", f.flags);
         assert!(f.h > 2000.0 && f.h < 10_000.0, "{}", f.h);
         // Water above its normal boiling point is taken at its saturation pressure and stays liquid.
-        let hot = pipe_flow(&Fluid::Water, 423.15, 1.0, 0.0525, 20.0).unwrap();
+        let hot = pipe_flow(water(423.15), 1.0, 0.0525, 20.0).unwrap();
         assert!(
             hot.props.p > 4.7e5 && hot.props.p < 4.8e5,
             "{}",
@@ -254,11 +260,17 @@ mod tests {
     #[test]
     fn cold_glycol_is_laminar_and_frozen_glycol_is_refused() {
         let g = Fluid::Glycol(Glycol::Propylene, 0.4);
-        let f = pipe_flow(&g, 263.15, 0.05, 0.0525, 20.0).unwrap();
+        let f = pipe_flow(process_properties(&g, 263.15).unwrap(), 0.05, 0.0525, 20.0).unwrap();
         assert_eq!(f.regime, PipeRegime::Laminar);
-        assert!(pipe_flow(&g, 240.0, 0.05, 0.0525, 20.0).is_err());
+        assert!(process_properties(&g, 240.0).is_err());
         // Out of Gnielinski's Re range: shown, and flagged.
-        let fast = pipe_flow(&Fluid::Water, 353.15, 500.0, 0.0525, 20.0).unwrap();
+        let fast = pipe_flow(
+            process_properties(&Fluid::Water, 353.15).unwrap(),
+            500.0,
+            0.0525,
+            20.0,
+        )
+        .unwrap();
         assert!(fast.flags.iter().any(|x| x.range.quantity == "Re"));
     }
 }
