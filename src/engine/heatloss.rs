@@ -408,6 +408,16 @@ fn solve_fixed(job: &Job, fixed: Option<usize>, free: &Properties) -> Result<Cor
     })
 }
 
+/// A search over the outer layer's thickness for a target: the thickness that meets it, if any,
+/// and the measure at both ends of the span searched (what to say when none meets it).
+#[derive(Debug, Clone, PartialEq)]
+pub struct Search {
+    pub found: Option<(f64, Solution)>,
+    /// The measure with no outer layer and with the thickest one searched.
+    pub at_zero: f64,
+    pub at_max: f64,
+}
+
 /// The thickness of the outermost layer that makes `measure(solution)` equal `target`, searched
 /// over 0 to `max_thickness`. `Ok(None)` when no thickness in that span meets it.
 pub fn thickness_for(
@@ -416,6 +426,17 @@ pub fn thickness_for(
     target: f64,
     measure: impl Fn(&Solution) -> f64,
 ) -> Result<Option<(f64, Solution)>, EngineError> {
+    Ok(thickness_search(job, max_thickness, target, measure)?.and_then(|s| s.found))
+}
+
+/// As [`thickness_for`], with the measure at both ends of the span; `Ok(None)` when the job has
+/// no layer to vary.
+pub fn thickness_search(
+    job: &Job,
+    max_thickness: f64,
+    target: f64,
+    measure: impl Fn(&Solution) -> f64,
+) -> Result<Option<Search>, EngineError> {
     let n = job.construction.layers.len();
     if n == 0 {
         return Ok(None);
@@ -427,16 +448,23 @@ pub fn thickness_for(
         solve_as(&j, full)
     };
     let with = |t: f64| at(t, false);
-    let f0 = measure(&with(0.0)?) - target;
-    let f1 = measure(&with(max_thickness)?) - target;
+    let (at_zero, at_max) = (measure(&with(0.0)?), measure(&with(max_thickness)?));
+    let (f0, f1) = (at_zero - target, at_max - target);
+    let search = |found| {
+        Ok(Some(Search {
+            found,
+            at_zero,
+            at_max,
+        }))
+    };
     if f0 == 0.0 {
-        return Ok(Some((0.0, at(0.0, true)?)));
+        return search(Some((0.0, at(0.0, true)?)));
     }
     if f0.signum() == f1.signum() {
-        return Ok(None);
+        return search(None);
     }
     let mut failure = None;
-    let root = solve::bracketed(
+    let root = solve::bracketed_known_ends(
         |t| match with(t) {
             Ok(s) => measure(&s) - target,
             Err(e) => {
@@ -444,16 +472,16 @@ pub fn thickness_for(
                 f64::NAN
             }
         },
-        0.0,
-        max_thickness,
+        (0.0, Some(f0)),
+        (max_thickness, Some(f1)),
         1e-9 * target.abs().max(1e-9),
     );
     if let Some(e) = failure {
         return Err(e);
     }
     match root {
-        Ok(r) => Ok(Some((r.x, at(r.x, true)?))),
-        Err(_) => Ok(None),
+        Ok(r) => search(Some((r.x, at(r.x, true)?))),
+        Err(_) => search(None),
     }
 }
 

@@ -336,22 +336,21 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
         } else if insulated_layers == 0 {
             "The loss per metre is above the target. Add an insulation layer to see the thickness that meets it.".to_string()
         } else {
-            let mut thin = job.clone();
-            thin.construction.layers[n - 1].thickness = 0.0;
-            let without = heatloss::solve_lean(&thin)?.q.abs();
-            match heatloss::thickness_for(job, 0.5, t.loss_target, |s| s.q.abs())? {
-                Some((th, _)) => {
+            let search = heatloss::thickness_search(job, 0.5, t.loss_target, |s| s.q.abs())?;
+            match search {
+                Some(heatloss::Search {
+                    found: Some((th, _)),
+                    ..
+                }) => {
                     figures.push(("outer layer thickness for the target", th, Dim::Length));
                     "The loss per metre is above the target; the outer layer would need the thickness shown.".to_string()
                 }
-                None if without <= t.loss_target => "The loss per metre is above the target, and the layer makes it worse: without the outer layer the loss is within it (the line is below the critical radius, where a thin layer adds surface faster than resistance).".to_string(),
-                None => {
-                    let mut thick = job.clone();
-                    thick.construction.layers[n - 1].thickness = 0.5;
-                    let least = heatloss::solve_lean(&thick)?.q.abs();
-                    figures.push(("loss with 0.5 m of the outer layer", least, Dim::HeatFlowPerLength));
+                Some(heatloss::Search { at_zero, .. }) if at_zero <= t.loss_target => "The loss per metre is above the target, and the layer makes it worse: without the outer layer the loss is within it (the line is below the critical radius, where a thin layer adds surface faster than resistance).".to_string(),
+                Some(heatloss::Search { at_max, .. }) => {
+                    figures.push(("loss with 0.5 m of the outer layer", at_max, Dim::HeatFlowPerLength));
                     "The loss per metre is above the target, and no outer-layer thickness up to 0.5 m meets it: the target is below what this construction can reach. A better insulant (lower k) or a lower process temperature is needed.".to_string()
                 }
+                None => "The loss per metre is above the target.".to_string(),
             }
         };
         verdicts.push(Verdict {

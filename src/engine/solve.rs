@@ -42,6 +42,17 @@ pub fn bracketed_rel(
     bracketed_until(f, a, b, |x, fx| fx.abs() <= rtol * x.abs())
 }
 
+/// As [`bracketed`], for a caller that already has f at either end (`Some(f(a))`, `Some(f(b))`):
+/// those values are used, not evaluated again.
+pub fn bracketed_known_ends(
+    f: impl FnMut(f64) -> f64,
+    (a, fa): (f64, Option<f64>),
+    (b, fb): (f64, Option<f64>),
+    ftol: f64,
+) -> Result<Root, SolveError> {
+    bracketed_known(f, (a, fa), (b, fb), |_, fx| fx.abs() <= ftol)
+}
+
 /// As [`bracketed_rel`], for a caller that already has f at either end (`Some(f(a))`,
 /// `Some(f(b))`): those values are used, not evaluated again.
 pub fn bracketed_rel_known(
