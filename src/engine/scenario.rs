@@ -944,6 +944,10 @@ pub struct Outcome {
     /// Loss and surface temperature against the outer layer's thickness (solved, with layers):
     /// (thickness m, heat flow W, surface K).
     pub thickness_sweep: Vec<(f64, f64, f64)>,
+    /// Targets to mark on the plots: on heat flow over the run (the loss target per metre times
+    /// the length), W; on surface temperature (the touch limit, the dew point plus the margin), K.
+    pub loss_marks: Vec<(&'static str, f64)>,
+    pub surface_marks: Vec<(&'static str, f64)>,
     /// Heat-transfer coefficient and heat flow against stream speed 0–20 m/s: (speed m/s,
     /// h W/(m²·K), heat flow W, surface K).
     pub wind_sweep: Vec<(f64, f64, f64, f64)>,
@@ -1204,6 +1208,14 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         annual_cost,
         thickness_sweep,
         wind_sweep,
+        loss_marks: if s.uses(Field::LossTarget) && s.loss_target > 0.0 {
+            vec![("loss target", s.loss_target * s.length)]
+        } else {
+            Vec::new()
+        },
+        surface_marks: std::iter::once(("touch limit", s.touch_limit))
+            .chain(dew_point.map(|td| ("dew point + margin", td + s.dew_margin)))
+            .collect(),
         method: rec.name,
         regime: s.shape.regime(rec.groups.re),
         analysis: a,

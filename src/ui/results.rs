@@ -365,19 +365,11 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
                     values: o.thickness_sweep.iter().map(|p| p.1).collect(),
                 },
                 Some((outer, o.q_total)),
-                if s.loss_target > 0.0 && s.shape == crate::engine::scenario::Shape::Cylinder {
-                    vec![("loss target", s.loss_target * s.length)]
-                } else {
-                    vec![]
-                },
+                o.loss_marks.clone(),
                 c,
             )
             .into_any(),
         );
-        let mut targets = vec![("touch limit", s.touch_limit)];
-        if let Some(td) = o.dew_point {
-            targets.push(("dew point + margin", td + s.dew_margin));
-        }
         out.push(
             sweep_plot(
                 "surface-thickness",
@@ -391,7 +383,7 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
                     values: o.thickness_sweep.iter().map(|p| p.2).collect(),
                 },
                 Some((outer, o.surface_temp)),
-                targets,
+                o.surface_marks.clone(),
                 c,
             )
             .into_any(),
@@ -430,7 +422,7 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
                     values: o.wind_sweep.iter().map(|p| p.3).collect(),
                 },
                 Some((s.speed, o.surface_temp)),
-                vec![("touch limit", s.touch_limit)],
+                o.surface_marks.clone(),
                 c,
             )
             .into_any(),
