@@ -2,18 +2,19 @@
 //! (every forced correlation at its own reference temperature, natural convection, the mixed
 //! blend, the recommended value and the spread).
 //!
-//! Recommendation rule (shown on the page as [`Shape::rule`]): each shape has a preference order;
-//! the recommended forced correlation is the first in that order whose published ranges all hold
-//! at the operating point, or the first of all when none holds (then flagged). The answer the page
-//! leads with is that forced value blended with natural convection (see
-//! [`crate::engine::correlations::mixed`]).
+//! Recommendation rule (shown on the page as [`Shape::rule`], written in [`crate::engine::pick`]):
+//! each shape has a preference order; the correlation inside its ranges that comes first wins,
+//! otherwise the least far outside, with a linear handover between two where one passes its
+//! limit. The answer the page leads with is that forced value blended with natural convection
+//! (see [`crate::engine::correlations::mixed`]).
 
 use crate::engine::correlations::mixed::{self, Direction};
 use crate::engine::correlations::natural::{self, Length, Natural};
 use crate::engine::correlations::{bars, cylinder, sphere, Forced, Groups, Reference, G};
 use crate::engine::error::{finite_result, EngineError};
+use crate::engine::pick::{self, Pick};
 use crate::engine::props::{Fluid, Properties};
-use crate::engine::validity::{Flag, FlagKind};
+use crate::engine::validity::{decades_outside, Flag, FlagKind};
 use std::f64::consts::PI;
 
 /// The cross-section of the body (or a sphere).
@@ -104,9 +105,9 @@ impl Shape {
     /// The recommendation rule, in words.
     pub fn rule(&self) -> &'static str {
         match self {
-            Shape::Cylinder => "Churchill–Bernstein is preferred: one equation for gases and liquids over all Re·Pr ≥ 0.2, smooth through the Reynolds bands where tabulated constants jump. Outside its range the next valid one is used, in the order Hilpert, Zukauskas, Gnielinski.",
-            Shape::Sphere => "Whitaker is preferred inside its fitted range (it carries the viscosity correction for liquids); outside it, Gnielinski's VDI form (the widest range, Nu → 2 in still fluid), then Ranz & Marshall (drops and small spheres).",
-            _ => "One published table (Jakob 1949) covers this section, for gases; it is used throughout, flagged outside its Reynolds band.",
+            Shape::Cylinder => "Churchill–Bernstein comes first: one equation for gases and liquids over all Re·Pr ≥ 0.2, smooth through the Reynolds bands where tabulated constants jump; then Hilpert, Zukauskas and Gnielinski. The first inside its published ranges is used. A Reynolds range is a hard limit; a printed Prandtl limit holds within 3 %. Where none is inside, the least far outside (in decades of Re) is used; where one passes its limit, the value moves linearly to the next over 0.3 decade beyond it (a factor 2 in Re), so it never jumps.",
+            Shape::Sphere => "Whitaker comes first (it carries the viscosity correction for liquids; in a gas that ratio's range, fitted on liquids, is shown but does not set it aside), then Achenbach's subcritical air form (to Re 2×10⁵), Gnielinski's VDI form (the widest range) and Ranz & Marshall (drops and small spheres). The first inside its published ranges is used; a printed Prandtl limit holds within 3 %. Where none is inside, the least far outside is used; where one passes its limit, the value moves linearly to the next over 0.3 decade of Re beyond it (a factor 2), so it never jumps.",
+            _ => "The current table (Sparrow, Abraham & Tong 2004, as in Incropera et al., 7th ed., Table 7.3; gases) is used throughout, flagged outside its Reynolds range. Jakob's older 1949 constants are shown below it for comparison only, never recommended.",
         }
     }
     pub fn is_sphere(&self) -> bool {
@@ -177,6 +178,10 @@ pub struct Estimate {
     /// only when shown: see [`Estimate::detail`].
     detail_of: DetailOf,
     pub flags: Vec<Flag>,
+    /// Shown for comparison only, never recommended.
+    pub alternate: bool,
+    /// How far outside its ranges, in decades (0 inside them all).
+    pub outside: f64,
 }
 
 /// A correlation's detail writer (text for the page, so not made in a solver's loop).
@@ -233,8 +238,12 @@ pub struct Analysis {
     pub free: Properties,
     pub surface: Properties,
     pub forced: Vec<Estimate>,
-    /// Index into `forced` of the recommended correlation.
+    /// Index into `forced` of the recommended correlation (the largest share of `pick`).
     pub recommended: usize,
+    /// The share of each forced correlation in the recommended value.
+    pub pick: Pick,
+    /// The recommended forced h: Σ share × h, W/(m²·K).
+    pub h_forced: f64,
     /// Lowest and highest h among the correlations inside their ranges, and how many there are.
     pub spread: Option<(f64, f64, usize)>,
     pub natural: Option<NaturalEstimate>,
@@ -252,6 +261,66 @@ impl Analysis {
     pub fn recommended(&self) -> &Estimate {
         &self.forced[self.recommended]
     }
+
+    /// Why the recommended value is what it is, in one sentence.
+    pub fn reason(&self) -> String {
+        let shares: Vec<(usize, f64)> = self.pick.shares().collect();
+        let first_listed = self.forced.iter().position(|e| !e.alternate).unwrap_or(0);
+        let worst = |e: &Estimate| {
+            e.flags
+                .iter()
+                .filter(|f| f.kind == FlagKind::Outside)
+                .max_by(|a, b| a.decades_outside().total_cmp(&b.decades_outside()))
+                .map(|f| {
+                    format!(
+                        "{} = {}",
+                        f.range.quantity,
+                        crate::engine::units::format_sig(f.value, 3)
+                    )
+                })
+                .unwrap_or_default()
+        };
+        if let [(a, _), (b, wb), ..] = shares[..] {
+            let (ea, eb) = (&self.forced[a], &self.forced[b]);
+            let (out, other, w_other) = if ea.outside >= eb.outside {
+                (ea, eb, wb)
+            } else {
+                (eb, ea, 1.0 - wb)
+            };
+            return format!(
+                "Handover: {} is just past its range ({}), so the value moves linearly from it to {} over 0.3 decade of Re beyond the limit; here {} % {} — the recommended h never jumps at a range edge.",
+                out.name,
+                worst(out),
+                other.name,
+                crate::engine::units::format_sig(100.0 * w_other, 2),
+                other.name
+            );
+        }
+        let r = self.recommended();
+        if r.outside > 0.0 {
+            format!(
+                "No correlation is inside its published ranges here: {} is the least far outside ({}), so it is used, flagged.",
+                r.name,
+                worst(r)
+            )
+        } else if self.recommended == first_listed {
+            format!(
+                "{} is inside its published ranges here and comes first in this shape's order of preference.",
+                r.name
+            )
+        } else {
+            let before: Vec<&str> = self.forced[..self.recommended]
+                .iter()
+                .filter(|e| !e.alternate)
+                .map(|e| e.name)
+                .collect();
+            format!(
+                "{} is outside its range here, so {} — the next inside its published ranges — is used.",
+                before.join(" and "),
+                r.name
+            )
+        }
+    }
     /// Which mode dominates, in words (thresholds 0.1 and 10 on Gr/Re², common practice).
     pub fn mode(&self) -> &'static str {
         match self.richardson {
@@ -268,9 +337,9 @@ pub fn analyse(b: &Body) -> Result<Analysis, EngineError> {
     analyse_with(b, None)
 }
 
-/// As [`analyse`], with the recommended correlation fixed to index `fixed` of the shape's list
-/// (a solver holds it fixed while it iterates, so that the answer is continuous in Ts).
-pub fn analyse_with(b: &Body, fixed: Option<usize>) -> Result<Analysis, EngineError> {
+/// As [`analyse`], with the recommendation fixed to `fixed` (a solver holds it fixed while it
+/// iterates, so that the answer is continuous in Ts).
+pub fn analyse_with(b: &Body, fixed: Option<Pick>) -> Result<Analysis, EngineError> {
     let free = b.fluid.at(b.t_inf, b.p)?;
     analyse_given_free(b, fixed, free)
 }
@@ -279,7 +348,7 @@ pub fn analyse_with(b: &Body, fixed: Option<usize>) -> Result<Analysis, EngineEr
 /// while a solver varies the surface temperature).
 pub fn analyse_given_free(
     b: &Body,
-    fixed: Option<usize>,
+    fixed: Option<Pick>,
     free: Properties,
 ) -> Result<Analysis, EngineError> {
     let film_t = 0.5 * (b.t_s + b.t_inf);
@@ -304,14 +373,23 @@ pub fn analyse_given_free(
             h: finite_result("heat-transfer coefficient", value * at.k / b.d)?,
             k: at.k,
             detail_of: DetailOf(c.detail),
+            outside: decades_outside(&nu.flags),
             flags: nu.flags,
+            alternate: c.alternate,
         });
     }
-    let recommended = match fixed {
-        Some(i) if i < forced.len() => i,
-        _ => forced.iter().position(Estimate::valid).unwrap_or(0),
+    let pick = match fixed {
+        Some(p) => p,
+        None => pick::pick::<EngineError>(forced.len(), |i| {
+            Ok((!forced[i].alternate).then(|| forced[i].flags.clone()))
+        })?,
     };
-    let valid: Vec<f64> = forced.iter().filter(|e| e.valid()).map(|e| e.h).collect();
+    let recommended = pick.main().min(forced.len() - 1);
+    let valid: Vec<f64> = forced
+        .iter()
+        .filter(|e| e.valid() && !e.alternate)
+        .map(|e| e.h)
+        .collect();
     let spread = (!valid.is_empty()).then(|| {
         let lo = valid.iter().cloned().fold(f64::INFINITY, f64::min);
         let hi = valid.iter().cloned().fold(f64::NEG_INFINITY, f64::max);
@@ -325,16 +403,15 @@ pub fn analyse_given_free(
         notes.push("A vertical body in a vertical stream is flow along its axis, not cross-flow: the correlations here assume the stream crosses the axis, so the stream is treated as crossing it.");
     }
     let (direction, exponent) = mixing(b, natural.as_ref());
-    let rec = &forced[recommended];
+    let at = |i: usize| {
+        forced.get(i).ok_or(EngineError::NonFiniteResult {
+            quantity: "recommended correlation",
+        })
+    };
+    let h_forced = pick.combine(|i| Ok(at(i)?.h))?;
+    let h_still = pick.combine(|i| Ok(at(i)?.nu_still * at(i)?.k / b.d))?;
     let mut flags = Vec::new();
-    let (h, flag) = blended(
-        b,
-        &film,
-        (rec.h, rec.nu_still, rec.k),
-        natural.as_ref(),
-        direction,
-        exponent,
-    )?;
+    let (h, flag) = blended((h_forced, h_still), natural.as_ref(), direction, exponent)?;
     flags.extend(flag);
     let richardson = natural.as_ref().map(|n| {
         let re = b.speed * b.d / film.nu;
@@ -347,6 +424,8 @@ pub fn analyse_given_free(
         surface,
         forced,
         recommended,
+        pick,
+        h_forced,
         spread,
         natural,
         direction,
@@ -389,27 +468,17 @@ fn mixing(b: &Body, natural: Option<&NaturalEstimate>) -> (Direction, f64) {
     (direction, exponent)
 }
 
-/// The answer h: the recommended forced correlation `(h, Nu as Re → 0, k)` blended with natural
-/// convection, with the blend's flag if it raised one.
+/// The answer h: the recommended forced `(h_F, h_F0)` (its value and its still-fluid value)
+/// blended with natural convection, with the blend's flag if it raised one.
 fn blended(
-    b: &Body,
-    film: &Properties,
-    (rec_h, rec_nu_still, rec_k): (f64, f64, f64),
+    (h_f, h_f0): (f64, f64),
     natural: Option<&NaturalEstimate>,
     direction: Direction,
     exponent: f64,
 ) -> Result<(f64, Option<Flag>), EngineError> {
     let (h, flag) = match natural {
-        Some(n) => {
-            let floor = if b.shape.is_sphere() {
-                2.0 * film.k / b.d
-            } else {
-                0.0
-            };
-            let forced_part = rec_h - rec_nu_still * rec_k / b.d;
-            mixed::blend(forced_part, n.h - floor, floor, exponent, direction)
-        }
-        None => (rec_h, None),
+        Some(n) => mixed::blend(h_f, h_f0, n.h, exponent, direction),
+        None => (h_f, None),
     };
     let h = finite_result("heat-transfer coefficient", h)?;
     if h <= 0.0 {
@@ -429,38 +498,37 @@ fn blended(
 /// defined at every surface temperature the solver tries, so nothing is refused by skipping
 /// them); in other fluids always, as the full analysis does, so that a surface state the fluid
 /// cannot be in (water boiling at the wall) is refused on both paths alike.
-pub fn h_given_free(b: &Body, fixed: usize, free: &Properties) -> Result<f64, EngineError> {
+pub fn h_given_free(b: &Body, pick: &Pick, free: &Properties) -> Result<f64, EngineError> {
     let film = b.fluid.at(0.5 * (b.t_s + b.t_inf), b.p)?;
     let list = b.shape.forced();
-    let c = &list[fixed.min(list.len() - 1)];
-    let at = at_reference(c.reference, &film, free);
     let air = matches!(b.fluid, Fluid::DryAir | Fluid::HumidAir(_));
-    let groups = if c.surface || !air {
-        let surface = b.fluid.at(b.t_s, b.p)?;
-        groups_at(b, at, &surface, b.fluid.is_gas())
-    } else {
-        // Not read by this correlation: Pr_s and μs stand at the reference values.
-        groups_at(b, at, at, b.fluid.is_gas())
-    };
-    let nu = finite_result("Nusselt number", (c.nu)(&groups).value)?;
-    let h = finite_result("heat-transfer coefficient", nu * at.k / b.d)?;
+    let mut surface: Option<Properties> = None;
+    let mut parts = [(0.0, 0.0); pick::MAX_FORCED];
+    for (i, _) in pick.shares() {
+        let c = &list[i.min(list.len() - 1)];
+        let at = at_reference(c.reference, &film, free);
+        let groups = if c.surface || !air {
+            if surface.is_none() {
+                surface = Some(b.fluid.at(b.t_s, b.p)?);
+            }
+            groups_at(b, at, surface.as_ref().unwrap_or(at), b.fluid.is_gas())
+        } else {
+            // Not read by this correlation: Pr_s and μs stand at the reference values.
+            groups_at(b, at, at, b.fluid.is_gas())
+        };
+        let nu = finite_result("Nusselt number", (c.nu)(&groups).value)?;
+        let h = finite_result("heat-transfer coefficient", nu * at.k / b.d)?;
+        parts[i] = (h, (c.nu_still)(&groups) * at.k / b.d);
+    }
+    let h_forced = pick.combine(|i| Ok(parts[i].0))?;
+    let h_still = pick.combine(|i| Ok(parts[i].1))?;
     let mut notes = Vec::new();
     let natural = natural_estimate(b, &film, &mut notes)?;
     let (direction, exponent) = mixing(b, natural.as_ref());
-    let nu_still = (c.nu_still)(&groups);
-    Ok(blended(
-        b,
-        &film,
-        (h, nu_still, at.k),
-        natural.as_ref(),
-        direction,
-        exponent,
-    )?
-    .0)
+    Ok(blended((h_forced, h_still), natural.as_ref(), direction, exponent)?.0)
 }
 
-/// No flag says a value lies outside its range (near-edge notes allowed): the rule that makes a
-/// correlation eligible for the recommendation.
+/// No flag says a value lies outside its range (near-edge and advisory notes allowed).
 fn inside_ranges(flags: &[Flag]) -> bool {
     flags.iter().all(|f| f.kind != FlagKind::Outside)
 }
@@ -473,22 +541,24 @@ fn at_reference<'a>(r: Reference, film: &'a Properties, free: &'a Properties) ->
     }
 }
 
-/// The index of the forced correlation [`analyse_given_free`] would recommend for this body:
-/// the first in the shape's order inside all its ranges (0 when none is). The same rule
-/// ([`inside_ranges`]) on the same numbers, without the estimates' text or the natural part.
-pub fn recommended_given_free(b: &Body, free: &Properties) -> Result<usize, EngineError> {
+/// The pick [`analyse_given_free`] would make for this body: the same rule
+/// ([`crate::engine::pick::pick`]) on the same flags, evaluating correlations only until no later
+/// one could share the answer.
+pub fn recommended_given_free(b: &Body, free: &Properties) -> Result<Pick, EngineError> {
     let film = b.fluid.at(0.5 * (b.t_s + b.t_inf), b.p)?;
     let surface = b.fluid.at(b.t_s, b.p)?;
     let gas = b.fluid.is_gas();
-    for (i, c) in b.shape.forced().iter().enumerate() {
+    let list = b.shape.forced();
+    pick::pick(list.len(), |i| {
+        let c = &list[i];
+        if c.alternate {
+            return Ok(None);
+        }
         let at = at_reference(c.reference, &film, free);
         let nu = (c.nu)(&groups_at(b, at, &surface, gas));
         finite_result("Nusselt number", nu.value)?;
-        if inside_ranges(&nu.flags) {
-            return Ok(i);
-        }
-    }
-    Ok(0)
+        Ok(Some(nu.flags))
+    })
 }
 
 fn natural_estimate(
@@ -624,12 +694,22 @@ mod tests {
                                 ..b
                             };
                             let free = b.fluid.at(b.t_inf, b.p).unwrap();
-                            for i in 0..shape.forced().len() {
-                                let full = analyse_given_free(&b, Some(i), free.clone()).unwrap().h;
-                                let fast = h_given_free(&b, i, &free).unwrap();
-                                assert_eq!(full.to_bits(), fast.to_bits(), "{b:?} #{i}");
+                            let own = recommended_given_free(&b, &free).unwrap();
+                            let picks = (0..shape.forced().len()).map(Pick::single).chain([
+                                own,
+                                Pick {
+                                    weights: [0.3, 0.7, 0.0, 0.0, 0.0],
+                                },
+                            ]);
+                            for p in picks {
+                                let full = analyse_given_free(&b, Some(p), free.clone()).unwrap();
+                                let fast = h_given_free(&b, &p, &free).unwrap();
+                                assert_eq!(full.h.to_bits(), fast.to_bits(), "{b:?} {p:?}");
                                 n += 1;
                             }
+                            // The solver's pick is the analysis's own.
+                            let own_full = analyse_given_free(&b, None, free.clone()).unwrap();
+                            assert_eq!(own_full.pick, own, "{b:?}");
                         }
                     }
                 }
@@ -642,7 +722,7 @@ mod tests {
     fn strong_wind_tends_to_the_forced_answer() {
         for shape in [Shape::Cylinder, Shape::Sphere] {
             let a = analyse(&demo_body(shape, 60.0)).unwrap();
-            let f = a.recommended().h;
+            let f = a.h_forced;
             assert!((a.h / f - 1.0).abs() < 0.01, "{shape:?}: {} vs {f}", a.h);
         }
     }

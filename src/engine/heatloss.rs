@@ -8,6 +8,7 @@
 use crate::engine::body::{self, Analysis, Body};
 use crate::engine::error::{finite_result, EngineError};
 use crate::engine::layers::{critical_radius, Construction, Geometry};
+use crate::engine::pick::Pick;
 use crate::engine::props::Properties;
 use crate::engine::solve;
 
@@ -62,14 +63,14 @@ pub fn surface_loss(
     surface_loss_with(stream, d, ts, emissivity, t_sur, None, None)
 }
 
-/// As [`surface_loss`] with the recommended forced correlation held at index `fixed`.
+/// As [`surface_loss`] with the recommendation held at `fixed`.
 pub fn surface_loss_with(
     stream: &Body,
     d: f64,
     ts: f64,
     emissivity: f64,
     t_sur: f64,
-    fixed: Option<usize>,
+    fixed: Option<Pick>,
     free: Option<&Properties>,
 ) -> Result<SurfaceLoss, EngineError> {
     let (area, q_rad, h_rad, body) = at_surface(stream, d, ts, emissivity, t_sur);
@@ -109,13 +110,13 @@ fn body_at(stream: &Body, d: f64, ts: f64) -> Option<Body> {
     })
 }
 
-/// The forced correlation a surface at `ts` would recommend (none without convection).
+/// The recommendation a surface at `ts` would make (none without convection).
 fn recommended_at(
     stream: &Body,
     d: f64,
     ts: f64,
     free: &Properties,
-) -> Result<Option<usize>, EngineError> {
+) -> Result<Option<Pick>, EngineError> {
     body_at(stream, d, ts)
         .map(|b| body::recommended_given_free(&b, free))
         .transpose()
@@ -170,17 +171,17 @@ fn surface_lean(
     ts: f64,
     emissivity: f64,
     t_sur: f64,
-    fixed: Option<usize>,
+    fixed: Option<Pick>,
     free: &Properties,
 ) -> Result<SurfaceLoss, EngineError> {
-    let Some(i) = fixed.filter(|&i| i < stream.shape.forced().len()) else {
+    let Some(pick) = fixed else {
         let mut l = surface_loss_with(stream, d, ts, emissivity, t_sur, None, Some(free))?;
         l.analysis = None;
         return Ok(l);
     };
     let (area, q_rad, h_rad, body) = at_surface(stream, d, ts, emissivity, t_sur);
     let h = match body {
-        Some(body) => body::h_given_free(&body, i, free)?,
+        Some(body) => body::h_given_free(&body, &pick, free)?,
         None => 0.0,
     };
     Ok(SurfaceLoss {
@@ -210,17 +211,19 @@ pub struct Solution {
     pub residual: f64,
     /// Critical radius for the outer layer (k at its mean temperature, h = h_conv + h_rad), m.
     pub critical_radius: Option<f64>,
-    /// The recommended correlation differs on the two sides of this solution (see [`solve`]).
+    /// The recommendation at this solution differs from the one it was solved with by more than
+    /// 1 % of a share (see [`solve`]).
     pub switched: bool,
 }
 
 /// Solve the surface energy balance.
 ///
-/// The recommended forced correlation can change with the surface temperature (a range holds on
-/// one side of a limit and not the other), which would make the surface loss jump. So it is held
-/// fixed while solving: first the one recommended with the surface at the process temperature;
-/// if the solution recommends another, the balance is solved again with that one. Should it flip
-/// back, the second choice is kept and `switched` says so.
+/// The recommendation can change with the surface temperature (Re and the properties move with
+/// it). It is held fixed while solving, so that the residual is a smooth function of Ts: first
+/// the one made with the surface at the process temperature; if the solution makes another, the
+/// balance is solved again with that one, and `switched` says whether the second solution still
+/// differs. The recommendation is continuous in its inputs (see [`crate::engine::pick`]), so the
+/// answer is too.
 pub fn solve(job: &Job) -> Result<Solution, EngineError> {
     solve_as(job, true)
 }
@@ -243,7 +246,11 @@ fn solve_as(job: &Job, full: bool) -> Result<Solution, EngineError> {
         (first, start, false)
     } else {
         let second = solve_fixed(job, at_first, &free)?;
-        let switched = recommended_at(s, d, second.t_surface, &free)? != at_first;
+        let at_second = recommended_at(s, d, second.t_surface, &free)?;
+        let switched = match (at_second, at_first) {
+            (Some(a), Some(b)) => a.distance(&b) > 0.01,
+            _ => false,
+        };
         (second, at_first, switched)
     };
     let loss = if full {
@@ -293,7 +300,7 @@ fn solve_as(job: &Job, full: bool) -> Result<Solution, EngineError> {
     })
 }
 
-/// The heat flow and temperatures of one solve with the correlation held at `fixed`.
+/// The heat flow and temperatures of one solve with the recommendation held at `fixed`.
 struct Core {
     q: f64,
     t_surface: f64,
@@ -302,7 +309,7 @@ struct Core {
     iterations: u32,
 }
 
-fn solve_fixed(job: &Job, fixed: Option<usize>, free: &Properties) -> Result<Core, EngineError> {
+fn solve_fixed(job: &Job, fixed: Option<Pick>, free: &Properties) -> Result<Core, EngineError> {
     let s = &job.stream;
     let (tp, tinf, tsur) = (job.process_temp, s.t_inf, job.t_surround);
     let t_lo = tp.min(tinf).min(tsur);

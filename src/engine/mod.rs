@@ -13,6 +13,7 @@ pub mod heatloss;
 pub mod job;
 pub mod json;
 pub mod layers;
+pub mod pick;
 pub mod props;
 pub mod scenario;
 pub mod solve;

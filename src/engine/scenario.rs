@@ -1343,16 +1343,16 @@ fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step> {
             Inside::Flowing(f) => {
                 let formula = match f.regime {
                     crate::engine::correlations::internal::PipeRegime::Laminar => format!(
-                        "Baehr & Stephan: Gz = (d/L)·Re·Pr = {}; Nu = [3.657/tanh(2.264·Gz^−⅓ + 1.7·Gz^−⅔) + 0.0499·Gz·tanh(1/Gz)] / tanh(2.432·Pr^⅙·Gz^−⅙)",
+                        "VDI Heat Atlas G1, laminar: Gz = Re·Pr·d/L = {}; Nu = [3.66³ + 0.7³ + (1.615·Gz^⅓ − 0.7)³ + ((2/(1 + 22·Pr))^⅙·Gz^½)³]^⅓",
                         g(f.d / f.length * f.re * f.pr)
                     ),
                     crate::engine::correlations::internal::PipeRegime::Transition { weight } => format!(
-                        "interpolated with weight γ = (Re − 2300)/(10⁴ − 2300) = {} between Baehr & Stephan at Re = 2300 and Gnielinski at Re = 10⁴",
+                        "VDI Heat Atlas G1: interpolated with weight γ = (Re − 2300)/(10⁴ − 2300) = {} between the laminar form at Re = 2300 and the turbulent one at Re = 10⁴",
                         g(weight)
                     ),
                     crate::engine::correlations::internal::PipeRegime::Turbulent => format!(
-                        "Gnielinski with Filonenko's f = (1.82·log₁₀Re − 1.64)⁻² = {}: Nu = (f/8)(Re − 1000)Pr / (1 + 12.7·√(f/8)·(Pr^⅔ − 1)) · (1 + (d/L)^⅔)",
-                        g(crate::engine::correlations::internal::filonenko(f.re))
+                        "VDI Heat Atlas G1 (Gnielinski), with Konakov's ξ = (1.8·log₁₀Re − 1.5)⁻² = {}: Nu = (ξ/8)·Re·Pr / (1 + 12.7·√(ξ/8)·(Pr^⅔ − 1)) · (1 + (d/L)^⅔)",
+                        g(crate::engine::correlations::internal::konakov(f.re))
                     ),
                 };
                 format!(
@@ -1466,6 +1466,31 @@ fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step> {
             g(rec.h)
         ),
     });
+    let shares: Vec<String> = a
+        .pick
+        .shares()
+        .map(|(i, wt)| {
+            format!(
+                "{} % × {} W/(m²·K) ({})",
+                g(100.0 * wt),
+                g(a.forced[i].h),
+                a.forced[i].name
+            )
+        })
+        .collect();
+    out.push(Step {
+        title: "Why this correlation",
+        text: if shares.len() > 1 {
+            format!(
+                "{} h_F = {} = {} W/(m²·K).",
+                a.reason(),
+                shares.join(" + "),
+                g(a.h_forced)
+            )
+        } else {
+            a.reason()
+        },
+    });
     match &a.natural {
         Some(n) => {
             out.push(Step {
@@ -1484,9 +1509,12 @@ fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step> {
             out.push(Step {
                 title: "Mixed convection",
                 text: format!(
-                    "Stream {}; Churchill's blend with n = {}: h = {} W/(m²·K). {}.",
+                    "Stream {}; Churchill's blend h = h₀ + [(h_F − h₀)ⁿ {} (h_N − h₀)ⁿ]^(1/n) with n = {}, each part whole and h₀ = min(h_F0, h_N) the still-fluid limit they share: h_F = {}, h_N = {}, h = {} W/(m²·K). {}.",
                     a.direction.describe(),
+                    if a.direction == crate::engine::correlations::mixed::Direction::Opposing { "−" } else { "+" },
                     g(a.exponent),
+                    g(a.h_forced),
+                    g(n.h),
                     g(a.h),
                     a.mode()
                 ),

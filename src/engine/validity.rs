@@ -25,7 +25,16 @@ pub enum FlagKind {
     Outside,
     /// Inside, but within [`NEAR_EDGE`] of a band edge where constants change.
     NearEdge,
+    /// Outside a printed range that is not a limit of the method in this case (a viscosity-ratio
+    /// range fitted on liquids, read for a gas): shown, never a reason to set the method aside.
+    Advisory,
 }
+
+/// Relative tolerance on a printed Prandtl-number limit: a Pr within 3 % of it counts as inside.
+/// Limits are printed to two figures (0.71 covers 0.705–0.715), and Pr enters the correlations as
+/// Pr^⅓ to Pr^0.4, so 3 % in Pr moves Nu by at most 1.2 %, far inside their ±20 % scatter
+/// (common practice).
+pub const PR_SLACK: f64 = 0.03;
 
 /// Relative distance from a band edge counted as "near" it.
 pub const NEAR_EDGE: f64 = 0.03;
@@ -38,9 +47,39 @@ pub struct Flag {
     pub method: &'static str,
     pub range: Range,
     pub value: f64,
+    /// Relative slack the range was checked with (0 for most ranges; [`PR_SLACK`] for printed
+    /// Prandtl limits): the distance outside is measured from the widened limit.
+    pub slack: f64,
 }
 
+/// Largest distance outside a range counted, in decades (a value of 0 against a positive lower
+/// limit is infinitely far in log terms).
+pub const MAX_DECADES: f64 = 10.0;
+
 impl Flag {
+    /// How far the value lies outside the range, in decades (log₁₀ of the ratio to the nearest
+    /// widened limit); 0 for a flag that is not `Outside`.
+    pub fn decades_outside(&self) -> f64 {
+        if self.kind != FlagKind::Outside {
+            return 0.0;
+        }
+        let (lo, hi) = (
+            self.range.lo * (1.0 - self.slack),
+            self.range.hi * (1.0 + self.slack),
+        );
+        let v = self.value;
+        let d = if !v.is_finite() || v <= 0.0 {
+            MAX_DECADES
+        } else if v < lo {
+            (lo / v).log10()
+        } else if v > hi {
+            (v / hi).log10()
+        } else {
+            0.0
+        };
+        d.clamp(0.0, MAX_DECADES)
+    }
+
     /// One line for the page: reason, the value, the range, the source.
     pub fn message(&self) -> String {
         let r = &self.range;
@@ -66,6 +105,10 @@ impl Flag {
                 "{}: {} = {}{unit} is near an edge of its band {} ({}); the constants change there",
                 self.method, r.quantity, value, range, r.source
             ),
+            FlagKind::Advisory => format!(
+                "{}: {} = {}{unit} is outside the printed {} ({}), which was fitted on liquids; in a gas the factor is a small correction, not a limit of the method",
+                self.method, r.quantity, value, range, r.source
+            ),
         }
     }
 }
@@ -84,6 +127,7 @@ impl Range {
                 method,
                 range: *self,
                 value,
+                slack: 0.0,
             });
         }
         if banded {
@@ -96,6 +140,7 @@ impl Range {
                     method,
                     range: *self,
                     value,
+                    slack: 0.0,
                 });
             }
         }
@@ -147,6 +192,7 @@ impl Bands {
             method,
             range: band,
             value,
+            slack: 0.0,
         });
         (i, flag)
     }
@@ -173,6 +219,48 @@ impl<T> Flagged<T> {
             self.flags.push(f);
         }
     }
+
+    /// As [`Flagged::check`] for a printed Prandtl-number limit: inside within [`PR_SLACK`] of it.
+    pub fn check_pr(&mut self, method: &'static str, range: &Range, pr: f64) {
+        let widened = Range {
+            lo: range.lo * (1.0 - PR_SLACK),
+            hi: range.hi * (1.0 + PR_SLACK),
+            ..*range
+        };
+        if widened.check(method, pr, false).is_some() {
+            self.flags.push(Flag {
+                kind: FlagKind::Outside,
+                method,
+                range: *range,
+                value: pr,
+                slack: PR_SLACK,
+            });
+        }
+    }
+
+    /// Check `v` against a range that is shown but never sets the method aside
+    /// ([`FlagKind::Advisory`]).
+    pub fn advise(&mut self, method: &'static str, range: &Range, v: f64) {
+        if range.check(method, v, false).is_some() {
+            self.flags.push(Flag {
+                kind: FlagKind::Advisory,
+                method,
+                range: *range,
+                value: v,
+                slack: 0.0,
+            });
+        }
+    }
+
+    /// The distance outside all its ranges, in decades, summed over the flags.
+    pub fn decades_outside(&self) -> f64 {
+        decades_outside(&self.flags)
+    }
+}
+
+/// The distance outside all ranges, in decades, summed over `flags` (0 when inside them all).
+pub fn decades_outside(flags: &[Flag]) -> f64 {
+    flags.iter().map(Flag::decades_outside).sum()
 }
 
 #[cfg(test)]
@@ -233,6 +321,45 @@ mod tests {
             (FlagKind::Outside, 1.0, 1000.0)
         );
         assert_eq!(B.locate("m", 0.5).0, 0);
+    }
+
+    #[test]
+    fn distance_outside_is_in_decades_from_the_widened_limit() {
+        let f = R.check("m", 40_000.0, false).unwrap();
+        assert!((f.decades_outside() - 1.0).abs() < 1e-12);
+        let f = R.check("m", 4.0, false).unwrap();
+        assert!((f.decades_outside() - 1.0).abs() < 1e-12);
+        assert_eq!(
+            R.check("m", 0.0, false).unwrap().decades_outside(),
+            MAX_DECADES
+        );
+        let pr = Range {
+            quantity: "Pr",
+            lo: 0.71,
+            hi: 380.0,
+            unit: "",
+            source: "test",
+        };
+        // Air's 0.707 is inside a printed 0.71; 0.68 is outside, measured from 0.71 × 0.97.
+        let mut v = Flagged::new(0.0);
+        v.check_pr("m", &pr, 0.707);
+        assert!(v.flags.is_empty());
+        v.check_pr("m", &pr, 0.68);
+        let d = v.decades_outside();
+        assert!((d - (0.71 * 0.97 / 0.68f64).log10()).abs() < 1e-12, "{d}");
+        // Continuous at the widened limit.
+        let mut w = Flagged::new(0.0);
+        w.check_pr("m", &pr, 0.71 * 0.97 * (1.0 - 1e-12));
+        assert!(w.decades_outside() < 1e-9);
+    }
+
+    #[test]
+    fn an_advisory_flag_is_shown_but_not_outside() {
+        let mut v = Flagged::new(0.0);
+        v.advise("m", &R, 1.0);
+        assert_eq!(v.flags[0].kind, FlagKind::Advisory);
+        assert_eq!(v.decades_outside(), 0.0);
+        assert!(v.flags[0].message().contains("not a limit"));
     }
 
     #[test]

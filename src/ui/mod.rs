@@ -634,6 +634,7 @@ pub fn App() -> impl IntoView {
                 </dl>
                 <p class="spread" data-spread>{move || shown.with(|s| s.outcome.as_ref().map(|o| spread_text(o, &choice.get())))}</p>
                 <p class="method">{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Recommended: {} ({}). {} {}", o.method, o.analysis.mode(), o.regime, o.analysis.notes.join(" "))))}</p>
+                <p class="reason" data-reason>{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Why this one: {}", o.analysis.reason())))}</p>
                 <div class="verdicts" data-verdicts>
                     {move || shown.with(|s| s.outcome.as_ref().map(|o| results::verdicts(o, &choice.get())))}
                 </div>

@@ -22,6 +22,10 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
         .enumerate()
         .map(|(i, e)| {
             let rec = i == a.recommended;
+            let share = a.pick.weights.get(i).copied().unwrap_or(0.0);
+            let share_note = (share > 0.0 && share < 1.0)
+                .then(|| view! { <span class="rec-mark">{format!(" — {} % of the recommended value (handover)", format_sig(100.0 * share, 2))}</span> });
+            let alt_note = e.alternate.then_some(view! { <small class="detail">"Older table, shown for comparison; never recommended."</small> });
             let flags = e.flags.iter().map(|f| view! { <li>{f.message()}</li> }).collect_view();
             let status = if !e.valid() {
                 "outside its range"
@@ -32,7 +36,7 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
             };
             view! {
                 <tr class:recommended=rec data-correlation=e.id data-h=format!("{}", e.h) data-valid=e.valid().to_string()>
-                    <th scope="row">{e.name}{rec.then_some(view! { <span class="rec-mark">" ★ recommended"</span> })}
+                    <th scope="row">{e.name}{rec.then_some(view! { <span class="rec-mark">" ★ recommended"</span> })}{share_note}{alt_note}
                         {e.detail().map(|d| view! { <small class="detail">{d}</small> })}</th>
                     <td>{e.reference.short()}</td>
                     <td>{format_sig(e.groups.re, 4)}</td>

@@ -69,7 +69,7 @@ fn pipe_flow_matches_ht_1_2_0() {
                     (internal::filonenko(a) / c - 1.0).abs() < 1e-12,
                     "fd at {a}"
                 );
-                (internal::gnielinski(a, b, 0.0), 1e-12)
+                (internal::gnielinski_1976(a, b, 0.0), 1e-12)
             }
             3 => (internal::filonenko(a), 0.02),
             _ => panic!("unknown method code {m}"),

@@ -6,4 +6,5 @@ mod correlation_reference;
 mod fixture;
 mod fluid_reference;
 mod property_laws;
+mod recommendation;
 mod worked_examples;

@@ -66,7 +66,7 @@ pub fn hilpert(re: f64, pr: f64) -> Flagged<f64> {
     let (c, m) = HILPERT_CONSTANTS[i];
     let mut out = Flagged::new(c * re.powf(m) * pr.cbrt());
     out.flags.extend(band_flag);
-    out.check(HILPERT, &HILPERT_PR, pr);
+    out.check_pr(HILPERT, &HILPERT_PR, pr);
     out
 }
 
@@ -97,7 +97,7 @@ pub fn zukauskas(re: f64, pr: f64, pr_s: f64) -> Flagged<f64> {
     let n = if pr <= 10.0 { 0.37 } else { 0.36 };
     let mut out = Flagged::new(c * re.powf(m) * pr.powf(n) * (pr / pr_s).sqrt().sqrt());
     out.flags.extend(band_flag);
-    out.check(ZUKAUSKAS, &ZUKAUSKAS_PR, pr);
+    out.check_pr(ZUKAUSKAS, &ZUKAUSKAS_PR, pr);
     out
 }
 
@@ -150,7 +150,7 @@ pub fn gnielinski(g: &Groups) -> Flagged<f64> {
     let nu_l = (0.3 + lam.hypot(turb)) * k;
     let mut out = Flagged::new(nu_l / l_over_d);
     out.check(GNIELINSKI, &GNIELINSKI_RE, re_l);
-    out.check(GNIELINSKI, &GNIELINSKI_PR, g.pr);
+    out.check_pr(GNIELINSKI, &GNIELINSKI_PR, g.pr);
     out
 }
 
@@ -213,6 +213,7 @@ pub const FORCED: [Forced; 4] = [
         nu_still: cb_still,
         detail: no_detail,
         surface: false,
+        alternate: false,
     },
     Forced {
         id: "hilpert",
@@ -223,6 +224,7 @@ pub const FORCED: [Forced; 4] = [
         nu_still: zero,
         detail: hp_detail,
         surface: false,
+        alternate: false,
     },
     Forced {
         id: "zukauskas",
@@ -233,6 +235,7 @@ pub const FORCED: [Forced; 4] = [
         nu_still: zero,
         detail: zk_detail,
         surface: true,
+        alternate: false,
     },
     Forced {
         id: "gnielinski",
@@ -243,6 +246,7 @@ pub const FORCED: [Forced; 4] = [
         nu_still: gn_still,
         detail: gn_detail,
         surface: true,
+        alternate: false,
     },
 ];
 

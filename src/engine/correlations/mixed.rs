@@ -1,17 +1,22 @@
 //! Mixed forced and natural convection: Churchill's combination Nuⁿ = Nu_Fⁿ ± Nu_Nⁿ.
 //!
 //! S. W. Churchill, "A comprehensive correlating equation for laminar, assisting, forced and free
-//! convection", AIChE J. 23 (1977) 10–16; exponents as given by Incropera & DeWitt, §9.9 (from
-//! memory): n = 3 in general, n = 4 for transverse flow over horizontal cylinders and spheres;
-//! + for assisting and transverse flow, − for opposing flow.
+//! convection", AIChE J. 23 (1977) 10–16, and his chapter on combined free and forced convection
+//! around immersed bodies in the Heat Exchanger Design Handbook (1983), as applied in Incropera,
+//! DeWitt, Bergman & Lavine, Fundamentals of Heat and Mass Transfer, §9.9: n = 3 in general,
+//! n = 4 for transverse flow over horizontal cylinders and spheres; + for assisting and
+//! transverse flow, − for opposing flow (exponents and signs from memory of §9.9).
 //!
-//! So that the blend is exactly the natural answer in still fluid and tends to the forced answer in
-//! strong wind, it is applied to the parts above the still-fluid limits: for a sphere both
-//! correlations contain the conduction limit Nu = 2, blended once; a forced correlation's own
-//! still-fluid constant (0.3 in Churchill–Bernstein) is taken off before blending. Written in h
-//! on the same length D:
+//! Both parts are the whole correlations, each with its own still-fluid limit (0.3 in
+//! Churchill–Bernstein, 2 for a sphere, about 0.36 in Churchill–Chu). The still-fluid limit they
+//! share, h₀ = min(h_F0, h_N), is the part neither adds to the other — the conduction term of a
+//! sphere is Churchill's own example — so it is blended once:
 //!
-//! h = h_c + [(h_F − h_F0)ⁿ ± (h_N − h_c)ⁿ]^(1/n), with h_c = 2k/D for a sphere and 0 otherwise.
+//! h = h₀ + [(h_F − h₀)ⁿ ± (h_N − h₀)ⁿ]^(1/n).
+//!
+//! For assisting and transverse flow the answer is then never below either part (the root of a
+//! sum of n-th powers is at least the larger term), it is exactly h_N in still fluid (h_F = h_F0
+//! there), it tends to h_F in strong wind, and it is continuous in between.
 
 use crate::engine::validity::{Flag, FlagKind, Range};
 
@@ -57,15 +62,17 @@ pub const OPPOSING_BALANCE: Range = Range {
 };
 pub const MIXED: &str = "Churchill (1977) mixed-convection blend";
 
-/// The blended h, W/(m²·K), and any flag. `forced` is h_F − h_F0, `natural` h_N − h_c, both ≥ 0.
+/// The blended h, W/(m²·K), and any flag: `forced` is the forced correlation's h_F,
+/// `forced_still` its value in still fluid h_F0 (≤ h_F), `natural` the natural correlation's h_N.
 pub fn blend(
     forced: f64,
+    forced_still: f64,
     natural: f64,
-    floor: f64,
     n: f64,
     direction: Direction,
 ) -> (f64, Option<Flag>) {
-    let (a, b) = (forced.max(0.0), natural.max(0.0));
+    let floor = forced_still.min(natural).max(0.0);
+    let (a, b) = ((forced - floor).max(0.0), (natural - floor).max(0.0));
     // n is 3 or 4: integer powers and roots, exact and cheaper than powf.
     let pow = |x: f64| match n as u32 {
         4 if n == 4.0 => (x * x) * (x * x),
@@ -88,6 +95,7 @@ pub fn blend(
                 method: MIXED,
                 range: OPPOSING_BALANCE,
                 value: a / b,
+                slack: 0.0,
             }
         });
     (floor + root(sum), flag)
@@ -99,26 +107,49 @@ mod tests {
 
     #[test]
     fn limits_and_continuity() {
-        // Still fluid: exactly the natural part; no natural part: exactly the forced part.
-        assert_eq!(blend(0.0, 7.0, 1.0, 4.0, Direction::Transverse).0, 8.0);
-        assert!((blend(9.0, 0.0, 0.0, 3.0, Direction::Assisting).0 - 9.0).abs() < 1e-12);
-        // Continuous and rising in the forced part.
+        // Still fluid (h_F = h_F0): exactly the natural part, whatever the forced constant.
+        assert_eq!(blend(1.0, 1.0, 8.0, 4.0, Direction::Transverse).0, 8.0);
+        assert_eq!(blend(0.3, 0.3, 8.0, 3.0, Direction::Assisting).0, 8.0);
+        // No natural part: exactly the forced part.
+        assert!((blend(9.0, 0.3, 0.0, 3.0, Direction::Assisting).0 - 9.0).abs() < 1e-12);
+        // Continuous and rising in the forced part, never below either part.
         let mut last = 7.0;
         for i in 0..=1000 {
-            let h = blend(i as f64 * 0.05, 7.0, 0.0, 4.0, Direction::Transverse).0;
+            let hf = 0.3 + i as f64 * 0.05;
+            let h = blend(hf, 0.3, 7.0, 4.0, Direction::Transverse).0;
             assert!(h >= last && h - last < 0.06);
+            assert!(h >= hf && h >= 7.0, "{hf}: {h}");
             last = h;
         }
         // Strong forced flow: within 0.1 % of forced.
-        let h = blend(100.0, 7.0, 0.0, 3.0, Direction::Assisting).0;
+        let h = blend(100.0, 0.3, 7.0, 3.0, Direction::Assisting).0;
         assert!((h / 100.0 - 1.0) < 1e-3);
+    }
+
+    /// The defect this replaced: the forced part's still-fluid constant was taken off and not
+    /// put back, so strong wind gave h_F − h_F0 and a weak draught gave less than h_F alone.
+    #[test]
+    fn the_blend_never_falls_below_the_forced_part() {
+        for (hf, h0, hn) in [
+            (2.0, 1.5, 1.2),
+            (20.0, 0.3, 5.0),
+            (5.0, 2.0, 4.0),
+            (3.0, 3.0, 1.0),
+        ] {
+            for n in [3.0, 4.0] {
+                for dir in [Direction::Transverse, Direction::Assisting] {
+                    let h = blend(hf, h0, hn, n, dir).0;
+                    assert!(h >= hf.max(hn) - 1e-12, "{hf} {h0} {hn} {n}: {h}");
+                }
+            }
+        }
     }
 
     #[test]
     fn opposing_balance_is_flagged() {
-        let (h, f) = blend(7.0, 7.0, 0.0, 3.0, Direction::Opposing);
+        let (h, f) = blend(7.0, 0.0, 7.0, 3.0, Direction::Opposing);
         assert_eq!(h, 0.0);
         assert!(f.is_some());
-        assert!(blend(30.0, 7.0, 0.0, 3.0, Direction::Opposing).1.is_none());
+        assert!(blend(30.0, 0.0, 7.0, 3.0, Direction::Opposing).1.is_none());
     }
 }
