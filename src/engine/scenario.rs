@@ -1509,12 +1509,9 @@ fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step> {
             out.push(Step {
                 title: "Mixed convection",
                 text: format!(
-                    "Stream {}; Churchill's blend h = h₀ + [(h_F − h₀)ⁿ {} (h_N − h₀)ⁿ]^(1/n) with n = {}, each part whole and h₀ = min(h_F0, h_N) the still-fluid limit they share: h_F = {}, h_N = {}, h = {} W/(m²·K). {}.",
+                    "Stream {}; Churchill's blend, n = {}, shared still-fluid limit added back: h = {} W/(m²·K). {}.",
                     a.direction.describe(),
-                    if a.direction == crate::engine::correlations::mixed::Direction::Opposing { "−" } else { "+" },
                     g(a.exponent),
-                    g(a.h_forced),
-                    g(n.h),
                     g(a.h),
                     a.mode()
                 ),

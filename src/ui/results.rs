@@ -578,7 +578,7 @@ pub fn report(
     let steps = o
         .working
         .iter()
-        .filter(|st| !st.title.starts_with("Properties at"))
+        .filter(|st| !st.title.starts_with("Properties at") && st.title != "Why this correlation")
         .map(|st| view! { <li><strong>{st.title}</strong>": "{st.text.clone()}</li> })
         .collect_view();
     let sources = o
