@@ -148,7 +148,7 @@ pub fn nu_re(shape: Shape, a: &Analysis, width: f64, height: f64) -> (Frame, Vec
         log_x: true,
         log_y: true,
     };
-    let curves = forced
+    let mut curves: Vec<Curve> = forced
         .iter()
         .zip(&a.forced)
         .zip(data)
@@ -164,7 +164,54 @@ pub fn nu_re(shape: Shape, a: &Analysis, width: f64, height: f64) -> (Frame, Vec
             ),
         })
         .collect();
+    if forced.iter().filter(|c| !c.alternate).count() > 1 {
+        let pts = recommended_points(shape, a);
+        let main = a.recommended();
+        let nu_here = a
+            .pick
+            .shares()
+            .map(|(i, w)| w * a.forced[i].nu)
+            .sum::<f64>();
+        curves.push(Curve {
+            id: "recommended",
+            name: "Recommended (the rule, with its handovers)",
+            recommended: false,
+            segments: segments(&frame, &pts),
+            point: frame.to_svg(
+                main.groups.re.clamp(RE_RANGE.0, RE_RANGE.1),
+                nu_here.max(frame.y.0),
+            ),
+        });
+    }
     (frame, curves)
+}
+
+/// The recommended Nu over the plot's Reynolds range: at each Re the rule of
+/// [`crate::engine::pick`] over the correlations' flags there, and Σ share × Nu. Continuous by
+/// construction, where each correlation's own curve may end or jump; solid where the main share
+/// is inside its ranges.
+pub fn recommended_points(shape: Shape, a: &Analysis) -> Vec<(f64, f64, bool)> {
+    let forced = shape.forced();
+    (0..SAMPLES)
+        .filter_map(|i| {
+            let re = 10f64.powf(6.0 * i as f64 / (SAMPLES - 1) as f64);
+            let at: Vec<_> = forced
+                .iter()
+                .zip(&a.forced)
+                .map(|(c, e)| (c.nu)(&Groups { re, ..e.groups }))
+                .collect();
+            let pick = crate::engine::pick::pick::<()>(at.len(), |j| {
+                Ok((!forced[j].alternate).then(|| at[j].flags.clone()))
+            })
+            .ok()?;
+            let nu: f64 = pick.shares().map(|(j, w)| w * at[j].value).sum();
+            let inside = at[pick.main()]
+                .flags
+                .iter()
+                .all(|f| f.kind != FlagKind::Outside);
+            (nu.is_finite() && nu > 0.0).then_some((re, nu, inside))
+        })
+        .collect()
 }
 
 fn segments(frame: &Frame, pts: &[(f64, f64, bool)]) -> Vec<Segment> {
@@ -271,7 +318,8 @@ mod tests {
     fn every_correlation_has_a_curve_with_both_styles_where_ranges_end() {
         let a = analysis(Shape::Cylinder);
         let (_, curves) = nu_re(Shape::Cylinder, &a, 480.0, 300.0);
-        assert_eq!(curves.len(), 4);
+        assert_eq!(curves.len(), 5);
+        assert_eq!(curves[4].id, "recommended");
         // Hilpert's table ends at 4×10⁵: its curve has a dashed part at high Re.
         let h = curves.iter().find(|c| c.id == "hilpert").unwrap();
         assert!(h.segments.iter().any(|s| s.inside) && h.segments.iter().any(|s| !s.inside));
@@ -281,6 +329,32 @@ mod tests {
                 .segments
                 .iter()
                 .any(|s| s.path.contains("NaN") || s.path.contains("inf")));
+        }
+    }
+
+    /// The recommended curve moves smoothly where the rule hands over (a sphere at Whitaker's and
+    /// Achenbach's upper limits): no step between samples beyond what a power law and a
+    /// linear handover make.
+    #[test]
+    fn the_recommended_curve_has_no_jump() {
+        for shape in [Shape::Sphere, Shape::Cylinder] {
+            let a = analysis(shape);
+            let pts = recommended_points(shape, &a);
+            assert_eq!(pts.len(), SAMPLES);
+            // Samples are 0.025 decade apart: Nu ∝ Re^0.8 at most moves 4.7 % per step, and a
+            // handover across a 60 % gap (a sphere's critical regime) adds 0.025/0.3 × 60 % = 5 %;
+            // one between two forms that nearly agree may dip by a fraction of a per cent. A jump
+            // (a correlation ending at its range) would be far more.
+            for w in pts.windows(2) {
+                let r = w[1].1 / w[0].1;
+                assert!(
+                    r > 0.99 && r < 1.11,
+                    "{shape:?} at Re {}: {} → {}",
+                    w[1].0,
+                    w[0].1,
+                    w[1].1
+                );
+            }
         }
     }
 

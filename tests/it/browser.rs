@@ -422,8 +422,19 @@ async fn exercise(c: &Client, base: &str) {
             "return document.querySelectorAll('[data-plot=nu-re] [data-curve]').length;"
         )
         .await,
-        json!(want.analysis.forced.len())
+        json!(
+            want.analysis.forced.len()
+                + usize::from(want.analysis.forced.iter().filter(|e| !e.alternate).count() > 1)
+        )
     );
+    // Where a shape has more than one correlation to choose from, the rule's own curve is drawn
+    // too (continuous through its handovers).
+    if want.analysis.forced.iter().filter(|e| !e.alternate).count() > 1 {
+        assert_eq!(
+            js(c, "return document.querySelectorAll('[data-plot=nu-re] [data-curve=recommended]').length;").await,
+            json!(1)
+        );
+    }
     assert!(
         js(c, "return document.querySelectorAll('[data-plot=nu-re] path.out').length > 0 && document.querySelectorAll('[data-plot=nu-re] path.in').length > 0;").await == json!(true),
         "the plot should show solid and dashed parts"
