@@ -381,20 +381,16 @@ pub fn analyse_given_free(
     let pick = match fixed {
         Some(p) => p,
         None => pick::pick::<EngineError>(forced.len(), |i| {
-            Ok((!forced[i].alternate).then(|| forced[i].flags.clone()))
+            Ok((!forced[i].alternate).then_some(forced[i].outside))
         })?,
     };
     let recommended = pick.main().min(forced.len() - 1);
-    let valid: Vec<f64> = forced
-        .iter()
-        .filter(|e| e.valid() && !e.alternate)
-        .map(|e| e.h)
-        .collect();
-    let spread = (!valid.is_empty()).then(|| {
-        let lo = valid.iter().cloned().fold(f64::INFINITY, f64::min);
-        let hi = valid.iter().cloned().fold(f64::NEG_INFINITY, f64::max);
-        (lo, hi, valid.len())
-    });
+    // Lowest and highest h among the correlations inside their ranges, and how many.
+    let (mut lo, mut hi, mut count) = (f64::INFINITY, f64::NEG_INFINITY, 0);
+    for e in forced.iter().filter(|e| e.valid() && !e.alternate) {
+        (lo, hi, count) = (lo.min(e.h), hi.max(e.h), count + 1);
+    }
+    let spread = (count > 0).then_some((lo, hi, count));
 
     let mut notes = Vec::new();
     let natural = natural_estimate(b, &film, &mut notes)?;
@@ -500,32 +496,58 @@ fn blended(
 /// cannot be in (water boiling at the wall) is refused on both paths alike.
 pub fn h_given_free(b: &Body, pick: &Pick, free: &Properties) -> Result<f64, EngineError> {
     let film = b.fluid.at(0.5 * (b.t_s + b.t_inf), b.p)?;
-    let list = b.shape.forced();
-    let air = matches!(b.fluid, Fluid::DryAir | Fluid::HumidAir(_));
-    let mut surface: Option<Properties> = None;
-    let mut parts = [(0.0, 0.0); pick::MAX_FORCED];
-    for (i, _) in pick.shares() {
-        let c = &list[i.min(list.len() - 1)];
-        let at = at_reference(c.reference, &film, free);
-        let groups = if c.surface || !air {
-            if surface.is_none() {
-                surface = Some(b.fluid.at(b.t_s, b.p)?);
+    let (h_forced, h_still) = match pick.only() {
+        // One correlation: its h and still-fluid h exactly (Σ 1.0 × x = x).
+        Some(i) => forced_h(b, i, &film, free, None)?,
+        None => {
+            let mut surface: Option<Properties> = None;
+            let mut parts = [(0.0, 0.0); pick::MAX_FORCED];
+            for (i, _) in pick.shares() {
+                parts[i] = forced_h(b, i, &film, free, Some(&mut surface))?;
             }
-            groups_at(b, at, surface.as_ref().unwrap_or(at), b.fluid.is_gas())
-        } else {
-            // Not read by this correlation: Pr_s and μs stand at the reference values.
-            groups_at(b, at, at, b.fluid.is_gas())
-        };
-        let nu = finite_result("Nusselt number", (c.nu)(&groups).value)?;
-        let h = finite_result("heat-transfer coefficient", nu * at.k / b.d)?;
-        parts[i] = (h, (c.nu_still)(&groups) * at.k / b.d);
-    }
-    let h_forced = pick.combine(|i| Ok(parts[i].0))?;
-    let h_still = pick.combine(|i| Ok(parts[i].1))?;
+            (
+                pick.combine(|i| Ok(parts[i].0))?,
+                pick.combine(|i| Ok(parts[i].1))?,
+            )
+        }
+    };
     let mut notes = Vec::new();
     let natural = natural_estimate(b, &film, &mut notes)?;
     let (direction, exponent) = mixing(b, natural.as_ref());
     Ok(blended((h_forced, h_still), natural.as_ref(), direction, exponent)?.0)
+}
+
+/// One forced correlation's h and its still-fluid h, W/(m²·K), as [`analyse_given_free`] computes
+/// them; the surface's properties are evaluated (once, kept in `surface` when given) only where
+/// they are read or the fluid is not air.
+fn forced_h(
+    b: &Body,
+    i: usize,
+    film: &Properties,
+    free: &Properties,
+    surface: Option<&mut Option<Properties>>,
+) -> Result<(f64, f64), EngineError> {
+    let list = b.shape.forced();
+    let c = &list[i.min(list.len() - 1)];
+    let at = at_reference(c.reference, film, free);
+    let air = matches!(b.fluid, Fluid::DryAir | Fluid::HumidAir(_));
+    let groups = if c.surface || !air {
+        match surface {
+            Some(slot) => {
+                if slot.is_none() {
+                    *slot = Some(b.fluid.at(b.t_s, b.p)?);
+                }
+                groups_at(b, at, slot.as_ref().unwrap_or(at), b.fluid.is_gas())
+            }
+            None => groups_at(b, at, &b.fluid.at(b.t_s, b.p)?, b.fluid.is_gas()),
+        }
+    } else {
+        // Not read by this correlation: Pr_s and μs stand at the reference values.
+        groups_at(b, at, at, b.fluid.is_gas())
+    };
+    let nu = finite_result("Nusselt number", (c.nu)(&groups).value)?;
+    let h = finite_result("heat-transfer coefficient", nu * at.k / b.d)?;
+    Ok((h, (c.nu_still)(&groups) * at.k / b.d))
 }
 
 /// No flag says a value lies outside its range (near-edge and advisory notes allowed).
@@ -557,7 +579,7 @@ pub fn recommended_given_free(b: &Body, free: &Properties) -> Result<Pick, Engin
         let at = at_reference(c.reference, &film, free);
         let nu = (c.nu)(&groups_at(b, at, &surface, gas));
         finite_result("Nusselt number", nu.value)?;
-        Ok(Some(nu.flags))
+        Ok(Some(nu.decades_outside()))
     })
 }
 

@@ -201,7 +201,7 @@ pub fn recommended_points(shape: Shape, a: &Analysis) -> Vec<(f64, f64, bool)> {
                 .map(|(c, e)| (c.nu)(&Groups { re, ..e.groups }))
                 .collect();
             let pick = crate::engine::pick::pick::<()>(at.len(), |j| {
-                Ok((!forced[j].alternate).then(|| at[j].flags.clone()))
+                Ok((!forced[j].alternate).then(|| at[j].decades_outside()))
             })
             .ok()?;
             let nu: f64 = pick.shares().map(|(j, w)| w * at[j].value).sum();

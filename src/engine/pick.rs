@@ -20,8 +20,6 @@
 //! jumps; and where the two lowest trade places their shares are equal, so nothing jumps there
 //! either. Alternates (a superseded table shown for comparison) never take part.
 
-use crate::engine::validity::{decades_outside, Flag};
-
 /// Half the width of the handover zone, in decades of distance outside a range; also the
 /// score added for each place down the order of preference.
 pub const HANDOVER: f64 = 0.15;
@@ -36,6 +34,12 @@ pub struct Pick {
 }
 
 impl Pick {
+    /// The one correlation that carries all the weight, if there is one.
+    pub fn only(&self) -> Option<usize> {
+        let i = self.main();
+        (self.weights[i] == 1.0).then_some(i)
+    }
+
     /// All the weight on correlation `i`.
     pub fn single(i: usize) -> Pick {
         let mut weights = [0.0; MAX_FORCED];
@@ -86,59 +90,61 @@ impl Pick {
     }
 }
 
-/// Picks from the correlations' flags, taken in the shape's order: `flags_of(i)` evaluates
-/// correlation `i` and returns its flags (or `None` for an alternate, which takes no part).
-/// Stops evaluating as soon as no later correlation could get a share.
+/// Picks from the correlations' distances outside their ranges, taken in the shape's order:
+/// `outside(i)` evaluates correlation `i` and returns its distance in decades
+/// ([`crate::engine::validity::decades_outside`] of its flags), or `None` for an alternate, which
+/// takes no part. Stops evaluating as soon as no later correlation could get a share.
 pub fn pick<E>(
     n: usize,
-    mut flags_of: impl FnMut(usize) -> Result<Option<Vec<Flag>>, E>,
+    mut outside: impl FnMut(usize) -> Result<Option<f64>, E>,
 ) -> Result<Pick, E> {
-    let mut scores = [f64::INFINITY; MAX_FORCED];
+    // The lowest score and the runner-up, as (index, score).
+    let mut best: Option<(usize, f64)> = None;
+    let mut second: Option<(usize, f64)> = None;
     let mut rank = 0.0;
-    let mut lowest = f64::INFINITY;
-    for (i, score) in scores.iter_mut().enumerate().take(n.min(MAX_FORCED)) {
+    for i in 0..n.min(MAX_FORCED) {
         // Every later correlation scores at least HANDOVER × its rank: none can share.
-        if lowest + HANDOVER <= HANDOVER * rank {
+        if best.is_some_and(|(_, lo)| lo + HANDOVER <= HANDOVER * rank) {
             break;
         }
-        let Some(flags) = flags_of(i)? else {
+        let Some(d) = outside(i)? else {
             continue;
         };
-        *score = decades_outside(&flags) + HANDOVER * rank;
-        lowest = lowest.min(*score);
+        let score = d + HANDOVER * rank;
         rank += 1.0;
-    }
-    Ok(from_scores(&scores, lowest))
-}
-
-fn from_scores(scores: &[f64; MAX_FORCED], lowest: f64) -> Pick {
-    let Some(best) = scores.iter().position(|&s| s == lowest && s.is_finite()) else {
-        return Pick::single(0);
-    };
-    let mut second: Option<usize> = None;
-    for (i, &s) in scores.iter().enumerate() {
-        if i != best && s.is_finite() && second.is_none_or(|j| s < scores[j]) {
-            second = Some(i);
+        match best {
+            Some((_, lo)) if score >= lo => {
+                if second.is_none_or(|(_, s2)| score < s2) {
+                    second = Some((i, score));
+                }
+            }
+            _ => {
+                second = best;
+                best = Some((i, score));
+            }
         }
     }
-    let share = second.map_or(0.0, |j| {
-        ((HANDOVER - (scores[j] - lowest)) / (2.0 * HANDOVER)).max(0.0)
-    });
-    match second {
-        Some(j) if share > 0.0 => {
-            let mut weights = [0.0; MAX_FORCED];
-            weights[best] = 1.0 - share;
-            weights[j] = share;
-            Pick { weights }
+    Ok(match (best, second) {
+        (Some((b, lo)), Some((j, s2))) => {
+            let share = (HANDOVER - (s2 - lo)) / (2.0 * HANDOVER);
+            if share > 0.0 {
+                let mut weights = [0.0; MAX_FORCED];
+                weights[b] = 1.0 - share;
+                weights[j] = share;
+                Pick { weights }
+            } else {
+                Pick::single(b)
+            }
         }
-        _ => Pick::single(best),
-    }
+        (Some((b, _)), None) => Pick::single(b),
+        _ => Pick::single(0),
+    })
 }
 
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::engine::validity::{FlagKind, Range};
+    use crate::engine::validity::{decades_outside, Flag, FlagKind, Range};
 
     const RE: Range = Range {
         quantity: "Re",
@@ -153,7 +159,10 @@ mod tests {
     }
 
     fn run(values: &[f64]) -> Pick {
-        pick::<()>(values.len(), |i| Ok(Some(outside(values[i])))).unwrap()
+        pick::<()>(values.len(), |i| {
+            Ok(Some(decades_outside(&outside(values[i]))))
+        })
+        .unwrap()
     }
 
     #[test]
@@ -167,7 +176,7 @@ mod tests {
         // 1.5 decades above the first, 0.5 below the second, 1 decade above the third: scores
         // 1.5, 0.65, 1.3.
         let vals = [31_623.0 * 1.0, 10f64.powf(0.5), 10_000.0];
-        let p = pick::<()>(3, |i| Ok(Some(outside(vals[i])))).unwrap();
+        let p = pick::<()>(3, |i| Ok(Some(decades_outside(&outside(vals[i]))))).unwrap();
         assert_eq!(p, Pick::single(1));
     }
 
@@ -196,7 +205,7 @@ mod tests {
         let mut asked = Vec::new();
         let p = pick::<()>(3, |i| {
             asked.push(i);
-            Ok((i != 0).then(|| outside(500.0)))
+            Ok((i != 0).then(|| decades_outside(&outside(500.0))))
         })
         .unwrap();
         assert_eq!(p, Pick::single(1));

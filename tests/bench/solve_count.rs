@@ -8,7 +8,8 @@
 //!     callgrind_annotate /tmp/cg.out | head -40
 //!
 //! The argument picks the work (`solve`, `inverse`, `demo`: the demo scenario's whole evaluation,
-//! or `water`: every cylinder correlation in water) and the count.
+//! `water`: every cylinder correlation in water, `air` and `sphere`: every cylinder or sphere
+//! correlation in air) and the count.
 
 #[path = "field_job.rs"]
 mod field_job;
@@ -31,6 +32,16 @@ fn main() {
                 // The criterion benchmark's cylinder in water: every correlation, three IF97 sets.
                 use leeward::engine::body::{analyse, Shape};
                 let b = field_job::body(Shape::Cylinder, leeward::engine::props::Fluid::Water);
+                sum += analyse(black_box(&b)).expect("analyses").h;
+            }
+            "air" | "sphere" => {
+                use leeward::engine::body::{analyse, Shape};
+                let shape = if what == "air" {
+                    Shape::Cylinder
+                } else {
+                    Shape::Sphere
+                };
+                let b = field_job::body(shape, leeward::engine::props::Fluid::DryAir);
                 sum += analyse(black_box(&b)).expect("analyses").h;
             }
             "demo" => {
