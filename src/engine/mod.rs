@@ -16,6 +16,7 @@ pub mod layers;
 pub mod pick;
 pub mod props;
 pub mod scenario;
+pub mod shape;
 pub mod solve;
 pub mod store;
 pub mod survey;
