@@ -7,4 +7,5 @@ mod fixture;
 mod fluid_reference;
 mod property_laws;
 mod recommendation;
+mod snapshot;
 mod worked_examples;
