@@ -143,6 +143,7 @@ pub struct Plan {
 }
 
 pub fn plan_import(current: &Store, incoming: &Store) -> Plan {
+    let incoming = distinct_names(current, incoming);
     let mut plan = Plan {
         add: Vec::new(),
         replace: Vec::new(),
@@ -157,8 +158,31 @@ pub fn plan_import(current: &Store, incoming: &Store) -> Plan {
     plan
 }
 
+/// The incoming store with names repeated inside it made distinct: the first of a name keeps it
+/// (and replaces a saved item of that name, as the plan says); each later one is renamed
+/// "name (n)" to a name free in both stores. The plan and the import use the same names.
+pub fn distinct_names(current: &Store, incoming: &Store) -> Store {
+    let mut seen = std::collections::HashSet::new();
+    let mut namer = Namer::new(
+        current
+            .items
+            .iter()
+            .chain(incoming.items.iter())
+            .map(|i| i.name.as_str()),
+    );
+    let mut out = incoming.clone();
+    for i in out.items.iter_mut() {
+        if !seen.insert(i.name.clone()) {
+            i.name = namer.name(&i.name);
+            seen.insert(i.name.clone());
+        }
+    }
+    out
+}
+
 /// Carry out an import the user has seen the plan of.
 pub fn apply_import(current: &Store, incoming: &Store) -> Store {
+    let incoming = distinct_names(current, incoming);
     let mut out = current.clone();
     for i in &incoming.items {
         match out.items.iter_mut().find(|c| c.name == i.name) {
@@ -170,20 +194,51 @@ pub fn apply_import(current: &Store, incoming: &Store) -> Store {
     out
 }
 
-/// A name not yet used: `base`, or `base (2)`, `base (3)` …
+/// A name not yet used in `store`: `base`, or `base (2)`, `base (3)` … (see [`Namer`]).
 pub fn free_name(store: &Store, base: &str) -> String {
-    let base = if base.trim().is_empty() {
-        "Scenario"
-    } else {
-        base.trim()
-    };
-    if !store.items.iter().any(|i| i.name == base) {
-        return clip(base);
+    Namer::new(store.items.iter().map(|i| i.name.as_str())).name(base)
+}
+
+/// Hands out names not yet taken, each at most [`MAX_NAME`] characters: `base`, or `base (n)`
+/// with the smallest n ≥ 2 free, the base clipped first so that the number always fits (a
+/// clipped candidate could otherwise repeat forever). Linear in time: the next number to try is
+/// kept per base, so naming many items alike costs no more than naming them apart.
+#[derive(Debug, Clone, Default)]
+pub struct Namer {
+    taken: std::collections::HashSet<String>,
+    next: std::collections::HashMap<String, u64>,
+}
+
+impl Namer {
+    pub fn new<'a>(names: impl IntoIterator<Item = &'a str>) -> Self {
+        Namer {
+            taken: names.into_iter().map(str::to_owned).collect(),
+            next: Default::default(),
+        }
     }
-    (2..)
-        .map(|n| clip(&format!("{base} ({n})")))
-        .find(|c| !store.items.iter().any(|i| &i.name == c))
-        .expect("some number is free")
+
+    /// A free name for `base`, now taken.
+    pub fn name(&mut self, base: &str) -> String {
+        let base = match clip(base) {
+            b if b.is_empty() => "Scenario".to_owned(),
+            b => b,
+        };
+        if self.taken.insert(base.clone()) {
+            return base;
+        }
+        let mut n = self.next.get(&base).copied().unwrap_or(2);
+        loop {
+            let suffix = format!(" ({n})");
+            let room = MAX_NAME - suffix.chars().count();
+            let stem: String = base.chars().take(room).collect();
+            let candidate = format!("{}{suffix}", stem.trim_end());
+            n += 1;
+            if self.taken.insert(candidate.clone()) {
+                self.next.insert(base, n);
+                return candidate;
+            }
+        }
+    }
 }
 
 #[cfg(test)]
@@ -255,5 +310,63 @@ mod tests {
         let after = apply_import(&cur, &inc);
         assert_eq!(after.items.len(), 3);
         assert_eq!(free_name(&after, "New tank"), "New tank (2)");
+    }
+
+    /// Regression: a name of 118–120 characters froze the tab when it was taken, because each
+    /// candidate "name (n)" was clipped back to the same 120 characters. Every length 0–200,
+    /// taken once, twice and three times, gives distinct names of at most 120 characters.
+    #[test]
+    fn free_name_at_120_characters_does_not_loop() {
+        for len in 0..=200 {
+            let base: String = "ä".repeat(len);
+            let mut store = Store::default();
+            for _ in 0..4 {
+                let n = free_name(&store, &base);
+                assert!(n.chars().count() <= MAX_NAME, "{len}: {n}");
+                assert!(
+                    !store.items.iter().any(|i| i.name == n),
+                    "{len}: {n} repeats"
+                );
+                store.items.push(Saved::new(&n, "", "", &DEMO, System::Si));
+            }
+        }
+    }
+
+    /// Naming 10,000 items alike takes linear time (it once took minutes): each gets the next
+    /// number, and all are distinct.
+    #[test]
+    fn naming_many_alike_is_linear_and_distinct() {
+        let mut namer = Namer::new(["Pipe"]);
+        let names: Vec<String> = (0..10_000).map(|_| namer.name("Pipe")).collect();
+        assert_eq!(names[0], "Pipe (2)");
+        assert_eq!(names[9_999], "Pipe (10001)");
+        let set: std::collections::HashSet<_> = names.iter().collect();
+        assert_eq!(set.len(), names.len());
+    }
+
+    /// Regression: a file with two entries of one name kept only the second, silently, although
+    /// the plan listed both. Now the second is renamed, in the plan and in the import alike.
+    #[test]
+    fn an_import_with_a_repeated_name_keeps_both() {
+        let roof = Saved::new("Roof A", "", "", &DEMO, System::Si);
+        let incoming = Store {
+            items: vec![roof.clone(), roof.clone()],
+            unreadable: vec![],
+        };
+        let plan = plan_import(&Store::default(), &incoming);
+        assert_eq!(plan.add, vec!["Roof A", "Roof A (2)"]);
+        let after = apply_import(&Store::default(), &incoming);
+        let names: Vec<&str> = after.items.iter().map(|i| i.name.as_str()).collect();
+        assert_eq!(names, vec!["Roof A", "Roof A (2)"]);
+        // Against a saved "Roof A": the first replaces it, the second is added beside it.
+        let current = Store {
+            items: vec![roof.clone()],
+            unreadable: vec![],
+        };
+        let plan = plan_import(&current, &incoming);
+        assert_eq!(
+            (plan.replace, plan.add),
+            (vec!["Roof A".to_string()], vec!["Roof A (2)".to_string()])
+        );
     }
 }

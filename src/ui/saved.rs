@@ -157,8 +157,9 @@ pub fn SavedPanel(
             let (rows, errors) = survey::from_csv(&text);
             let mut next = saved.get_untracked();
             let n = rows.len();
+            let mut namer = store::Namer::new(next.items.iter().map(|i| i.name.as_str()));
             for mut r in rows {
-                r.name = store::free_name(&next, &r.name);
+                r.name = namer.name(&r.name);
                 next.items.push(r);
             }
             let report = if errors.is_empty() {
