@@ -274,9 +274,9 @@ pub fn analyse_given_free(
     }
     let pick = match fixed {
         Some(p) => p,
-        None => pick::pick::<EngineError>(forced.len(), |i| {
-            Ok((!forced[i].alternate).then_some(forced[i].outside))
-        })?,
+        None => pick::pick(forced.len(), &mut |i| {
+            (!forced[i].alternate).then_some(forced[i].outside)
+        }),
     };
     let recommended = pick.main().min(forced.len() - 1);
     // Lowest and highest h among the correlations inside their ranges, and how many.
@@ -465,16 +465,26 @@ pub fn recommended_given_free(b: &Body, free: &Properties) -> Result<Pick, Engin
     let surface = b.fluid.at(b.t_s, b.p)?;
     let gas = b.fluid.is_gas();
     let list = b.shape.forced();
-    pick::pick(list.len(), |i| {
+    let mut failed = None;
+    let p = pick::pick(list.len(), &mut |i| {
         let c = &list[i];
         if c.alternate {
-            return Ok(None);
+            return None;
         }
         let at = at_reference(c.reference, &film, free);
         let nu = (c.nu)(&groups_at(b, at, &surface, gas));
-        finite_result("Nusselt number", nu.value)?;
-        Ok(Some(nu.decades_outside()))
-    })
+        match finite_result("Nusselt number", nu.value) {
+            Ok(_) => Some(nu.decades_outside()),
+            Err(e) => {
+                failed.get_or_insert(e);
+                None
+            }
+        }
+    });
+    match failed {
+        Some(e) => Err(e),
+        None => Ok(p),
+    }
 }
 
 fn natural_estimate(

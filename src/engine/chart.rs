@@ -200,10 +200,9 @@ pub fn recommended_points(shape: Shape, a: &Analysis) -> Vec<(f64, f64, bool)> {
                 .zip(&a.forced)
                 .map(|(c, e)| (c.nu)(&Groups { re, ..e.groups }))
                 .collect();
-            let pick = crate::engine::pick::pick::<()>(at.len(), |j| {
-                Ok((!forced[j].alternate).then(|| at[j].decades_outside()))
-            })
-            .ok()?;
+            let pick = crate::engine::pick::pick(at.len(), &mut |j| {
+                (!forced[j].alternate).then(|| at[j].decades_outside())
+            });
             let nu: f64 = pick.shares().map(|(j, w)| w * at[j].value).sum();
             let inside = at[pick.main()]
                 .flags

@@ -162,7 +162,7 @@ pub fn plan_import(current: &Store, incoming: &Store) -> Plan {
 /// (and replaces a saved item of that name, as the plan says); each later one is renamed
 /// "name (n)" to a name free in both stores. The plan and the import use the same names.
 pub fn distinct_names(current: &Store, incoming: &Store) -> Store {
-    let mut seen = std::collections::HashSet::new();
+    let mut seen = Namer::default();
     let mut namer = Namer::new(
         current
             .items
@@ -172,9 +172,9 @@ pub fn distinct_names(current: &Store, incoming: &Store) -> Store {
     );
     let mut out = incoming.clone();
     for i in out.items.iter_mut() {
-        if !seen.insert(i.name.clone()) {
+        if !seen.taken.insert(fnv(&i.name), 1) {
             i.name = namer.name(&i.name);
-            seen.insert(i.name.clone());
+            seen.taken.insert(fnv(&i.name), 1);
         }
     }
     out
@@ -201,43 +201,108 @@ pub fn free_name(store: &Store, base: &str) -> String {
 
 /// Hands out names not yet taken, each at most [`MAX_NAME`] characters: `base`, or `base (n)`
 /// with the smallest n ≥ 2 free, the base clipped first so that the number always fits (a
-/// clipped candidate could otherwise repeat forever). Linear in time: the next number to try is
-/// kept per base, so naming many items alike costs no more than naming them apart.
+/// clipped candidate could otherwise repeat forever). The next number to try is kept per base,
+/// so naming many items alike costs no more than naming them apart: linear in time overall.
 #[derive(Debug, Clone, Default)]
 pub struct Namer {
-    taken: std::collections::HashSet<String>,
-    next: std::collections::HashMap<String, u64>,
+    /// The names taken, by their 64-bit FNV-1a hash; `next` the number to try next per base.
+    taken: Table,
+    next: Table,
 }
 
 impl Namer {
     pub fn new<'a>(names: impl IntoIterator<Item = &'a str>) -> Self {
-        Namer {
-            taken: names.into_iter().map(str::to_owned).collect(),
-            next: Default::default(),
+        let mut n = Namer::default();
+        for name in names {
+            n.taken.insert(fnv(name), 1);
         }
+        n
     }
 
-    /// A free name for `base`, now taken.
+    /// A free name for `base`, now taken. Names are compared by hash: two different names with
+    /// the same 64-bit hash would only make a number be skipped, never a name be given twice.
     pub fn name(&mut self, base: &str) -> String {
         let base = match clip(base) {
             b if b.is_empty() => "Scenario".to_owned(),
             b => b,
         };
-        if self.taken.insert(base.clone()) {
+        let key = fnv(&base);
+        if self.taken.insert(key, 1) {
             return base;
         }
-        let mut n = self.next.get(&base).copied().unwrap_or(2);
+        let mut n = self.next.get(key).unwrap_or(2);
         loop {
             let suffix = format!(" ({n})");
             let room = MAX_NAME - suffix.chars().count();
             let stem: String = base.chars().take(room).collect();
             let candidate = format!("{}{suffix}", stem.trim_end());
             n += 1;
-            if self.taken.insert(candidate.clone()) {
-                self.next.insert(base, n);
+            if self.taken.insert(fnv(&candidate), 1) {
+                self.next.set(key, n);
                 return candidate;
             }
         }
+    }
+}
+
+fn fnv(s: &str) -> u64 {
+    s.bytes().fold(0xcbf2_9ce4_8422_2325, |h, b| {
+        (h ^ u64::from(b)).wrapping_mul(0x0100_0000_01b3)
+    })
+}
+
+/// A small open-addressing map from a 64-bit hash to a number (0 marks an empty slot, so a key
+/// of 0 is stored as 1): enough for the namer, without the hashing machinery of the standard
+/// collections in the page's wasm.
+#[derive(Debug, Clone, Default)]
+struct Table {
+    slots: Vec<(u64, u64)>,
+    len: usize,
+}
+
+impl Table {
+    fn slot(&self, key: u64) -> usize {
+        let mask = self.slots.len() - 1;
+        let mut i = (key as usize) & mask;
+        while self.slots[i].0 != 0 && self.slots[i].0 != key {
+            i = (i + 1) & mask;
+        }
+        i
+    }
+    fn get(&self, key: u64) -> Option<u64> {
+        let key = key.max(1);
+        if self.slots.is_empty() {
+            return None;
+        }
+        let s = self.slots[self.slot(key)];
+        (s.0 == key).then_some(s.1)
+    }
+    /// Set `key` to `value`.
+    fn set(&mut self, key: u64, value: u64) {
+        let key = key.max(1);
+        if (self.len + 1) * 2 > self.slots.len() {
+            let old = std::mem::take(&mut self.slots);
+            self.slots = vec![(0, 0); (old.len() * 2).max(16)];
+            self.len = 0;
+            for (k, v) in old.into_iter().filter(|s| s.0 != 0) {
+                let i = self.slot(k);
+                self.slots[i] = (k, v);
+                self.len += 1;
+            }
+        }
+        let i = self.slot(key);
+        if self.slots[i].0 == 0 {
+            self.len += 1;
+        }
+        self.slots[i] = (key, value);
+    }
+    /// Insert `key` if absent; whether it was.
+    fn insert(&mut self, key: u64, value: u64) -> bool {
+        if self.get(key).is_some() {
+            return false;
+        }
+        self.set(key, value);
+        true
     }
 }
 

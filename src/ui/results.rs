@@ -23,9 +23,11 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
         .map(|(i, e)| {
             let rec = i == a.recommended;
             let share = a.pick.weights.get(i).copied().unwrap_or(0.0);
-            let share_note = (share > 0.0 && share < 1.0)
-                .then(|| view! { <span class="rec-mark">{format!(" — {} % of the recommended value (handover)", format_sig(100.0 * share, 2))}</span> });
-            let alt_note = e.alternate.then_some(view! { <small class="detail">"Older table, shown for comparison; never recommended."</small> });
+            let note = if e.alternate {
+                Some("Older table, shown for comparison; never recommended.".to_string())
+            } else {
+                (share > 0.0 && share < 1.0).then(|| format!("{} % of the recommended value (handover)", format_sig(100.0 * share, 2)))
+            };
             let flags = e.flags.iter().map(|f| view! { <li>{f.message()}</li> }).collect_view();
             let status = if !e.valid() {
                 "outside its range"
@@ -36,7 +38,7 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
             };
             view! {
                 <tr class:recommended=rec data-correlation=e.id data-h=format!("{}", e.h) data-valid=e.valid().to_string()>
-                    <th scope="row">{e.name}{rec.then_some(view! { <span class="rec-mark">" ★ recommended"</span> })}{share_note}{alt_note}
+                    <th scope="row">{e.name}{rec.then_some(view! { <span class="rec-mark">" ★ recommended"</span> })}{note.map(|t| view! { <small class="detail">{t}</small> })}
                         {e.detail().map(|d| view! { <small class="detail">{d}</small> })}</th>
                     <td>{e.reference.short()}</td>
                     <td>{format_sig(e.groups.re, 4)}</td>
