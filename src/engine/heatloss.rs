@@ -96,6 +96,22 @@ pub fn surface_loss_with(
     })
 }
 
+/// The net radiative flux from a surface at `ts` to surroundings at `t_sur` (K), W/m²:
+/// ε·σ·(Ts⁴ − Tsur⁴).
+pub fn radiated_flux(emissivity: f64, ts: f64, t_sur: f64) -> f64 {
+    emissivity * SIGMA * (ts.powi(4) - t_sur.powi(4))
+}
+
+/// The outer surface of a body of size `d` (m): per metre of length for a cylinder or a bar
+/// (perimeter, m), the whole surface for a sphere (π·d², m²).
+pub fn outer_area(shape: crate::engine::body::Shape, d: f64) -> f64 {
+    if shape.is_sphere() {
+        std::f64::consts::PI * d * d
+    } else {
+        shape.perimeter_over_d().unwrap_or(std::f64::consts::PI) * d
+    }
+}
+
 /// The linearised radiation coefficient εσ(Ts² + Tsur²)(Ts + Tsur), W/(m²·K).
 pub fn radiation_coefficient(emissivity: f64, ts: f64, t_sur: f64) -> f64 {
     emissivity * SIGMA * (ts * ts + t_sur * t_sur) * (ts + t_sur)
@@ -131,15 +147,7 @@ fn at_surface(
     emissivity: f64,
     t_sur: f64,
 ) -> (f64, f64, f64, Option<Body>) {
-    let area = if stream.shape.is_sphere() {
-        std::f64::consts::PI * d * d
-    } else {
-        stream
-            .shape
-            .perimeter_over_d()
-            .unwrap_or(std::f64::consts::PI)
-            * d
-    };
+    let area = outer_area(stream.shape, d);
     let q_rad = area * emissivity * SIGMA * (ts.powi(4) - t_sur.powi(4));
     (
         area,

@@ -97,6 +97,49 @@ pub struct Construction {
     pub layers: Vec<Layer>,
 }
 
+impl Conductivity {
+    /// k(θ) through a data sheet's points: `temps` are the mean temperatures A, B and C (K),
+    /// `ks` the conductivities there (W/(m·K)); a third point is used when its k is positive and
+    /// the three temperatures are distinct (the quadratic through all three, by Newton's divided
+    /// differences), otherwise the line through A and B (constant when A = B).
+    pub fn through_points(temps: [f64; 3], ks: [f64; 3]) -> Conductivity {
+        let (x0, x1, x2) = (temps[0] - 273.15, temps[1] - 273.15, temps[2] - 273.15);
+        let (k0, k1, k2) = (ks[0], ks[1], ks[2]);
+        let distinct = (x1 - x0).abs() > 1e-9 && (x2 - x0).abs() > 1e-9 && (x2 - x1).abs() > 1e-9;
+        if k2 > 0.0 && distinct {
+            // Newton's divided differences, expanded to a + b·θ + c·θ².
+            let d01 = (k1 - k0) / (x1 - x0);
+            let d02 = (k2 - k0) / (x2 - x0);
+            let c = (d02 - d01) / (x2 - x1);
+            let b = d01 - c * (x0 + x1);
+            return Conductivity {
+                a: k0 - b * x0 - c * x0 * x0,
+                b,
+                c,
+            };
+        }
+        let slope = if (x1 - x0).abs() > 1e-9 {
+            (k1 - k0) / (x1 - x0)
+        } else {
+            0.0
+        };
+        Conductivity {
+            a: k0 - slope * x0,
+            b: slope,
+            c: 0.0,
+        }
+    }
+}
+
+/// Heat capacity per metre of a round wall of outside diameter `d` and thickness `t` (m), of a
+/// material with density `rho` (kg/m³) and specific heat `cp` (J/(kg·K)): ρ·cp·π(r₁² − r₀²),
+/// J/(m·K).
+pub fn wall_heat_capacity(d: f64, t: f64, rho: f64, cp: f64) -> f64 {
+    let r1 = d / 2.0;
+    let r0 = r1 - t;
+    rho * cp * std::f64::consts::PI * (r1 * r1 - r0 * r0)
+}
+
 impl Construction {
     /// Outer radius of every layer, in order.
     pub fn radii(&self) -> Vec<f64> {

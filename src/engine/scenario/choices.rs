@@ -1,0 +1,145 @@
+//! The user's choices that are not numbers: the stream's fluid, how pressure and humidity are
+//! given, the inside film, and whether the surface is typed or worked out.
+
+use super::*;
+
+/// The fluid of the stream.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum FluidKind {
+    DryAir,
+    HumidAir,
+    Water,
+    Steam,
+    EthyleneGlycol,
+    PropyleneGlycol,
+    User,
+}
+
+impl FluidKind {
+    pub const ALL: [FluidKind; 7] = [
+        FluidKind::DryAir,
+        FluidKind::HumidAir,
+        FluidKind::Water,
+        FluidKind::Steam,
+        FluidKind::EthyleneGlycol,
+        FluidKind::PropyleneGlycol,
+        FluidKind::User,
+    ];
+    /// Stable id in links.
+    pub fn id(&self) -> &'static str {
+        match self {
+            FluidKind::DryAir => "air",
+            FluidKind::HumidAir => "humid",
+            FluidKind::Water => "water",
+            FluidKind::Steam => "steam",
+            FluidKind::EthyleneGlycol => "eg",
+            FluidKind::PropyleneGlycol => "pg",
+            FluidKind::User => "user",
+        }
+    }
+    pub fn label(&self) -> &'static str {
+        match self {
+            FluidKind::DryAir => "Dry air",
+            FluidKind::HumidAir => "Humid air",
+            FluidKind::Water => "Liquid water",
+            FluidKind::Steam => "Steam",
+            FluidKind::EthyleneGlycol => "Ethylene glycol–water",
+            FluidKind::PropyleneGlycol => "Propylene glycol–water",
+            FluidKind::User => "My own fluid (constant properties)",
+        }
+    }
+    pub fn from_id(id: &str) -> Option<FluidKind> {
+        FluidKind::ALL.into_iter().find(|f| f.id() == id)
+    }
+}
+
+/// How the stream's pressure is given.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum PressureInput {
+    Absolute,
+    /// From the site elevation through the standard atmosphere.
+    Elevation,
+}
+
+/// How humid air's moisture is given.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum HumidityInput {
+    Relative,
+    DewPoint,
+}
+
+/// Where the inside film coefficient of a pipe comes from: typed (0 for none), or computed from
+/// the flow of a process fluid through the bore.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum InsideFilm {
+    Typed,
+    Water,
+    EthyleneGlycol,
+    PropyleneGlycol,
+}
+
+impl InsideFilm {
+    pub const ALL: [InsideFilm; 4] = [
+        InsideFilm::Typed,
+        InsideFilm::Water,
+        InsideFilm::EthyleneGlycol,
+        InsideFilm::PropyleneGlycol,
+    ];
+    /// Stable id in links.
+    pub fn id(&self) -> &'static str {
+        match self {
+            InsideFilm::Typed => "typed",
+            InsideFilm::Water => "water",
+            InsideFilm::EthyleneGlycol => "eg",
+            InsideFilm::PropyleneGlycol => "pg",
+        }
+    }
+    pub fn label(&self) -> &'static str {
+        match self {
+            InsideFilm::Typed => "Typed below (0: none)",
+            InsideFilm::Water => "Flow of water",
+            InsideFilm::EthyleneGlycol => "Flow of ethylene glycol–water",
+            InsideFilm::PropyleneGlycol => "Flow of propylene glycol–water",
+        }
+    }
+    pub fn from_id(id: &str) -> Option<Self> {
+        Self::ALL.into_iter().find(|m| m.id() == id)
+    }
+}
+
+/// The inside film as a scenario has it, once worked out.
+#[derive(Debug, Clone, PartialEq)]
+pub enum Inside {
+    /// Typed (0: none): the job takes `h_inside` as it stands.
+    Typed,
+    /// A process fluid is chosen but nothing flows: the bore is at the process temperature.
+    Still(Properties),
+    /// Worked out from the flow through the bore.
+    Flowing(PipeFlow),
+}
+
+impl Inside {
+    /// The process fluid's properties at the process temperature, when a fluid is chosen.
+    pub fn props(&self) -> Option<&Properties> {
+        match self {
+            Inside::Typed => None,
+            Inside::Still(p) => Some(p),
+            Inside::Flowing(f) => Some(&f.props),
+        }
+    }
+    /// The range flags of the process fluid and of the inside correlation.
+    pub fn flags(&self) -> &[Flag] {
+        match self {
+            Inside::Typed => &[],
+            Inside::Still(p) => &p.flags,
+            Inside::Flowing(f) => &f.flags,
+        }
+    }
+}
+
+/// Whether the surface temperature is typed or solved from the process inside.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum SurfaceMode {
+    Given,
+    Solved,
+}

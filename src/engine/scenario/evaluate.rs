@@ -1,0 +1,429 @@
+//! The evaluation: a scenario in, an `Outcome` out (every number the page shows, the verdicts,
+//! the sweeps for the plots, the working), and the cautions that apply to it.
+
+use super::*;
+
+/// One step of the working, written so it can be checked by hand.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Step {
+    pub title: &'static str,
+    pub text: String,
+}
+
+/// The properties used at one temperature, and why that temperature.
+#[derive(Debug, Clone, PartialEq)]
+pub struct PropertyRow {
+    pub role: &'static str,
+    pub props: Properties,
+}
+
+/// Everything the page shows for one evaluation, SI.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Outcome {
+    pub shape: Shape,
+    pub fluid: &'static str,
+    pub pressure: f64,
+    pub film_temp: f64,
+    /// Dew point of humid air, K.
+    pub dew_point: Option<f64>,
+    pub properties: Vec<PropertyRow>,
+    /// Re and Pr of the recommended forced correlation, at its reference temperature.
+    pub reynolds: f64,
+    pub prandtl: f64,
+    /// Nu = h·D/k of the answer, k at the film temperature.
+    pub nusselt: f64,
+    /// The answer: mean convective heat-transfer coefficient, W/(m²·K).
+    pub h: f64,
+    /// Heat flow per metre of length, convection plus radiation, W/m (positive from the surface
+    /// outward); none for a sphere.
+    pub q_per_length: Option<f64>,
+    /// Heat flow from the whole body (over the length L for a prism), W.
+    pub q_total: f64,
+    /// The convective and radiative parts of `q_total`, W.
+    pub q_conv_total: f64,
+    pub q_rad_total: f64,
+    /// Linearised radiation coefficient εσ(Ts² + Tsur²)(Ts + Tsur), W/(m²·K).
+    pub h_rad: f64,
+    /// Surface temperature: as typed, or solved from the process inside.
+    pub surface_temp: f64,
+    /// Outer diameter the stream sees (over the insulation when solved), m.
+    pub outer_d: f64,
+    /// The solved job (process inside, layers) when the surface temperature is worked out.
+    pub job: Option<JobResult>,
+    /// The inside film worked out from the flow through the bore, when it is.
+    pub inside: Option<PipeFlow>,
+    /// Verdict cards: touch, condensation, freezing, the run, insulated against bare.
+    pub verdicts: Vec<Verdict>,
+    /// Energy bought per year to make up the loss, J/yr, and its cost per year.
+    pub annual_energy: f64,
+    pub annual_cost: f64,
+    /// Loss and surface temperature against the outer layer's thickness (solved, with layers):
+    /// (thickness m, heat flow W, surface K).
+    pub thickness_sweep: Vec<(f64, f64, f64)>,
+    /// Targets to mark on the plots: on heat flow over the run (the loss target per metre times
+    /// the length), W; on surface temperature (the touch limit, the dew point plus the margin), K.
+    pub loss_marks: Vec<(&'static str, f64)>,
+    pub surface_marks: Vec<(&'static str, f64)>,
+    /// Heat-transfer coefficient and heat flow against stream speed 0–20 m/s: (speed m/s,
+    /// h W/(m²·K), heat flow W, surface K).
+    pub wind_sweep: Vec<(f64, f64, f64, f64)>,
+    /// The recommended forced correlation's name.
+    pub method: &'static str,
+    pub regime: &'static str,
+    pub analysis: Analysis,
+    /// Flags on the answer: properties, the recommended correlation, natural convection, blend.
+    pub flags: Vec<Flag>,
+    pub working: Vec<Step>,
+}
+
+/// Evaluate a scenario. Errors only where nothing meaningful can be computed.
+pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
+    evaluate_with(s, true)
+}
+
+/// As [`evaluate`]; without the sweeps (the plots' data) and the written working when `sweeps` is
+/// false, for lists.
+pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError> {
+    for spec in FIELDS.iter().filter(|sp| s.uses(sp.field)) {
+        let v = s.get(spec.field);
+        let si_unit = units::units_of(spec.dim).next().expect("SI unit");
+        check_field(spec, v, si_unit).map_err(|_| EngineError::Undefined {
+            quantity: spec.label,
+            value: v,
+            unit: si_unit.symbol,
+            why: "outside the physical limits of the input",
+        })?;
+    }
+    if !s.solved() && s.surface_temp == s.fluid_temp {
+        return Err(EngineError::NoTemperatureDifference {
+            value: s.fluid_temp,
+            unit: "K",
+        });
+    }
+    let p = s.pressure_pa();
+    let fluid = s.fluid();
+    let mut flags = Vec::new();
+    if s.pressure_input == PressureInput::Elevation {
+        flags.extend(atmosphere::TROPOSPHERE.check("standard atmosphere", s.elevation, false));
+    }
+    let dew_point = match fluid {
+        Fluid::HumidAir(h) => {
+            Some(crate::engine::props::humid_air::moisture(s.fluid_temp, p, h)?.dew_point)
+        }
+        _ => None,
+    };
+    let stream = s.stream(p, fluid);
+    let inside = s.inside_flow()?;
+    let targets = Targets {
+        touch_limit: s.touch_limit,
+        dew_point,
+        dew_margin: s.dew_margin,
+        hours: s.hours,
+        price: s.price,
+        efficiency: s.efficiency,
+        mass_flow: s.mass_flow,
+        process_cp: inside.props().map(|pr| pr.cp).unwrap_or(s.process_cp),
+        process_water: !matches!(s.process_fluid(), Some(Fluid::Glycol(..))),
+        wall_heat_capacity: s.wall.properties().map(|(_, rho, cp)| {
+            crate::engine::layers::wall_heat_capacity(s.diameter, s.wall_thickness, rho, cp)
+        }),
+        loss_target: s.loss_target,
+        freeze_target: s.freeze_target,
+    };
+    let (a, ts, outer_d, job_result) = if s.solved() {
+        if s.layer_count > 0 && (s.k_temp_a - s.k_temp_b).abs() < 1e-9 && s.layer_ka != s.layer_kb {
+            return Err(EngineError::Undefined {
+                quantity: "mean temperature B",
+                value: s.k_temp_b,
+                unit: "K",
+                why: "the two data-sheet mean temperatures must differ when the two k values do",
+            });
+        }
+        let third = s.layer_kc[..s.layer_count.min(3)].iter().any(|k| *k > 0.0);
+        if third
+            && ((s.k_temp_c - s.k_temp_a).abs() < 1e-9 || (s.k_temp_c - s.k_temp_b).abs() < 1e-9)
+        {
+            return Err(EngineError::Undefined {
+                quantity: "mean temperature C",
+                value: s.k_temp_c,
+                unit: "K",
+                why:
+                    "the third data-sheet point needs its own mean temperature, apart from A and B",
+            });
+        }
+        let job = s.job_with(stream, &inside);
+        let mut r = crate::engine::job::evaluate(&job, &targets, s.layer_count)?;
+        if let Inside::Still(_) = &inside {
+            r.notes.push("No flow through the pipe: the inside film is not worked out, and the bore is taken at the process temperature (still fluid).".into());
+        }
+        let a = r
+            .solution
+            .loss
+            .analysis
+            .clone()
+            .ok_or(EngineError::NoTemperatureDifference {
+                value: s.fluid_temp,
+                unit: "K",
+            })?;
+        (a, r.solution.t_surface, r.solution.outer_d, Some(r))
+    } else {
+        (body::analyse(&stream)?, s.surface_temp, s.diameter, None)
+    };
+    let thickness_sweep = match &job_result {
+        Some(_) if sweeps && s.layer_count > 0 => {
+            let i = s.layer_count - 1;
+            let top = (2.0 * s.layer_t[i]).max(0.1);
+            grid_with(top, 12, s.layer_t[i])
+                .into_iter()
+                .filter_map(|x| {
+                    let mut t = *s;
+                    t.layer_t[i] = x;
+                    let o = quick(&t, p, fluid, &inside).ok()?;
+                    (o.0.is_finite() && o.1.is_finite()).then_some((x, o.0, o.1))
+                })
+                .collect()
+        }
+        _ => Vec::new(),
+    };
+    let wind_sweep = if sweeps {
+        grid_with(20.0, 10, s.speed)
+    } else {
+        Vec::new()
+    }
+    .into_iter()
+    .filter_map(|u| {
+        let mut t = *s;
+        t.speed = u;
+        let o = quick(&t, p, fluid, &inside).ok()?;
+        (o.0.is_finite() && o.1.is_finite() && o.2.is_finite()).then_some((u, o.2, o.0, o.1))
+    })
+    .collect();
+    let film = a.film.t;
+    let rec = a.recommended().clone();
+    let h = a.h;
+    let dt = ts - s.fluid_temp;
+    let h_rad = crate::engine::heatloss::radiation_coefficient(s.emissivity, ts, s.t_surround);
+    let rad_flux = crate::engine::heatloss::radiated_flux(s.emissivity, ts, s.t_surround);
+    let area_unit = crate::engine::heatloss::outer_area(s.shape, outer_d);
+    let run = if s.shape.is_sphere() { 1.0 } else { s.length };
+    let q_conv_unit = finite_result("convective heat flow", h * area_unit * dt)?;
+    let q_rad_unit = finite_result("radiative heat flow", area_unit * rad_flux)?;
+    let q_unit = q_conv_unit + q_rad_unit;
+    let q_per_length = s.shape.perimeter_over_d().map(|_| q_unit);
+    let q_total = finite_result("heat flow", q_unit * run)?;
+    let annual_energy = finite_result(
+        "energy per year",
+        crate::engine::job::annual_energy(q_total, s.hours, s.efficiency),
+    )?;
+    let annual_cost = finite_result("cost per year", annual_energy * s.price)?;
+    let mut verdicts = match &job_result {
+        Some(r) => r.verdicts.clone(),
+        None => given_verdicts(s, ts, dew_point),
+    };
+    if s.cools() {
+        if let Some(m) = s.wall.properties() {
+            verdicts.push(crate::engine::job::lumped(
+                s.shape == Shape::Sphere,
+                outer_d,
+                h + h_rad,
+                m,
+                s.fluid_temp,
+                ts,
+                s.cool_target,
+            ));
+        }
+    }
+    crate::engine::job::sanitize(&mut verdicts);
+    let nusselt = finite_result("Nusselt number", h * outer_d / a.film.k)?;
+
+    for props in [&a.film, &a.free, &a.surface] {
+        for f in &props.flags {
+            if !flags.contains(f) {
+                flags.push(f.clone());
+            }
+        }
+    }
+    flags.extend(rec.flags.iter().cloned());
+    if let Some(n) = &a.natural {
+        flags.extend(n.flags.iter().cloned());
+    }
+    flags.extend(a.flags.iter().cloned());
+    for f in inside.flags() {
+        if !flags.contains(f) {
+            flags.push(f.clone());
+        }
+    }
+
+    let w = WorkingInputs {
+        p,
+        dew_point,
+        fluid: fluid.name(),
+        ts,
+        outer_d,
+        q_conv_unit,
+        q_rad_unit,
+        h_rad,
+        q_total,
+        job: job_result.as_ref(),
+        inside: &inside,
+    };
+    let working = if sweeps {
+        working(s, &a, &w)
+    } else {
+        Vec::new()
+    };
+    let role = |r: &str| -> &'static str {
+        match r {
+            "film" => "film temperature Tf: Churchill–Bernstein, Hilpert, Ranz–Marshall, Jakob, natural convection",
+            "free" => "free stream T∞: Zukauskas, Whitaker, Gnielinski",
+            _ => "surface Ts: Pr_s and μs of the corrections",
+        }
+    };
+    Ok(Outcome {
+        shape: s.shape,
+        fluid: fluid.name(),
+        pressure: p,
+        film_temp: film,
+        dew_point,
+        properties: vec![
+            PropertyRow {
+                role: role("film"),
+                props: a.film.clone(),
+            },
+            PropertyRow {
+                role: role("free"),
+                props: a.free.clone(),
+            },
+            PropertyRow {
+                role: role("surface"),
+                props: a.surface.clone(),
+            },
+        ],
+        reynolds: rec.groups.re,
+        prandtl: rec.groups.pr,
+        nusselt,
+        h,
+        q_per_length,
+        q_total,
+        q_conv_total: q_conv_unit * run,
+        q_rad_total: q_rad_unit * run,
+        h_rad,
+        surface_temp: ts,
+        outer_d,
+        job: job_result,
+        inside: match inside {
+            Inside::Flowing(f) => Some(f),
+            _ => None,
+        },
+        verdicts,
+        annual_energy,
+        annual_cost,
+        thickness_sweep,
+        wind_sweep,
+        loss_marks: if s.uses(Field::LossTarget) && s.loss_target > 0.0 {
+            vec![("loss target", s.loss_target * s.length)]
+        } else {
+            Vec::new()
+        },
+        surface_marks: std::iter::once(("touch limit", s.touch_limit))
+            .chain(dew_point.map(|td| ("dew point + margin", td + s.dew_margin)))
+            .collect(),
+        method: rec.name,
+        regime: s.shape.regime(rec.groups.re),
+        analysis: a,
+        flags,
+        working,
+    })
+}
+
+/// `steps` equal steps over 0..=top, with `also` (the operating point) put in its place, so the
+/// plotted curve passes through the point marked on it.
+pub(crate) fn grid_with(top: f64, steps: usize, also: f64) -> Vec<f64> {
+    let mut g: Vec<f64> = (0..=steps).map(|k| top * k as f64 / steps as f64).collect();
+    if also.is_finite() && also >= 0.0 && !g.contains(&also) {
+        g.push(also);
+        g.sort_by(|a, b| a.total_cmp(b));
+    }
+    g
+}
+
+/// The heat flow (W, whole run or body), surface temperature and convective h of a scenario, without
+/// the working or the verdicts: what the sweeps need.
+pub(crate) fn quick(
+    s: &Scenario,
+    p: f64,
+    fluid: Fluid,
+    inside: &Inside,
+) -> Result<(f64, f64, f64), EngineError> {
+    let stream = s.stream(p, fluid);
+    let run = if s.shape == Shape::Sphere {
+        1.0
+    } else {
+        s.length
+    };
+    if s.solved() {
+        let job = s.job_with(stream, inside);
+        let sol = crate::engine::heatloss::solve_lean(&job)?;
+        Ok((sol.q * run, sol.t_surface, sol.loss.h_conv))
+    } else {
+        let l = crate::engine::heatloss::surface_loss_lean(
+            &stream,
+            s.diameter,
+            s.surface_temp,
+            s.emissivity,
+            s.t_surround,
+        )?;
+        Ok(((l.q_conv + l.q_rad) * run, s.surface_temp, l.h_conv))
+    }
+}
+
+/// Touch and condensation verdicts for a typed surface temperature (no thickness to offer).
+pub(crate) fn given_verdicts(s: &Scenario, ts: f64, dew_point: Option<f64>) -> Vec<Verdict> {
+    use crate::engine::job::{DEW_CAUTION, TOUCH_CAUTION};
+    let mut out = Vec::new();
+    if ts > s.touch_limit {
+        out.push(Verdict {
+            id: "touch",
+            title: "Touch",
+            ok: false,
+            summary: "The surface is above the touch limit. Work out the surface from the process temperature with an insulation layer to see the thickness that meets it.".into(),
+            figures: vec![("surface", ts, Dim::Temperature), ("limit", s.touch_limit, Dim::Temperature)],
+            caution: Some(TOUCH_CAUTION),
+        });
+    }
+    if let Some(td) = dew_point {
+        if ts < td + s.dew_margin {
+            out.push(Verdict {
+                id: "dew",
+                title: "Condensation",
+                ok: false,
+                summary: "The surface is below the dew point plus the margin: it will sweat."
+                    .into(),
+                figures: vec![
+                    ("surface", ts, Dim::Temperature),
+                    ("dew point", td, Dim::Temperature),
+                    ("margin", s.dew_margin, Dim::TemperatureDifference),
+                ],
+                caution: Some(DEW_CAUTION),
+            });
+        }
+    }
+    out
+}
+
+/// The cautions that apply to this result: hot surface (above the touch limit), condensation,
+/// freezing. Each defers to local codes and licensed practice.
+pub fn cautions(s: &Scenario, o: &Outcome) -> Vec<&'static str> {
+    let mut out = Vec::new();
+    let ts = o.surface_temp;
+    if ts >= s.touch_limit {
+        out.push("Hot surface: at this temperature bare skin can be burned on contact. Guard or insulate it and follow the personnel-protection rules of your local codes; verify with a contact thermometer before touching.");
+    }
+    if o.dew_point.is_some_and(|td| ts <= td) {
+        out.push("The surface is at or below the stream's dew point: moisture will condense on it. Condensate wets insulation and corrodes steel; a vapour-tight design is a matter for a qualified designer and local codes.");
+    }
+    if ts < 273.15 {
+        out.push("The surface is below freezing: frost or ice can form on it, and water inside a line this cold can freeze and burst it. Follow local codes and licensed practice for freeze protection.");
+    }
+    out
+}

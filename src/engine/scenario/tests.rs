@@ -1,0 +1,440 @@
+use super::*;
+use crate::engine::heatloss::SIGMA;
+
+#[test]
+fn demo_evaluates_cleanly() {
+    let o = evaluate(&DEMO).unwrap();
+    assert!(o.flags.is_empty(), "{:?}", o.flags);
+    let q_per_length = o.q_per_length.unwrap();
+    assert!(q_per_length > 0.0 && o.h > 0.0);
+    // Energy bookkeeping: q' = h·π·D·ΔT + εσ(Ts⁴ − Tsur⁴)·π·D, Q = q'·L.
+    let pd = std::f64::consts::PI * DEMO.diameter;
+    let q = o.h * pd * (DEMO.surface_temp - DEMO.fluid_temp)
+        + DEMO.emissivity * SIGMA * (DEMO.surface_temp.powi(4) - DEMO.t_surround.powi(4)) * pd;
+    assert!((q - q_per_length).abs() <= 1e-12 * q);
+    assert!((o.q_total - q * DEMO.length).abs() <= 1e-12 * o.q_total);
+    assert!(o.dew_point.unwrap() < DEMO.fluid_temp);
+}
+
+#[test]
+fn every_fluid_evaluates_at_a_sensible_state() {
+    for kind in FluidKind::ALL {
+        let mut s = DEMO;
+        s.fluid = kind;
+        if kind == FluidKind::Steam {
+            s.fluid_temp = 420.0;
+            s.surface_temp = 400.0;
+        } else if kind != FluidKind::DryAir && kind != FluidKind::HumidAir {
+            s.fluid_temp = 290.0;
+            s.surface_temp = 330.0;
+            s.speed = 0.5;
+        }
+        let o = evaluate(&s).unwrap_or_else(|e| panic!("{kind:?}: {e}"));
+        assert!(o.h.is_finite() && o.h > 0.0, "{kind:?}");
+    }
+}
+
+#[test]
+fn elevation_lowers_pressure_and_density() {
+    let mut s = DEMO;
+    s.pressure_input = PressureInput::Elevation;
+    s.elevation = 2000.0;
+    let o = evaluate(&s).unwrap();
+    assert!((o.pressure - atmosphere::pressure_at(2000.0)).abs() < 1e-9);
+    let sea = evaluate(&DEMO).unwrap();
+    assert!(o.properties[0].props.rho < sea.properties[0].props.rho);
+}
+
+#[test]
+fn boiling_at_the_film_is_a_clear_error() {
+    let mut s = DEMO;
+    s.fluid = FluidKind::Water;
+    s.fluid_temp = 300.0;
+    s.surface_temp = 480.0;
+    let e = evaluate(&s).unwrap_err();
+    assert!(matches!(e, EngineError::WrongPhase { .. }), "{e}");
+    assert!(e.to_string().contains("373.1"), "{e}");
+}
+
+#[test]
+fn heat_flows_into_a_cold_surface_with_a_negative_sign() {
+    let mut s = DEMO;
+    s.surface_temp = 263.15;
+    let o = evaluate(&s).unwrap();
+    assert!(o.q_per_length.unwrap() < 0.0 && o.q_total < 0.0 && o.h > 0.0);
+}
+
+fn solved_demo() -> Scenario {
+    let mut s = DEMO;
+    s.surface_mode = SurfaceMode::Solved;
+    s
+}
+
+#[test]
+fn solved_surface_closes_the_energy_balance_and_beats_bare() {
+    let s = solved_demo();
+    let o = evaluate(&s).unwrap();
+    let j = o.job.as_ref().unwrap();
+    let sol = &j.solution;
+    assert!((o.q_per_length.unwrap() - sol.q).abs() <= 1e-9 * sol.q);
+    assert!(sol.residual.abs() <= 1e-9 * sol.q.abs());
+    assert!(o.surface_temp < s.process_temp && o.surface_temp > s.fluid_temp);
+    assert!((o.outer_d - (s.diameter + 2.0 * s.layer_t[0])).abs() < 1e-12);
+    assert!(j.bare.as_ref().unwrap().q > sol.q);
+    assert!(o.verdicts.iter().any(|v| v.id == "saving"));
+    // The same line with no layers is the bare answer.
+    let mut b = s;
+    b.layer_count = 0;
+    let ob = evaluate(&b).unwrap();
+    assert!((ob.q_total - j.bare.as_ref().unwrap().q * s.length).abs() < 1e-9 * ob.q_total);
+}
+
+#[test]
+fn sweeps_pass_through_the_operating_point() {
+    let o = evaluate(&DEMO).unwrap();
+    let at7 = o.wind_sweep.iter().find(|w| w.0 == 7.0).unwrap();
+    assert!((at7.2 - o.q_total).abs() <= 1e-12 * o.q_total.abs());
+    assert!((at7.1 - o.h).abs() <= 1e-12 * o.h);
+    assert!(o.thickness_sweep.is_empty());
+    let s = solved_demo();
+    let o = evaluate(&s).unwrap();
+    let at = *o
+        .thickness_sweep
+        .iter()
+        .find(|p| p.0 == s.layer_t[0])
+        .unwrap();
+    assert!((at.0 - s.layer_t[0]).abs() < 1e-15);
+    assert!((at.1 - o.q_total).abs() <= 1e-9 * o.q_total.abs());
+    // More insulation: less loss, cooler surface, all along the sweep.
+    for w in o.thickness_sweep.windows(2).skip(1) {
+        assert!(w[1].1 < w[0].1 && w[1].2 < w[0].2);
+    }
+}
+
+/// Humid air keeps the stream's moisture at every temperature it is evaluated at: a 150 °C
+/// line in 5 °C air at 70 % RH is computed (70 % RH at 150 °C would be more vapour than the air
+/// can hold), and the film properties use the stream's vapour pressure.
+#[test]
+fn humid_air_carries_the_streams_vapour_pressure() {
+    let mut s = solved_demo();
+    s.process_temp = 423.15;
+    let o = evaluate(&s).unwrap();
+    let m =
+        crate::engine::props::humid_air::moisture(s.fluid_temp, 101_325.0, Humidity::Relative(0.7))
+            .unwrap();
+    let film = crate::engine::props::humid_air::properties(
+        o.film_temp,
+        101_325.0,
+        Humidity::VapourPressure(m.vapour_pressure),
+    )
+    .unwrap();
+    assert_eq!(o.properties[0].props.mu, film.mu);
+    assert!((o.dew_point.unwrap() - m.dew_point).abs() < 1e-9);
+}
+
+/// A third data-sheet point makes k the quadratic through all three (hand check at each point).
+#[test]
+fn three_point_conductivity_passes_through_each_point() {
+    let mut s = solved_demo();
+    s.layer_kc = [0.060, 0.0, 0.0];
+    let k = s.layer_conductivity(0);
+    for (t, want) in [
+        (s.k_temp_a, 0.036),
+        (s.k_temp_b, 0.045),
+        (s.k_temp_c, 0.060),
+    ] {
+        assert!((k.at(t) - want).abs() < 1e-12, "{t}: {}", k.at(t));
+    }
+    assert!(k.c > 0.0, "the sheet's points curve upward");
+    assert!(evaluate(&s).is_ok());
+    s.k_temp_c = s.k_temp_b;
+    let e = evaluate(&s).unwrap_err();
+    assert_eq!(error_field(&e), Some(Field::KTempC));
+}
+
+#[test]
+fn mean_temperatures_must_differ_for_a_varying_k() {
+    let mut s = solved_demo();
+    s.k_temp_b = s.k_temp_a;
+    assert!(evaluate(&s).is_err());
+    s.layer_kb = s.layer_ka;
+    assert!(evaluate(&s).is_ok());
+}
+
+#[test]
+fn solved_fragment_round_trips() {
+    let mut s = solved_demo();
+    s.layer_count = 3;
+    s.wall = WallMaterial::User;
+    s.wall_k = 0.4;
+    s.layer_t = [0.01, 0.02, 0.03];
+    s.loss_target = 25.0;
+    s.freeze_target = 36_000.0;
+    let (back, _) = from_fragment(&to_fragment(&s, System::Si)).unwrap();
+    assert_eq!(back, s);
+}
+
+/// A hot-water line with 2 kg/s through it: the worked-out inside film, its place in the
+/// balance, the link, and the process fluid's own limits.
+#[test]
+fn inside_film_from_the_flow() {
+    let mut s = solved_demo();
+    s.mass_flow = 2.0;
+    s.process_temp = 353.15;
+    s.inside = InsideFilm::Water;
+    let o = evaluate(&s).unwrap();
+    let f = o.inside.as_ref().expect("a flow makes an inside film");
+    let d_in = s.diameter - 2.0 * s.wall_thickness;
+    let by_hand = crate::engine::correlations::internal::pipe_flow(
+        process_properties(&Fluid::Water, 353.15).unwrap(),
+        2.0,
+        d_in,
+        s.length,
+    )
+    .unwrap();
+    assert_eq!(f.h, by_hand.h);
+    // The bore sits below the process temperature by q/(h_i·π·d).
+    let sol = &o.job.as_ref().unwrap().solution;
+    let drop = sol.q / (f.h * std::f64::consts::PI * d_in);
+    assert!((s.process_temp - sol.t_bore - drop).abs() < 1e-9 * drop.max(1e-9));
+    assert!(
+        drop > 0.0 && drop < 0.5,
+        "a turbulent water film barely matters: {drop}"
+    );
+    // The film is the only change: typed with the same value, the answer is the same.
+    let mut typed = s;
+    typed.inside = InsideFilm::Typed;
+    typed.h_inside = f.h;
+    let ot = evaluate(&typed).unwrap();
+    assert_eq!(ot.job.unwrap().solution.q, sol.q);
+    assert!(o.working.iter().any(|w| w.text.contains("Gnielinski")));
+    assert!(!s.uses(Field::HInside) && !s.uses(Field::ProcessCp) && s.uses(Field::MassFlow));
+    // The link carries the choice.
+    let (back, _) = from_fragment(&to_fragment(&s, System::Si)).unwrap();
+    assert_eq!(back, s);
+    // Still water: no film, a note, the freezing card as before.
+    let mut still = s;
+    still.mass_flow = 0.0;
+    still.fluid_temp = 258.15;
+    still.process_temp = 283.15;
+    let os = evaluate(&still).unwrap();
+    assert!(os.inside.is_none());
+    assert!(os
+        .job
+        .as_ref()
+        .unwrap()
+        .notes
+        .iter()
+        .any(|n| n.contains("No flow")));
+    assert!(os.verdicts.iter().any(|v| v.id == "freeze"));
+    // Still glycol does not freeze like water: no freezing card.
+    still.inside = InsideFilm::PropyleneGlycol;
+    still.process_glycol = 0.4;
+    let og = evaluate(&still).unwrap();
+    assert!(!og.verdicts.iter().any(|v| v.id == "freeze"));
+    assert!(still.uses(Field::ProcessGlycol));
+    // Water below its freezing point inside is an error beside the process temperature.
+    let mut frozen = s;
+    frozen.process_temp = 268.15;
+    let e = evaluate(&frozen).unwrap_err();
+    assert_eq!(error_field(&e), Some(Field::ProcessTemp), "{e}");
+    // A sphere (a tank) keeps the typed film whatever the choice says.
+    let mut tank = s;
+    tank.shape = Shape::Sphere;
+    assert!(!tank.inside_computed() && tank.uses(Field::HInside));
+}
+
+/// The outlet of a flowing line uses the process fluid's own cp when the film is worked out.
+#[test]
+fn run_temperature_drop_uses_the_fluids_cp() {
+    let mut s = solved_demo();
+    s.mass_flow = 0.05;
+    s.inside = InsideFilm::EthyleneGlycol;
+    s.process_glycol = 0.3;
+    s.process_temp = 343.15;
+    let o = evaluate(&s).unwrap();
+    let flow = o.verdicts.iter().find(|v| v.id == "flow").unwrap();
+    let drop = flow.figures.iter().find(|f| f.0 == "drop").unwrap().1;
+    let cp = o.inside.as_ref().unwrap().props.cp;
+    assert!(cp > 3400.0 && cp < 3900.0, "{cp}");
+    // Against the same line with water's typed cp: a lower cp drops more.
+    let mut typed = s;
+    typed.inside = InsideFilm::Typed;
+    typed.h_inside = o.inside.as_ref().unwrap().h;
+    typed.process_cp = 4180.0;
+    let ot = evaluate(&typed).unwrap();
+    let flow_t = ot.verdicts.iter().find(|v| v.id == "flow").unwrap();
+    assert!(drop > flow_t.figures.iter().find(|f| f.0 == "drop").unwrap().1);
+}
+
+#[test]
+fn cautions_follow_the_surface_temperature() {
+    let o = evaluate(&DEMO).unwrap();
+    assert_eq!(cautions(&DEMO, &o).len(), 1, "the 65 °C demo line is hot");
+    let mut cold = DEMO;
+    cold.surface_temp = 263.15;
+    let o = evaluate(&cold).unwrap();
+    // Below the dew point and below freezing; not hot.
+    assert_eq!(cautions(&cold, &o).len(), 2);
+    let mut mild = DEMO;
+    mild.surface_temp = 300.0;
+    assert!(cautions(&mild, &evaluate(&mild).unwrap()).is_empty());
+}
+
+#[test]
+fn equal_temperatures_say_no_heat_flow() {
+    let mut s = DEMO;
+    s.surface_temp = s.fluid_temp;
+    let e = evaluate(&s).unwrap_err();
+    assert!(matches!(e, EngineError::NoTemperatureDifference { .. }));
+    assert_eq!(error_field(&e), Some(Field::SurfaceTemp));
+}
+
+#[test]
+fn still_air_gives_the_natural_answer() {
+    let mut s = DEMO;
+    s.speed = 0.0;
+    let o = evaluate(&s).unwrap();
+    let n = o.analysis.natural.as_ref().unwrap();
+    assert!((o.h - n.h).abs() <= 1e-12 * n.h);
+    assert!(o.analysis.mode().starts_with("natural"));
+    // The forced correlation is still shown, flagged outside its range.
+    assert!(o
+        .flags
+        .iter()
+        .any(|f| f.method == crate::engine::correlations::cylinder::CHURCHILL_BERNSTEIN));
+}
+
+#[test]
+fn still_user_fluid_without_beta_is_an_error_at_beta() {
+    let mut s = DEMO;
+    s.fluid = FluidKind::User;
+    s.user_beta = 0.0;
+    s.speed = 0.0;
+    let e = evaluate(&s).unwrap_err();
+    assert_eq!(error_field(&e), Some(Field::UserBeta));
+    s.speed = 0.2;
+    assert!(evaluate(&s).unwrap().analysis.natural.is_none());
+}
+
+#[test]
+fn every_shape_evaluates_and_sphere_has_no_per_length_figure() {
+    for shape in Shape::ALL {
+        let mut s = DEMO;
+        s.shape = shape;
+        let o = evaluate(&s).unwrap_or_else(|e| panic!("{shape:?}: {e}"));
+        assert!(o.h > 0.0 && o.q_total > 0.0);
+        assert_eq!(o.q_per_length.is_none(), shape == Shape::Sphere);
+        let mut v = s;
+        v.axis = Axis::Vertical;
+        assert!(evaluate(&v).unwrap().h > 0.0);
+    }
+}
+
+#[test]
+fn absurd_magnitudes_are_errors_not_nan() {
+    for (f, v) in [
+        (Field::Diameter, 1e308),
+        (Field::Diameter, 0.0),
+        (Field::Diameter, -1.0),
+        (Field::Speed, -1.0),
+        (Field::FluidTemp, -1.0),
+        (Field::Pressure, 1e308),
+        (Field::Speed, f64::NAN),
+        (Field::RelativeHumidity, 1.5),
+    ] {
+        let mut s = DEMO;
+        s.set(f, v);
+        assert!(evaluate(&s).is_err(), "{f:?} = {v}");
+    }
+}
+
+#[test]
+fn field_messages_speak_the_users_unit() {
+    let c = units::unit("C").unwrap();
+    let e = read_field(spec(Field::FluidTemp), "-300", c).unwrap_err();
+    assert!(e.contains("absolute zero") && e.contains("-273.1"), "{e}");
+    let mm = units::unit("mm").unwrap();
+    assert_eq!(read_field(spec(Field::Diameter), "60,3", mm), Ok(0.0603));
+    assert!(read_field(spec(Field::Diameter), "0", mm)
+        .unwrap_err()
+        .contains("more than 0 mm"));
+    assert!(read_field(spec(Field::Diameter), "", mm).is_err());
+    let pct = units::unit("%").unwrap();
+    assert!(read_field(spec(Field::RelativeHumidity), "120", pct)
+        .unwrap_err()
+        .contains("100 %"));
+}
+
+#[test]
+fn fragment_round_trips_exactly() {
+    let mut s = DEMO;
+    s.diameter = 0.0334;
+    s.speed = 1.0 / 3.0;
+    s.fluid_temp = 250.123456789;
+    s.surface_temp = 400.0;
+    s.pressure_input = PressureInput::Elevation;
+    s.elevation = 1234.5;
+    s.humidity_input = HumidityInput::DewPoint;
+    s.dew_point = 240.0;
+    s.wind = Wind::Up;
+    s.length = 3.25;
+    let (back, sys) = from_fragment(&to_fragment(&s, System::Us)).unwrap();
+    assert_eq!(back, s);
+    assert_eq!(sys, System::Us);
+    for kind in FluidKind::ALL {
+        let mut s = DEMO;
+        s.fluid = kind;
+        assert_eq!(from_fragment(&to_fragment(&s, System::Si)).unwrap().0, s);
+    }
+    for shape in Shape::ALL {
+        let mut s = DEMO;
+        s.shape = shape;
+        s.axis = Axis::Vertical;
+        if shape == Shape::Sphere {
+            s.axis = Axis::Horizontal;
+        }
+        assert_eq!(from_fragment(&to_fragment(&s, System::Si)).unwrap().0, s);
+    }
+}
+
+#[test]
+fn view_options_ride_along_and_leave_the_scenario_alone() {
+    let f = format!("{}&view=embed&lock=1", to_fragment(&DEMO, System::Si));
+    assert_eq!(
+        ViewOptions::from_fragment(&f),
+        ViewOptions {
+            embed: true,
+            locked: true
+        }
+    );
+    assert_eq!(from_fragment(&f).unwrap().0, DEMO);
+    assert_eq!(
+        ViewOptions::from_fragment("#v=1&view=full"),
+        ViewOptions::default()
+    );
+}
+
+#[test]
+fn hostile_or_malformed_fragments_are_refused() {
+    let long = format!("v=1&D={}", "1".repeat(5000));
+    for bad in [
+        "v=1&D=<script>alert(1)</script>",
+        "v=2&D=0.05",
+        "D=0.05",
+        "v=1&D=-1",
+        "v=1&D=NaN",
+        "v=1&U",
+        "v=1&u=imperial",
+        "v=1&f=<b>",
+        "v=1&pm=x",
+        "v=1&s=cube",
+        "v=1&w=sideways",
+        long.as_str(),
+    ] {
+        let e = from_fragment(bad).unwrap_err();
+        assert!(!e.contains('<'), "message echoes input: {e}");
+    }
+    // Missing keys take the demo's values; unknown keys are ignored.
+    assert_eq!(from_fragment("#v=1&future=3").unwrap().0, DEMO);
+}
