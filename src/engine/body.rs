@@ -372,9 +372,7 @@ fn blended(
     };
     let h = finite_result("heat-transfer coefficient", h)?;
     if h <= 0.0 {
-        return Err(EngineError::NonFiniteResult {
-            quantity: "heat-transfer coefficient (opposing flows cancel)",
-        });
+        return Err(EngineError::OpposingFlowsCancel);
     }
     Ok((h, flag))
 }
@@ -495,6 +493,7 @@ fn natural_estimate(
     if film.beta == 0.0 {
         if b.speed == 0.0 {
             return Err(EngineError::Undefined {
+                subject: crate::engine::error::Subject::Beta,
                 quantity: "expansion coefficient β",
                 value: 0.0,
                 unit: "1/K",

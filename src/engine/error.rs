@@ -3,12 +3,42 @@
 
 use std::fmt;
 
+/// What an error is about, as data: the input layer maps it to the field a person can change
+/// (`scenario::error_field`), never by reading the message.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Subject {
+    /// Nothing one input names.
+    General,
+    /// A scenario input, by its link key.
+    Input(&'static str),
+    /// The stream's fluid, or the process fluid inside a pipe.
+    StreamFluid,
+    ProcessFluid,
+    /// A user fluid's expansion coefficient β.
+    Beta,
+    /// The bore left inside the wall.
+    BoreRadius,
+    /// Layer `i` of a construction counted from the bore (0: the wall).
+    LayerThickness(usize),
+    LayerConductivity(usize),
+    /// The data sheet's second and third mean temperatures.
+    MeanTempB,
+    MeanTempC,
+    Emissivity,
+    /// The stream's moisture (relative humidity or vapour pressure), its dew point.
+    Humidity,
+    DewPoint,
+    /// A glycol–water mixture's glycol content.
+    GlycolFraction,
+}
+
 #[derive(Debug, Clone, PartialEq)]
 pub enum EngineError {
     /// An input was NaN or infinite.
     NonFinite { quantity: &'static str },
     /// A value outside what the formulation can be evaluated at at all (not merely outside its fit).
     Undefined {
+        subject: Subject,
         quantity: &'static str,
         value: f64,
         unit: &'static str,
@@ -19,6 +49,7 @@ pub enum EngineError {
     /// A fluid asked for in a phase it is not in at that state; `boundary` is the temperature of
     /// the phase change (saturation or freezing), K.
     WrongPhase {
+        subject: Subject,
         asked: &'static str,
         t: f64,
         boundary: f64,
@@ -26,6 +57,8 @@ pub enum EngineError {
     },
     /// A result came out non-finite (an input of absurd magnitude somewhere).
     NonFiniteResult { quantity: &'static str },
+    /// A stream against the buoyant flow cancels it: the blend leaves no heat-transfer coefficient.
+    OpposingFlowsCancel,
 }
 
 impl fmt::Display for EngineError {
@@ -37,6 +70,7 @@ impl fmt::Display for EngineError {
                 value,
                 unit,
                 why,
+                ..
             } => write!(f, "{quantity} = {value} {unit}: {why}"),
             EngineError::NoTemperatureDifference { value, unit } => write!(
                 f,
@@ -47,6 +81,7 @@ impl fmt::Display for EngineError {
                 t,
                 boundary,
                 why,
+                ..
             } => write!(
                 f,
                 "{asked} at {} K ({} °C): {why}; the phase changes at {} K ({} °C)",
@@ -58,6 +93,10 @@ impl fmt::Display for EngineError {
             EngineError::NonFiniteResult { quantity } => write!(
                 f,
                 "{quantity} came out too large to represent; check the inputs' magnitudes"
+            ),
+            EngineError::OpposingFlowsCancel => write!(
+                f,
+                "heat-transfer coefficient: the stream against the buoyant flow cancels it here (the blend gives none); change the stream's speed or direction"
             ),
         }
     }

@@ -325,6 +325,7 @@ fn solve_fixed(job: &Job, fixed: Option<Pick>, free: &Properties) -> Result<Core
     job.construction.check(t_lo, t_hi)?;
     if !(0.0..=1.0).contains(&job.emissivity) {
         return Err(EngineError::Undefined {
+            subject: crate::engine::error::Subject::Emissivity,
             quantity: "emissivity",
             value: job.emissivity,
             unit: "",

@@ -161,15 +161,17 @@ impl Construction {
     pub fn check(&self, t_lo: f64, t_hi: f64) -> Result<(), EngineError> {
         if self.r_in.is_nan() || self.r_in <= 0.0 {
             return Err(EngineError::Undefined {
+                subject: crate::engine::error::Subject::BoreRadius,
                 quantity: "bore radius",
                 value: self.r_in,
                 unit: "m",
                 why: "the wall is as thick as the pipe or thicker",
             });
         }
-        for l in &self.layers {
+        for (i, l) in self.layers.iter().enumerate() {
             if !l.thickness.is_finite() || l.thickness < 0.0 {
                 return Err(EngineError::Undefined {
+                    subject: crate::engine::error::Subject::LayerThickness(i),
                     quantity: "layer thickness",
                     value: l.thickness,
                     unit: "m",
@@ -179,6 +181,7 @@ impl Construction {
             let kmin = l.k.min_over(t_lo, t_hi);
             if kmin.is_nan() || kmin <= 0.0 {
                 return Err(EngineError::Undefined {
+                    subject: crate::engine::error::Subject::LayerConductivity(i),
                     quantity: "layer conductivity",
                     value: kmin,
                     unit: "W/(m·K)",

@@ -124,7 +124,7 @@ pub fn App() -> impl IntoView {
             },
             Err(e) => Shown {
                 outcome: prev.and_then(|p| p.outcome.clone()),
-                error_at: scenario::error_field(&e),
+                error_at: scenario::error_field(&s, &e),
                 error: Some(e.to_string()),
             },
         }

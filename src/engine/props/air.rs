@@ -229,6 +229,7 @@ pub fn properties(t: f64, p: f64) -> Result<Properties, EngineError> {
     finite("air pressure", p)?;
     if t <= 0.0 {
         return Err(EngineError::Undefined {
+            subject: crate::engine::error::Subject::General,
             quantity: "temperature",
             value: t,
             unit: "K",
@@ -237,6 +238,7 @@ pub fn properties(t: f64, p: f64) -> Result<Properties, EngineError> {
     }
     if p <= 0.0 {
         return Err(EngineError::Undefined {
+            subject: crate::engine::error::Subject::General,
             quantity: "pressure",
             value: p,
             unit: "Pa",

@@ -158,6 +158,7 @@ pub fn properties(g: Glycol, x: f64, t: f64, p: f64) -> Result<Properties, Engin
     finite("glycol concentration", x)?;
     if !(0.0..=0.6).contains(&x) {
         return Err(EngineError::Undefined {
+            subject: crate::engine::error::Subject::GlycolFraction,
             quantity: "glycol concentration",
             value: x * 100.0,
             unit: "% by mass",
@@ -167,6 +168,7 @@ pub fn properties(g: Glycol, x: f64, t: f64, p: f64) -> Result<Properties, Engin
     let tf = freezing_point(g, x);
     if t < tf {
         return Err(EngineError::WrongPhase {
+            subject: crate::engine::error::Subject::StreamFluid,
             asked: g.name(),
             t,
             boundary: tf,

@@ -155,6 +155,7 @@ fn vapour(t: f64, p: f64, h: Humidity) -> Result<(f64, f64), EngineError> {
             finite("relative humidity", rh)?;
             if t > water::T_CRIT {
                 return Err(EngineError::Undefined {
+                    subject: crate::engine::error::Subject::Humidity,
                     quantity: "relative humidity",
                     value: rh * 100.0,
                     unit: "%",
@@ -163,6 +164,7 @@ fn vapour(t: f64, p: f64, h: Humidity) -> Result<(f64, f64), EngineError> {
             }
             if !(0.0..=1.0).contains(&rh) {
                 return Err(EngineError::Undefined {
+                    subject: crate::engine::error::Subject::Humidity,
                     quantity: "relative humidity",
                     value: rh * 100.0,
                     unit: "%",
@@ -175,6 +177,7 @@ fn vapour(t: f64, p: f64, h: Humidity) -> Result<(f64, f64), EngineError> {
             finite("dew point", td)?;
             if td > t {
                 return Err(EngineError::Undefined {
+                    subject: crate::engine::error::Subject::DewPoint,
                     quantity: "dew point",
                     value: td,
                     unit: "K",
@@ -183,6 +186,7 @@ fn vapour(t: f64, p: f64, h: Humidity) -> Result<(f64, f64), EngineError> {
             }
             if td <= 0.0 {
                 return Err(EngineError::Undefined {
+                    subject: crate::engine::error::Subject::DewPoint,
                     quantity: "dew point",
                     value: td,
                     unit: "K",
@@ -195,6 +199,7 @@ fn vapour(t: f64, p: f64, h: Humidity) -> Result<(f64, f64), EngineError> {
             finite("vapour pressure", pv)?;
             if pv < 0.0 {
                 return Err(EngineError::Undefined {
+                    subject: crate::engine::error::Subject::Humidity,
                     quantity: "vapour pressure",
                     value: pv,
                     unit: "Pa",
@@ -206,6 +211,7 @@ fn vapour(t: f64, p: f64, h: Humidity) -> Result<(f64, f64), EngineError> {
     };
     if !pv.is_finite() {
         return Err(EngineError::Undefined {
+            subject: crate::engine::error::Subject::DewPoint,
             quantity: "dew point",
             value: t,
             unit: "K",
@@ -215,6 +221,7 @@ fn vapour(t: f64, p: f64, h: Humidity) -> Result<(f64, f64), EngineError> {
     }
     if pv >= p {
         return Err(EngineError::Undefined {
+            subject: crate::engine::error::Subject::Humidity,
             quantity: "vapour pressure",
             value: pv,
             unit: "Pa",

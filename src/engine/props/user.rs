@@ -26,6 +26,7 @@ pub fn properties(f: &UserFluid, t: f64, p: f64) -> Result<Properties, EngineErr
         finite(q, v)?;
         if v <= 0.0 {
             return Err(EngineError::Undefined {
+                subject: crate::engine::error::Subject::General,
                 quantity: q,
                 value: v,
                 unit: "SI",

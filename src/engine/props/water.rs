@@ -490,6 +490,7 @@ fn check_state(t: f64, p: f64) -> Result<(), EngineError> {
     finite("water pressure", p)?;
     if t <= 0.0 {
         return Err(EngineError::Undefined {
+            subject: crate::engine::error::Subject::General,
             quantity: "temperature",
             value: t,
             unit: "K",
@@ -498,6 +499,7 @@ fn check_state(t: f64, p: f64) -> Result<(), EngineError> {
     }
     if p <= 0.0 {
         return Err(EngineError::Undefined {
+            subject: crate::engine::error::Subject::General,
             quantity: "pressure",
             value: p,
             unit: "Pa",
@@ -519,6 +521,7 @@ pub fn liquid(t: f64, p: f64) -> Result<Properties, EngineError> {
     check_state(t, p)?;
     if t < 273.15 {
         return Err(EngineError::WrongPhase {
+            subject: crate::engine::error::Subject::StreamFluid,
             asked: "liquid water",
             t,
             boundary: 273.15,
@@ -528,6 +531,7 @@ pub fn liquid(t: f64, p: f64) -> Result<Properties, EngineError> {
     if let Some(ts) = saturation(p) {
         if t >= ts {
             return Err(EngineError::WrongPhase {
+                subject: crate::engine::error::Subject::StreamFluid,
                 asked: "liquid water",
                 t,
                 boundary: ts,
@@ -537,6 +541,7 @@ pub fn liquid(t: f64, p: f64) -> Result<Properties, EngineError> {
     } else if p * 1e-6 < P_CRIT {
         // Below the triple-point pressure there is no liquid at all.
         return Err(EngineError::Undefined {
+            subject: crate::engine::error::Subject::General,
             quantity: "pressure",
             value: p,
             unit: "Pa",
@@ -569,6 +574,7 @@ pub fn steam(t: f64, p: f64) -> Result<Properties, EngineError> {
     if let Some(ts) = saturation(p) {
         if t <= ts {
             return Err(EngineError::WrongPhase {
+                subject: crate::engine::error::Subject::StreamFluid,
                 asked: "steam",
                 t,
                 boundary: ts,

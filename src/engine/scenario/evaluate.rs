@@ -88,6 +88,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         let v = s.get(spec.field);
         let si_unit = units::units_of(spec.dim).next().expect("SI unit");
         check_field(spec, v, si_unit).map_err(|_| EngineError::Undefined {
+            subject: crate::engine::error::Subject::Input(spec.key),
             quantity: spec.label,
             value: v,
             unit: si_unit.symbol,
@@ -133,6 +134,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
     let (a, ts, outer_d, job_result) = if s.solved() {
         if s.layer_count > 0 && (s.k_temp_a - s.k_temp_b).abs() < 1e-9 && s.layer_ka != s.layer_kb {
             return Err(EngineError::Undefined {
+                subject: crate::engine::error::Subject::MeanTempB,
                 quantity: "mean temperature B",
                 value: s.k_temp_b,
                 unit: "K",
@@ -144,6 +146,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
             && ((s.k_temp_c - s.k_temp_a).abs() < 1e-9 || (s.k_temp_c - s.k_temp_b).abs() < 1e-9)
         {
             return Err(EngineError::Undefined {
+                subject: crate::engine::error::Subject::MeanTempC,
                 quantity: "mean temperature C",
                 value: s.k_temp_c,
                 unit: "K",

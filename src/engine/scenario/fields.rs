@@ -356,31 +356,49 @@ pub fn read_field(spec: &FieldSpec, text: &str, shown: &Unit) -> Result<f64, Str
     check_field(spec, shown.to_si(v), shown)
 }
 
-/// Where an evaluation error belongs on the page.
-pub fn error_field(e: &EngineError) -> Option<Field> {
-    match e {
-        EngineError::NoTemperatureDifference { .. } => Some(Field::SurfaceTemp),
-        EngineError::WrongPhase { asked, .. } if *asked == PROCESS_FLUID => {
-            Some(Field::ProcessTemp)
-        }
-        EngineError::WrongPhase { .. } => Some(Field::FluidTemp),
-        EngineError::NonFiniteResult { quantity } if quantity.contains("opposing") => {
-            Some(Field::Speed)
-        }
-        EngineError::Undefined { quantity, .. } => match *quantity {
-            "expansion coefficient β" => Some(Field::UserBeta),
-            "bore radius" => Some(Field::WallThickness),
-            "layer conductivity" => Some(Field::Layer1Kb),
-            "mean temperature B" => Some(Field::KTempB),
-            "mean temperature C" => Some(Field::KTempC),
-            "emissivity" => Some(Field::Emissivity),
-            "relative humidity" | "vapour pressure" => Some(Field::RelativeHumidity),
-            "dew point" => Some(Field::DewPoint),
-            "glycol concentration" => Some(Field::GlycolFraction),
-            _ => None,
+/// Where an evaluation error belongs on the page: the field a person can change, read from the
+/// error's `Subject` (data, never the message). In solved mode the surface is not an input, so a
+/// missing temperature difference belongs to the process temperature.
+pub fn error_field(s: &Scenario, e: &EngineError) -> Option<Field> {
+    use crate::engine::error::Subject as S;
+    let layer = |i: usize, wall: Field, of: [Field; 3]| match i {
+        0 => wall,
+        n => of[(n - 1).min(2)],
+    };
+    let field = match e {
+        EngineError::NoTemperatureDifference { .. } if s.solved() => Field::ProcessTemp,
+        EngineError::NoTemperatureDifference { .. } => Field::SurfaceTemp,
+        EngineError::OpposingFlowsCancel => Field::Speed,
+        EngineError::WrongPhase {
+            subject: S::ProcessFluid,
+            ..
+        } => Field::ProcessTemp,
+        EngineError::WrongPhase { .. } => Field::FluidTemp,
+        EngineError::Undefined { subject, .. } => match *subject {
+            S::Beta => Field::UserBeta,
+            S::BoreRadius => Field::WallThickness,
+            S::LayerThickness(i) => layer(
+                i,
+                Field::WallThickness,
+                [Field::Layer1T, Field::Layer2T, Field::Layer3T],
+            ),
+            S::LayerConductivity(i) => layer(
+                i,
+                Field::WallK,
+                [Field::Layer1Kb, Field::Layer2Kb, Field::Layer3Kb],
+            ),
+            S::MeanTempB => Field::KTempB,
+            S::MeanTempC => Field::KTempC,
+            S::Emissivity => Field::Emissivity,
+            S::Humidity => Field::RelativeHumidity,
+            S::DewPoint => Field::DewPoint,
+            S::GlycolFraction => Field::GlycolFraction,
+            S::Input(key) => FIELDS.iter().find(|f| f.key == key)?.field,
+            S::General | S::StreamFluid | S::ProcessFluid => return None,
         },
-        _ => None,
-    }
+        _ => return None,
+    };
+    Some(field)
 }
 
 /// How a phase error of the process fluid names it, so the page puts it beside the process

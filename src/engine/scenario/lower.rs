@@ -52,6 +52,7 @@ impl Scenario {
             EngineError::WrongPhase {
                 t, boundary, why, ..
             } => EngineError::WrongPhase {
+                subject: crate::engine::error::Subject::ProcessFluid,
                 asked: PROCESS_FLUID,
                 t,
                 boundary,

@@ -149,7 +149,7 @@ fn three_point_conductivity_passes_through_each_point() {
     assert!(evaluate(&s).is_ok());
     s.k_temp_c = s.k_temp_b;
     let e = evaluate(&s).unwrap_err();
-    assert_eq!(error_field(&e), Some(Field::KTempC));
+    assert_eq!(error_field(&s, &e), Some(Field::KTempC));
 }
 
 #[test]
@@ -237,7 +237,7 @@ fn inside_film_from_the_flow() {
     let mut frozen = s;
     frozen.process_temp = 268.15;
     let e = evaluate(&frozen).unwrap_err();
-    assert_eq!(error_field(&e), Some(Field::ProcessTemp), "{e}");
+    assert_eq!(error_field(&s, &e), Some(Field::ProcessTemp), "{e}");
     // A sphere (a tank) keeps the typed film whatever the choice says.
     let mut tank = s;
     tank.shape = Shape::Sphere;
@@ -287,7 +287,7 @@ fn equal_temperatures_say_no_heat_flow() {
     s.surface_temp = s.fluid_temp;
     let e = evaluate(&s).unwrap_err();
     assert!(matches!(e, EngineError::NoTemperatureDifference { .. }));
-    assert_eq!(error_field(&e), Some(Field::SurfaceTemp));
+    assert_eq!(error_field(&s, &e), Some(Field::SurfaceTemp));
 }
 
 #[test]
@@ -312,7 +312,7 @@ fn still_user_fluid_without_beta_is_an_error_at_beta() {
     s.user_beta = 0.0;
     s.speed = 0.0;
     let e = evaluate(&s).unwrap_err();
-    assert_eq!(error_field(&e), Some(Field::UserBeta));
+    assert_eq!(error_field(&s, &e), Some(Field::UserBeta));
     s.speed = 0.2;
     assert!(evaluate(&s).unwrap().analysis.natural.is_none());
 }
@@ -437,4 +437,40 @@ fn hostile_or_malformed_fragments_are_refused() {
     }
     // Missing keys take the demo's values; unknown keys are ignored.
     assert_eq!(from_fragment("#v=1&future=3").unwrap().0, DEMO);
+}
+
+/// Regression: a conductivity that falls below zero in insulation layer 2 was reported beside
+/// layer 1 (the page matched the message text). The error now names its layer as data.
+#[test]
+fn a_bad_conductivity_is_reported_beside_its_own_layer() {
+    let mut s = DEMO;
+    s.surface_mode = SurfaceMode::Solved;
+    s.layer_count = 3;
+    s.process_temp = 453.15;
+    // Layer 2's k falls from 0.05 at 10 °C to 0.001 at 100 °C: below zero well before 180 °C.
+    s.layer_ka[1] = 0.05;
+    s.layer_kb[1] = 0.001;
+    let e = evaluate(&s).unwrap_err();
+    assert_eq!(error_field(&s, &e), Some(Field::Layer2Kb), "{e}");
+    s.layer_ka[1] = DEMO.layer_ka[1];
+    s.layer_kb[1] = DEMO.layer_kb[1];
+    s.layer_ka[2] = 0.05;
+    s.layer_kb[2] = 0.001;
+    let e = evaluate(&s).unwrap_err();
+    assert_eq!(error_field(&s, &e), Some(Field::Layer3Kb), "{e}");
+}
+
+/// Regression: in solved mode a process temperature equal to the stream's sent its message to the
+/// surface temperature, which is hidden there; it now goes beside the process temperature.
+#[test]
+fn no_temperature_difference_in_solved_mode_goes_beside_the_process_temperature() {
+    let mut s = DEMO;
+    s.surface_mode = SurfaceMode::Solved;
+    s.process_temp = s.fluid_temp;
+    let e = evaluate(&s).unwrap_err();
+    assert!(
+        matches!(e, EngineError::NoTemperatureDifference { .. }),
+        "{e}"
+    );
+    assert_eq!(error_field(&s, &e), Some(Field::ProcessTemp));
 }
