@@ -10,7 +10,9 @@ use crate::engine::scenario::{self, check_field, Scenario, FIELDS};
 use crate::engine::store::Saved;
 use crate::engine::units::{self, System, UnitChoice};
 
-pub const CHOICE_KEYS: [&str; 9] = ["s", "ax", "w", "f", "pm", "hm", "sm", "wm", "nl"];
+/// The link keys of the choices, one CSV column each (`hf`, the inside film, was missing: a CSV
+/// round trip lost a worked-out inside film and its glycol content).
+pub const CHOICE_KEYS: [&str; 10] = ["s", "ax", "w", "f", "pm", "hm", "sm", "wm", "nl", "hf"];
 
 /// One item's figures for the list, SI: heat flow W (run or body), surface K, energy J/yr, cost.
 #[derive(Debug, Clone, Copy, PartialEq)]

@@ -7,5 +7,6 @@ mod fixture;
 mod fluid_reference;
 mod property_laws;
 mod recommendation;
+mod round_trip;
 mod snapshot;
 mod worked_examples;

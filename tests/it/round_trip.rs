@@ -1,0 +1,118 @@
+//! Every input field survives the three ways a scenario travels — the link, the saved-work file
+//! and the survey CSV (in SI and in US units) — at full precision. Four scenarios together use
+//! every row of `FIELDS` (the test checks that they do), each value is nudged off round numbers,
+//! and what comes back must be the same number: bit for bit through the link and the file (they
+//! carry the SI value), within 1e-12 relative through the CSV in US units (a unit conversion and
+//! back).
+
+use leeward::engine::body::{Shape, Wind};
+use leeward::engine::scenario::{
+    self, check_field, spec, FluidKind, HumidityInput, InsideFilm, PressureInput, Scenario,
+    SurfaceMode, DEMO, FIELDS,
+};
+use leeward::engine::store::{self, Saved, Store};
+use leeward::engine::survey;
+use leeward::engine::units::{self, System};
+
+fn scenarios() -> Vec<Scenario> {
+    let mut a = DEMO;
+    a.surface_mode = SurfaceMode::Solved;
+    a.layer_count = 3;
+    a.layer_kc = [0.06, 0.061, 0.062];
+    a.wall = scenario::WallMaterial::User;
+    a.h_inside = 500.0;
+    a.loss_target = 30.0;
+    a.freeze_target = 3600.0;
+
+    let mut b = a;
+    b.humidity_input = HumidityInput::DewPoint;
+    b.pressure_input = PressureInput::Elevation;
+    b.elevation = 850.0;
+    b.inside = InsideFilm::EthyleneGlycol;
+    b.mass_flow = 0.4;
+
+    let mut c = DEMO;
+    c.fluid = FluidKind::User;
+    c.shape = Shape::Sphere;
+    c.wind = Wind::Horizontal;
+
+    let mut d = DEMO;
+    d.fluid = FluidKind::EthyleneGlycol;
+    d.fluid_temp = 283.15;
+    d.surface_temp = 303.15;
+    d.t_surround = 283.15;
+    vec![a, b, c, d]
+}
+
+/// A value off round numbers, still inside the field's hard limits.
+fn nudged(s: &Scenario, f: scenario::Field) -> f64 {
+    let v = s.get(f);
+    let si = units::units_of(spec(f).dim).next().expect("SI unit");
+    [v * (1.0 + 1.0 / 3.0e6), v * (1.0 - 1.0 / 3.0e6), v]
+        .into_iter()
+        .find(|&x| check_field(spec(f), x, si).is_ok())
+        .expect("the value or a neighbour is inside the limits")
+}
+
+#[test]
+fn every_field_round_trips_through_link_file_and_csv() {
+    let mut covered = std::collections::HashSet::new();
+    for base in scenarios() {
+        let mut s = base;
+        for sp in FIELDS.iter().filter(|sp| base.uses(sp.field)) {
+            s.set(sp.field, nudged(&base, sp.field));
+        }
+        let used: Vec<_> = FIELDS.iter().filter(|sp| s.uses(sp.field)).collect();
+        for system in [System::Si, System::Us] {
+            // The link.
+            let (back, sys) = scenario::from_fragment(&scenario::to_fragment(&s, system))
+                .expect("the link reads back");
+            assert_eq!(sys, system);
+            // The saved-work file.
+            let item = Saved::new("Round trip", "T-1", "Roof", &s, system);
+            let text = store::to_json(&Store {
+                items: vec![item.clone()],
+                unreadable: vec![],
+            });
+            let loaded = store::from_json(&text).expect("the file reads back");
+            let (from_file, _) = loaded.store.items[0]
+                .scenario()
+                .expect("its scenario reads");
+            // The survey CSV.
+            let (rows, errors) = survey::from_csv(&survey::to_csv(&[item], system));
+            assert!(errors.is_empty(), "{system:?}: {errors:?}");
+            let (from_csv, _) = rows[0].scenario().expect("the CSV row reads");
+            for sp in &used {
+                let want = s.get(sp.field);
+                assert_eq!(
+                    back.get(sp.field).to_bits(),
+                    want.to_bits(),
+                    "link {} {system:?}",
+                    sp.key
+                );
+                assert_eq!(
+                    from_file.get(sp.field).to_bits(),
+                    want.to_bits(),
+                    "file {} {system:?}",
+                    sp.key
+                );
+                let got = from_csv.get(sp.field);
+                assert!(
+                    (got - want).abs() <= 1e-12 * want.abs(),
+                    "CSV {} {system:?}: {got} vs {want}",
+                    sp.key
+                );
+                covered.insert(sp.key);
+            }
+        }
+    }
+    let missing: Vec<_> = FIELDS
+        .iter()
+        .filter(|sp| !covered.contains(sp.key))
+        .map(|sp| sp.key)
+        .collect();
+    assert!(
+        missing.is_empty(),
+        "fields no scenario here uses: {missing:?}"
+    );
+}
