@@ -160,8 +160,9 @@ fn records(text: &str) -> Vec<(usize, Vec<String>)> {
             ('"', true) => quoted = false,
             ('"', false) if cell.is_empty() => quoted = true,
             (c, false) if c == sep => row.push(std::mem::take(&mut cell)),
-            ('\r', false) => {}
-            ('\n', false) => {
+            // A lone CR (old Mac line endings) ends a line too; CR LF counts once.
+            ('\r', false) if chars.peek() == Some(&'\n') => {}
+            ('\r', false) | ('\n', false) => {
                 row.push(std::mem::take(&mut cell));
                 if row.iter().any(|c| !c.is_empty()) {
                     out.push((start, std::mem::take(&mut row)));
@@ -185,8 +186,13 @@ fn records(text: &str) -> Vec<(usize, Vec<String>)> {
     out
 }
 
+/// The most data rows one CSV import reads.
+pub const MAX_ROWS: usize = 10_000;
+
 /// Read a CSV list. Rows that fail are reported by line and column and left out; the rest are
-/// returned. Limits: 10,000 rows, 4 MB.
+/// returned. Limits: 10,000 rows, 4 MB. A file that is not text, or has no column of the list's
+/// format, is refused whole with a reason; rows past the limit are reported, never dropped
+/// silently.
 pub fn from_csv(text: &str) -> (Vec<Saved>, Vec<CsvError>) {
     let mut errors = Vec::new();
     if text.len() > 4 * 1024 * 1024 {
@@ -194,6 +200,20 @@ pub fn from_csv(text: &str) -> (Vec<Saved>, Vec<CsvError>) {
             line: 1,
             column: 0,
             what: "the file is larger than 4 MB".into(),
+        });
+        return (Vec::new(), errors);
+    }
+    // A file that is not text: NUL bytes, or many control or replacement characters (what a
+    // browser makes of binary bytes read as text).
+    let odd = text
+        .chars()
+        .filter(|&c| c == '\u{fffd}' || (c.is_control() && !matches!(c, '\t' | '\r' | '\n')))
+        .count();
+    if text.contains('\0') || odd * 100 > text.chars().count().max(1) {
+        errors.push(CsvError {
+            line: 1,
+            column: 0,
+            what: "this is not a text file: choose the CSV file the list was exported to".into(),
         });
         return (Vec::new(), errors);
     }
@@ -241,8 +261,29 @@ pub fn from_csv(text: &str) -> (Vec<Saved>, Vec<CsvError>) {
         };
         cols.push(col);
     }
+    if !cols
+        .iter()
+        .any(|c| matches!(c, Col::Field(..) | Col::Choice(_)))
+    {
+        errors.push(CsvError {
+            line: *hl,
+            column: 0,
+            what: "no column of the list's format (`s`, `D [mm]` …): the first line must be the header the list exports; nothing imported".into(),
+        });
+        return (Vec::new(), errors);
+    }
+    if recs.len() - 1 > MAX_ROWS {
+        errors.push(CsvError {
+            line: recs[MAX_ROWS + 1].0,
+            column: 0,
+            what: format!(
+                "only the first {MAX_ROWS} rows are read; {} more left out",
+                recs.len() - 1 - MAX_ROWS
+            ),
+        });
+    }
     let mut items = Vec::new();
-    for (line, rec) in recs.iter().skip(1).take(10_000) {
+    for (line, rec) in recs.iter().skip(1).take(MAX_ROWS) {
         let mut texts = [String::new(), String::new(), String::new()];
         let mut frag = format!("v={}", scenario::LINK_VERSION);
         let mut bad = false;
@@ -316,6 +357,49 @@ pub fn from_csv(text: &str) -> (Vec<Saved>, Vec<CsvError>) {
 mod tests {
     use super::*;
     use crate::engine::scenario::{SurfaceMode, DEMO};
+
+    /// Regression: a binary file imported as "765 rows" of the demo, and a text file of another
+    /// format would too. Both are refused whole, with a reason.
+    #[test]
+    fn junk_is_refused_with_a_reason() {
+        let binary: String = (0..20_000u32)
+            .map(|i| char::from_u32((i * 7919) % 256).unwrap_or('\u{fffd}'))
+            .collect();
+        let (rows, errors) = from_csv(&binary);
+        assert!(rows.is_empty());
+        assert!(errors[0].what.contains("not a text file"), "{}", errors[0]);
+        let (rows, errors) = from_csv("date,amount\n2026-01-01,12\n2026-01-02,13\n");
+        assert!(rows.is_empty());
+        assert!(errors[0].what.contains("no column"), "{}", errors[0]);
+    }
+
+    /// Regression: CR-only line endings read as one line ("0 rows", no reason), and a lone CR
+    /// merged two rows.
+    #[test]
+    fn cr_only_line_endings_read_as_lines() {
+        let lf = to_csv(&items(), System::Si).replace("\r\n", "\n");
+        let cr = lf.replace('\n', "\r");
+        let (rows, errors) = from_csv(&cr);
+        assert!(errors.is_empty(), "{errors:?}");
+        assert_eq!(rows.len(), items().len());
+        let (rows, _) = from_csv(&lf);
+        assert_eq!(rows.len(), items().len());
+    }
+
+    /// Regression: a 10,001-row file dropped its last row without a word.
+    #[test]
+    fn rows_past_the_limit_are_reported() {
+        let one = to_csv(&items()[..1], System::Si);
+        let (head, row) = one.split_once("\r\n").unwrap();
+        let mut text = format!("{head}\r\n");
+        for _ in 0..=MAX_ROWS {
+            text.push_str(row);
+        }
+        let (rows, errors) = from_csv(&text);
+        assert_eq!(rows.len(), MAX_ROWS);
+        assert_eq!(errors.len(), 1);
+        assert!(errors[0].what.contains("1 more left out"), "{}", errors[0]);
+    }
 
     fn items() -> Vec<Saved> {
         let mut b = DEMO;

@@ -306,6 +306,8 @@ pub enum ParseError {
     Empty,
     NotANumber,
     NotFinite,
+    /// "1,000": a thousands separator or a decimal comma — the two readings differ a thousandfold.
+    AmbiguousComma,
 }
 
 impl std::fmt::Display for ParseError {
@@ -316,6 +318,9 @@ impl std::fmt::Display for ParseError {
                 "not a number: use digits, one decimal point or comma, e.g. 60.3"
             }
             ParseError::NotFinite => "the number is too large to use",
+            ParseError::AmbiguousComma => {
+                "a comma before three digits reads two ways (a thousand, or one): write 1000 or 1.000"
+            }
         })
     }
 }
@@ -332,6 +337,19 @@ pub fn parse_number(text: &str) -> Result<f64, ParseError> {
     let t = if commas == 0 {
         t
     } else if commas == 1 && !t.contains('.') {
+        // "1,000" or "12,500": a thousands separator as likely as a decimal comma. "0,125" can
+        // only be a decimal comma.
+        let (int, frac) = t.split_once(',').unwrap_or((t, ""));
+        let digits = int.trim_start_matches(['-', '+']);
+        if frac.len() == 3
+            && frac.chars().all(|c| c.is_ascii_digit())
+            && !digits.is_empty()
+            && digits.len() <= 3
+            && digits.chars().all(|c| c.is_ascii_digit())
+            && digits.trim_start_matches('0') != ""
+        {
+            return Err(ParseError::AmbiguousComma);
+        }
         owned = t.replace(',', ".");
         owned.as_str()
     } else {
@@ -502,6 +520,13 @@ mod tests {
         }
         assert_eq!(parse_number("1e309"), Err(ParseError::NotFinite));
         assert_eq!(parse_number("1e308"), Ok(1e308));
+        // Regression: "1,000" was read as 1 without a word. A comma before exactly three digits
+        // after a non-zero whole part reads two ways and is refused; other decimal commas stand.
+        assert_eq!(parse_number("1,000"), Err(ParseError::AmbiguousComma));
+        assert_eq!(parse_number("-12,500"), Err(ParseError::AmbiguousComma));
+        assert_eq!(parse_number("0,125"), Ok(0.125));
+        assert_eq!(parse_number("1,25"), Ok(1.25));
+        assert_eq!(parse_number("1234,567"), Ok(1234.567));
     }
 
     #[test]
