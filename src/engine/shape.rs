@@ -92,9 +92,9 @@ impl Shape {
     /// The recommendation rule, in words.
     pub fn rule(&self) -> &'static str {
         match self {
-            Shape::Cylinder => "Churchill–Bernstein comes first: one equation for gases and liquids over all Re·Pr ≥ 0.2, smooth through the Reynolds bands where tabulated constants jump; then Hilpert, Zukauskas and Gnielinski. The first inside its published ranges is used. A Reynolds range is a hard limit; a printed Prandtl limit holds within 3 %. Where none is inside, the least far outside (in decades of Re) is used; where one passes its limit, the value moves linearly to the next over 0.3 decade beyond it (a factor 2 in Re), so it never jumps.",
-            Shape::Sphere => "Whitaker comes first (it carries the viscosity correction for liquids; in a gas that ratio's range, fitted on liquids, is shown but does not set it aside), then Achenbach's subcritical air form (to Re 2×10⁵), Gnielinski's VDI form (the widest range) and Ranz & Marshall (drops and small spheres). The first inside its published ranges is used; a printed Prandtl limit holds within 3 %. Where none is inside, the least far outside is used; where one passes its limit, the value moves linearly to the next over 0.3 decade of Re beyond it (a factor 2), so it never jumps.",
-            _ => "The current table (Sparrow, Abraham & Tong 2004, as in Incropera et al., 7th ed., Table 7.3; gases) is used throughout, flagged outside its Reynolds range. Jakob's older 1949 constants are shown below it for comparison only, never recommended.",
+            Shape::Cylinder => "Order: Churchill–Bernstein (one equation for gases and liquids, smooth through the bands), Hilpert, Zukauskas, Gnielinski. The first inside its ranges is used, else the least far outside; Re limits are hard, printed Pr limits hold within 3 %. Past a limit the value moves linearly to the next over a factor 2 in Re, so it never jumps.",
+            Shape::Sphere => "Order: Whitaker (its μ/μs range, fitted on liquids, does not bind in a gas), Achenbach (air, to Re 2×10⁵), Gnielinski (VDI), Ranz & Marshall. The first inside its ranges is used, else the least far outside; printed Pr limits hold within 3 %. Past a limit the value moves linearly to the next over a factor 2 in Re, so it never jumps.",
+            _ => "Sparrow, Abraham & Tong (2004; Incropera et al. 7th ed., Table 7.3; gases), flagged outside its Re range; it replaced Jakob's 1949 table, which read squares 20–26 % low.",
         }
     }
     pub fn is_sphere(&self) -> bool {

@@ -213,7 +213,7 @@ pub fn from_csv(text: &str) -> (Vec<Saved>, Vec<CsvError>) {
         errors.push(CsvError {
             line: 1,
             column: 0,
-            what: "this is not a text file: choose the CSV file the list was exported to".into(),
+            what: "not a text file".into(),
         });
         return (Vec::new(), errors);
     }
@@ -268,7 +268,7 @@ pub fn from_csv(text: &str) -> (Vec<Saved>, Vec<CsvError>) {
         errors.push(CsvError {
             line: *hl,
             column: 0,
-            what: "no column of the list's format (`s`, `D [mm]` …): the first line must be the header the list exports; nothing imported".into(),
+            what: "no column of the list's format in the first line; nothing imported".into(),
         });
         return (Vec::new(), errors);
     }

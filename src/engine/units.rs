@@ -318,9 +318,7 @@ impl std::fmt::Display for ParseError {
                 "not a number: use digits, one decimal point or comma, e.g. 60.3"
             }
             ParseError::NotFinite => "the number is too large to use",
-            ParseError::AmbiguousComma => {
-                "a comma before three digits reads two ways (a thousand, or one): write 1000 or 1.000"
-            }
+            ParseError::AmbiguousComma => "ambiguous: write 1000 or 1.000",
         })
     }
 }

@@ -106,7 +106,7 @@ impl Flag {
                 self.method, r.quantity, value, range, r.source
             ),
             FlagKind::Advisory => format!(
-                "{}: {} = {}{unit} is outside the printed {} ({}), which was fitted on liquids; in a gas the factor is a small correction, not a limit of the method",
+                "{}: {} = {}{unit} is outside the printed {} ({}), fitted on liquids: not a limit in a gas",
                 self.method, r.quantity, value, range, r.source
             ),
         }

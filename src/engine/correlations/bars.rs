@@ -14,7 +14,8 @@
 //! perpendicular to the direction of the flow"); properties at the film temperature; gases.
 //!
 //! The older constants of M. Jakob, Heat Transfer, vol. 1, Wiley (1949) (Incropera & DeWitt, 6th
-//! ed., Table 7.3) stay as a second row for comparison, never recommended.
+//! ed., Table 7.3) stay here as `JAKOB_*` tables, for the test that shows how far they read from
+//! the current table; they are not on the page (the app's size gate), never recommended.
 //!
 //! The thin strip: the table gives the front (upstream) face and the back face separately, each
 //! Nu on the strip's height D. A strip loses heat from both faces, of equal area, so its mean h is
@@ -229,11 +230,6 @@ forced!(square_face, square_face_detail, SQUARE_FACE);
 forced!(square_corner, square_corner_detail, SQUARE_CORNER);
 forced!(hex_face, hex_face_detail, HEX_FACE);
 forced!(hex_corner, hex_corner_detail, HEX_CORNER);
-forced!(j_square_face, j_square_face_detail, JAKOB_SQUARE_FACE);
-forced!(j_square_corner, j_square_corner_detail, JAKOB_SQUARE_CORNER);
-forced!(j_hex_face, j_hex_face_detail, JAKOB_HEX_FACE);
-forced!(j_hex_corner, j_hex_corner_detail, JAKOB_HEX_CORNER);
-forced!(j_plate, j_plate_detail, JAKOB_PLATE);
 
 fn plate(g: &Groups) -> Flagged<f64> {
     plate_both_faces(g.re, g.pr)
@@ -251,101 +247,57 @@ fn plate_detail(g: &Groups) -> Option<String> {
 
 const FORMULA: &str =
     "Nu = C·Re^m·Pr^⅓, C and m by Reynolds band (Sparrow et al. 2004; Incropera et al. 7th ed., Table 7.3; gases)";
-const JAKOB_FORMULA: &str =
-    "Nu = C·Re^m·Pr^⅓, C and m by Reynolds band (Jakob's 1949 table, gases)";
 
 const fn entry(
     id: &'static str,
     t: &Table,
     nu: fn(&Groups) -> Flagged<f64>,
     detail: fn(&Groups) -> Option<String>,
-    alternate: bool,
 ) -> Forced {
     Forced {
         id,
         name: t.name,
         reference: Reference::Film,
-        formula: if alternate { JAKOB_FORMULA } else { FORMULA },
+        formula: FORMULA,
         nu,
         nu_still: zero,
         detail,
         surface: false,
-        alternate,
+        alternate: false,
     }
 }
 
-pub const SQUARE_FACE_FORCED: [Forced; 2] = [
-    entry(
-        "sparrow-square-face",
-        &SQUARE_FACE,
-        square_face,
-        square_face_detail,
-        false,
-    ),
-    entry(
-        "jakob-square-face",
-        &JAKOB_SQUARE_FACE,
-        j_square_face,
-        j_square_face_detail,
-        true,
-    ),
-];
-pub const SQUARE_CORNER_FORCED: [Forced; 2] = [
-    entry(
-        "sparrow-square-corner",
-        &SQUARE_CORNER,
-        square_corner,
-        square_corner_detail,
-        false,
-    ),
-    entry(
-        "jakob-square-corner",
-        &JAKOB_SQUARE_CORNER,
-        j_square_corner,
-        j_square_corner_detail,
-        true,
-    ),
-];
-pub const HEX_FACE_FORCED: [Forced; 2] = [
-    entry(
-        "sparrow-hex-face",
-        &HEX_FACE,
-        hex_face,
-        hex_face_detail,
-        false,
-    ),
-    entry(
-        "jakob-hex-face",
-        &JAKOB_HEX_FACE,
-        j_hex_face,
-        j_hex_face_detail,
-        true,
-    ),
-];
-pub const HEX_CORNER_FORCED: [Forced; 2] = [
-    entry(
-        "sparrow-hex-corner",
-        &HEX_CORNER,
-        hex_corner,
-        hex_corner_detail,
-        false,
-    ),
-    entry(
-        "jakob-hex-corner",
-        &JAKOB_HEX_CORNER,
-        j_hex_corner,
-        j_hex_corner_detail,
-        true,
-    ),
-];
-pub const PLATE_FORCED: [Forced; 2] = [
+pub const SQUARE_FACE_FORCED: [Forced; 1] = [entry(
+    "sparrow-square-face",
+    &SQUARE_FACE,
+    square_face,
+    square_face_detail,
+)];
+pub const SQUARE_CORNER_FORCED: [Forced; 1] = [entry(
+    "sparrow-square-corner",
+    &SQUARE_CORNER,
+    square_corner,
+    square_corner_detail,
+)];
+pub const HEX_FACE_FORCED: [Forced; 1] = [entry(
+    "sparrow-hex-face",
+    &HEX_FACE,
+    hex_face,
+    hex_face_detail,
+)];
+pub const HEX_CORNER_FORCED: [Forced; 1] = [entry(
+    "sparrow-hex-corner",
+    &HEX_CORNER,
+    hex_corner,
+    hex_corner_detail,
+)];
+pub const PLATE_FORCED: [Forced; 1] = [
     Forced {
         id: "sparrow-plate",
         name: "Sparrow et al. (2004), strip, both faces",
         formula: "Nu = ½·(0.667·Re^0.5 + 0.191·Re^0.667)·Pr^⅓: the mean of the front face (10⁴ ≤ Re ≤ 5×10⁴) and the back face (7000 ≤ Re ≤ 8×10⁴) (Sparrow et al. 2004; Incropera et al. 7th ed., Table 7.3; gases)",
-        ..entry("sparrow-plate", &PLATE_FRONT, plate, plate_detail, false)
+        ..entry("sparrow-plate", &PLATE_FRONT, plate, plate_detail)
     },
-    entry("jakob-plate", &JAKOB_PLATE, j_plate, j_plate_detail, true),
 ];
 
 #[cfg(test)]
