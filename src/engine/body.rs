@@ -72,8 +72,6 @@ pub struct Estimate {
     /// only when shown: see [`Estimate::detail`].
     detail_of: DetailOf,
     pub flags: Vec<Flag>,
-    /// Shown for comparison only, never recommended.
-    pub alternate: bool,
     /// How far outside its ranges, in decades (0 inside them all).
     pub outside: f64,
 }
@@ -159,7 +157,6 @@ impl Analysis {
     /// Why the recommended value is what it is, in one sentence.
     pub fn reason(&self) -> String {
         let shares: Vec<(usize, f64)> = self.pick.shares().collect();
-        let first_listed = self.forced.iter().position(|e| !e.alternate).unwrap_or(0);
         let worst = |e: &Estimate| {
             e.flags
                 .iter()
@@ -197,7 +194,7 @@ impl Analysis {
                 r.name,
                 worst(r)
             )
-        } else if self.recommended == first_listed {
+        } else if self.recommended == 0 {
             format!(
                 "{} is inside its published ranges here and comes first in this shape's order of preference.",
                 r.name
@@ -205,7 +202,6 @@ impl Analysis {
         } else {
             let before: Vec<&str> = self.forced[..self.recommended]
                 .iter()
-                .filter(|e| !e.alternate)
                 .map(|e| e.name)
                 .collect();
             format!(
@@ -269,19 +265,16 @@ pub fn analyse_given_free(
             detail_of: DetailOf(c.detail),
             outside: decades_outside(&nu.flags),
             flags: nu.flags,
-            alternate: c.alternate,
         });
     }
     let pick = match fixed {
         Some(p) => p,
-        None => pick::pick(forced.len(), &mut |i| {
-            (!forced[i].alternate).then_some(forced[i].outside)
-        }),
+        None => pick::pick(forced.len(), &mut |i| Some(forced[i].outside)),
     };
     let recommended = pick.main().min(forced.len() - 1);
     // Lowest and highest h among the correlations inside their ranges, and how many.
     let (mut lo, mut hi, mut count) = (f64::INFINITY, f64::NEG_INFINITY, 0);
-    for e in forced.iter().filter(|e| e.valid() && !e.alternate) {
+    for e in forced.iter().filter(|e| e.valid()) {
         (lo, hi, count) = (lo.min(e.h), hi.max(e.h), count + 1);
     }
     let spread = (count > 0).then_some((lo, hi, count));
@@ -466,9 +459,6 @@ pub fn recommended_given_free(b: &Body, free: &Properties) -> Result<Pick, Engin
     let mut failed = None;
     let p = pick::pick(list.len(), &mut |i| {
         let c = &list[i];
-        if c.alternate {
-            return None;
-        }
         let at = at_reference(c.reference, &film, free);
         let nu = (c.nu)(&groups_at(b, at, &surface, gas));
         match finite_result("Nusselt number", nu.value) {
@@ -620,12 +610,15 @@ mod tests {
                             };
                             let free = b.fluid.at(b.t_inf, b.p).unwrap();
                             let own = recommended_given_free(&b, &free).unwrap();
-                            let picks = (0..shape.forced().len()).map(Pick::single).chain([
-                                own,
-                                Pick {
-                                    weights: [0.3, 0.7, 0.0, 0.0, 0.0],
-                                },
-                            ]);
+                            // Every single pick, the rule's own, and a handover where the
+                            // shape has two correlations to share.
+                            let shared = Pick {
+                                weights: [0.3, 0.7, 0.0, 0.0, 0.0],
+                            };
+                            let picks = (0..shape.forced().len())
+                                .map(Pick::single)
+                                .chain([own])
+                                .chain((shape.forced().len() > 1).then_some(shared));
                             for p in picks {
                                 let full = analyse_given_free(&b, Some(p), free.clone()).unwrap();
                                 let fast = h_given_free(&b, &p, &free).unwrap();

@@ -164,7 +164,7 @@ pub fn nu_re(shape: Shape, a: &Analysis, width: f64, height: f64) -> (Frame, Vec
             ),
         })
         .collect();
-    if forced.iter().filter(|c| !c.alternate).count() > 1 {
+    if forced.len() > 1 {
         let pts = recommended_points(shape, a);
         let main = a.recommended();
         let nu_here = a
@@ -200,9 +200,7 @@ pub fn recommended_points(shape: Shape, a: &Analysis) -> Vec<(f64, f64, bool)> {
                 .zip(&a.forced)
                 .map(|(c, e)| (c.nu)(&Groups { re, ..e.groups }))
                 .collect();
-            let pick = crate::engine::pick::pick(at.len(), &mut |j| {
-                (!forced[j].alternate).then(|| at[j].decades_outside())
-            });
+            let pick = crate::engine::pick::pick(at.len(), &mut |j| Some(at[j].decades_outside()));
             let nu: f64 = pick.shares().map(|(j, w)| w * at[j].value).sum();
             let inside = at[pick.main()]
                 .flags

@@ -18,7 +18,7 @@
 //! As one input moves a correlation past its limit, its share falls linearly in log Re from 1 at
 //! the limit to 0 at 2 × HANDOVER = 0.3 decade (a factor 2) beyond it, so the recommended h never
 //! jumps; and where the two lowest trade places their shares are equal, so nothing jumps there
-//! either. Alternates (a superseded table shown for comparison) never take part.
+//! either.
 
 /// Half the width of the handover zone, in decades of distance outside a range; also the
 /// score added for each place down the order of preference.
@@ -92,8 +92,8 @@ impl Pick {
 
 /// Picks from the correlations' distances outside their ranges, taken in the shape's order:
 /// `outside(i)` evaluates correlation `i` and returns its distance in decades
-/// ([`crate::engine::validity::decades_outside`] of its flags), or `None` for an alternate, which
-/// takes no part. Stops evaluating as soon as no later correlation could get a share.
+/// ([`crate::engine::validity::decades_outside`] of its flags), or `None` for one that takes no
+/// part. Stops evaluating as soon as no later correlation could get a share.
 pub fn pick(n: usize, outside: &mut dyn FnMut(usize) -> Option<f64>) -> Pick {
     // The lowest score and the runner-up, as (index, score).
     let mut best: Option<(usize, f64)> = None;
@@ -197,7 +197,7 @@ mod tests {
     }
 
     #[test]
-    fn alternates_take_no_part_and_evaluation_stops_early() {
+    fn one_taking_no_part_is_skipped_and_evaluation_stops_early() {
         let mut asked = Vec::new();
         let p = pick(3, &mut |i| {
             asked.push(i);

@@ -23,11 +23,7 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
         .map(|(i, e)| {
             let rec = i == a.recommended;
             let share = a.pick.weights.get(i).copied().unwrap_or(0.0);
-            let note = if e.alternate {
-                Some("Older table, shown for comparison; never recommended.".to_string())
-            } else {
-                (share > 0.0 && share < 1.0).then(|| format!("{} % of the recommended value (handover)", format_sig(100.0 * share, 2)))
-            };
+            let note = (share > 0.0 && share < 1.0).then(|| format!("{} % of the recommended value (handover)", format_sig(100.0 * share, 2)));
             let flags = e.flags.iter().map(|f| view! { <li>{f.message()}</li> }).collect_view();
             let status = if !e.valid() {
                 "outside its range"

@@ -419,14 +419,11 @@ async fn exercise(c: &Client, base: &str) {
             "return document.querySelectorAll('[data-plot=nu-re] [data-curve]').length;"
         )
         .await,
-        json!(
-            want.analysis.forced.len()
-                + usize::from(want.analysis.forced.iter().filter(|e| !e.alternate).count() > 1)
-        )
+        json!(want.analysis.forced.len() + usize::from(want.analysis.forced.len() > 1))
     );
     // Where a shape has more than one correlation to choose from, the rule's own curve is drawn
     // too (continuous through its handovers).
-    if want.analysis.forced.iter().filter(|e| !e.alternate).count() > 1 {
+    if want.analysis.forced.len() > 1 {
         assert_eq!(
             js(c, "return document.querySelectorAll('[data-plot=nu-re] [data-curve=recommended]').length;").await,
             json!(1)

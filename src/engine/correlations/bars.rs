@@ -263,7 +263,6 @@ const fn entry(
         nu_still: zero,
         detail,
         surface: false,
-        alternate: false,
     }
 }
 

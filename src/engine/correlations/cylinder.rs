@@ -213,7 +213,6 @@ pub const FORCED: [Forced; 4] = [
         nu_still: cb_still,
         detail: no_detail,
         surface: false,
-        alternate: false,
     },
     Forced {
         id: "hilpert",
@@ -224,7 +223,6 @@ pub const FORCED: [Forced; 4] = [
         nu_still: zero,
         detail: hp_detail,
         surface: false,
-        alternate: false,
     },
     Forced {
         id: "zukauskas",
@@ -235,7 +233,6 @@ pub const FORCED: [Forced; 4] = [
         nu_still: zero,
         detail: zk_detail,
         surface: true,
-        alternate: false,
     },
     Forced {
         id: "gnielinski",
@@ -246,7 +243,6 @@ pub const FORCED: [Forced; 4] = [
         nu_still: gn_still,
         detail: gn_detail,
         surface: true,
-        alternate: false,
     },
 ];
 

@@ -91,8 +91,6 @@ pub struct Forced {
     pub detail: fn(&Groups) -> Option<String>,
     /// It reads the surface's properties (Pr_s or μs in a correction factor).
     pub surface: bool,
-    /// Shown for comparison only (a superseded table): never part of the recommendation.
-    pub alternate: bool,
 }
 
 /// No detail beyond the formula.

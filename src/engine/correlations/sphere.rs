@@ -145,7 +145,6 @@ pub const FORCED: [Forced; 4] = [
         nu_still: two,
         detail: no_detail,
         surface: true,
-        alternate: false,
     },
     Forced {
         id: "achenbach",
@@ -156,7 +155,6 @@ pub const FORCED: [Forced; 4] = [
         nu_still: two,
         detail: no_detail,
         surface: false,
-        alternate: false,
     },
     Forced {
         id: "gnielinski-sphere",
@@ -167,7 +165,6 @@ pub const FORCED: [Forced; 4] = [
         nu_still: two,
         detail: no_detail,
         surface: false,
-        alternate: false,
     },
     Forced {
         id: "ranz-marshall",
@@ -178,7 +175,6 @@ pub const FORCED: [Forced; 4] = [
         nu_still: two,
         detail: no_detail,
         surface: false,
-        alternate: false,
     },
 ];
 
