@@ -29,8 +29,8 @@ proptest! {
             if let Ok(s) = f.at(t, p) {
                 // Pr of dry air lies between 0.65 and 0.80 over this domain (CoolProp 8.0.0 gives
                 // 0.70–0.72 at 1 atm); moist air moves toward water vapour's Pr of about 1 (hot
-                // and near saturation, up to about 1.1 for saturated steam). A wrong unit in μ, cp or k would put it orders of
-                // magnitude away.
+                // and near saturation, up to about 1.1 for saturated steam). A wrong unit in μ, cp
+                // or k would put it orders of magnitude away.
                 let top = if f == Fluid::DryAir { 0.80 } else { 1.2 };
                 prop_assert!(s.pr > 0.65 && s.pr < top, "{f:?}: Pr {}", s.pr);
                 prop_assert!(s.rho > 0.0 && s.mu > 0.0 && s.k > 0.0 && s.cp > 0.0);
