@@ -98,8 +98,24 @@ pub fn from_json(text: &str) -> Result<Loaded, String> {
     }
     let mut store = Store::default();
     let mut problems = Vec::new();
-    if let Some(old) = v.get("unreadable").and_then(Value::as_array) {
-        store.unreadable.extend(old.iter().cloned());
+    // A file of the right format but another shape keeps everything it holds: whatever is not
+    // where it should be is kept aside, unread, with a line saying so (never dropped).
+    if let Value::Object(members) = &v {
+        for (k, val) in members {
+            match (k.as_str(), val) {
+                ("format" | "version", _) | ("scenarios", Value::Array(_)) => {}
+                ("unreadable", Value::Array(old)) => store.unreadable.extend(old.iter().cloned()),
+                _ => {
+                    problems.push(format!(
+                        "“{k}” is not where or what this page expects; kept aside unread"
+                    ));
+                    store.unreadable.push(val.clone());
+                }
+            }
+        }
+    }
+    if v.get("scenarios").is_none() {
+        problems.push("the file has no “scenarios” list".into());
     }
     let entries = v.get("scenarios").and_then(Value::as_array).unwrap_or(&[]);
     for (i, e) in entries.iter().enumerate() {
@@ -394,6 +410,27 @@ mod tests {
                 );
                 store.items.push(Saved::new(&n, "", "", &DEMO, System::Si));
             }
+        }
+    }
+
+    /// Regression: a store of the right format but another shape ("scenarios" an object, the
+    /// list under another key, "unreadable" not a list) opened empty with no message and no copy
+    /// kept, and the next save overwrote it. Now each stray part is kept aside, with a line.
+    #[test]
+    fn a_store_of_another_shape_keeps_everything_aside() {
+        let link = scenario::to_fragment(&DEMO, System::Si);
+        let entry = format!("{{\"name\":\"A\",\"link\":{}}}", json::quote(&link));
+        for (text, kept) in [
+            (format!("{{\"format\":\"{FORMAT}\",\"version\":1,\"scenarios\":{{\"a\":{entry}}}}}"), 1),
+            (format!("{{\"format\":\"{FORMAT}\",\"version\":1,\"items\":[{entry}]}}"), 1),
+            (format!("{{\"format\":\"{FORMAT}\",\"version\":1,\"scenarios\":[{entry}],\"unreadable\":7}}"), 1),
+        ] {
+            let l = from_json(&text).unwrap();
+            assert_eq!(l.store.unreadable.len(), kept, "{text}");
+            assert!(!l.problems.is_empty(), "{text}");
+            // What is kept aside survives a save.
+            let again = from_json(&to_json(&l.store)).unwrap();
+            assert_eq!(again.store.unreadable, l.store.unreadable);
         }
     }
 
