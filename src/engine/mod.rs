@@ -6,6 +6,7 @@
 
 pub mod atmosphere;
 pub mod body;
+pub mod catalogue;
 pub mod chart;
 pub mod correlations;
 pub mod error;

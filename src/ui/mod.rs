@@ -6,6 +6,9 @@ use leptos::prelude::*;
 mod results;
 mod saved;
 mod shapes;
+mod unit_select;
+
+use unit_select::UnitSelect;
 
 use crate::engine::scenario::{
     self, Axis, Field, FieldSpec, FluidKind, Group, HumidityInput, InsideFilm, Outcome,
@@ -632,7 +635,7 @@ pub fn App() -> impl IntoView {
                     <div class:hidden=move || shown.with(|s| s.outcome.as_ref().is_none_or(|o| o.inside.is_none()))><dt>"Inside film h_i (worked out)"</dt><dd>{out("h_inside", |o| o.inside.as_ref().map(|f| f.h), Some(Dim::HeatTransferCoefficient))}{flag_mark}</dd></div>
                     <div class:hidden=move || shown.with(|s| s.outcome.as_ref().is_none_or(|o| o.inside.is_none()))><dt>"Reynolds number in the bore"</dt><dd>{out("re_inside", |o| o.inside.as_ref().map(|f| f.re), None)}</dd></div>
                 </dl>
-                <p class="spread" data-spread>{move || shown.with(|s| s.outcome.as_ref().map(|o| spread_text(o, &choice.get())))}</p>
+                <p class="spread" data-spread>{move || shown.with(|s| s.outcome.as_ref().map(|o| results::spread_text(o, &choice.get())))}</p>
                 <p class="method">{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Recommended: {} ({}). {} {}", o.method, o.analysis.mode(), o.regime, o.analysis.notes.join(" "))))}</p>
                 <p class="reason" data-reason>{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Why this one: {}", o.analysis.reason())))}</p>
                 <div class="verdicts" data-verdicts>
@@ -669,50 +672,5 @@ pub fn App() -> impl IntoView {
                 "Results are engineering estimates from published correlations. Check them before you rely on them; local codes and licensed practice govern any decision about safety."
             </footer>
         </main>
-    }
-}
-
-/// The spread of the correlations inside their ranges and the usual uncertainty, in words.
-fn spread_text(o: &Outcome, c: &UnitChoice) -> String {
-    let u = c.get(Dim::HeatTransferCoefficient);
-    let f = |v: f64| format_sig(u.from_si(v), 3);
-    let total = o.analysis.forced.len();
-    let band = match o.analysis.spread {
-        Some((lo, hi, n)) if n > 1 => format!(
-            "{n} of {total} forced correlations are inside their ranges here; they give h_F from {} to {} {}.",
-            f(lo), f(hi), u.symbol
-        ),
-        Some(_) if total > 1 => format!("Only one of {total} forced correlations is inside its range here."),
-        Some(_) => "One published correlation covers this shape.".to_string(),
-        None => "No forced correlation is inside its range here: every value below is an extrapolation.".to_string(),
-    };
-    format!("{band} Correlations of this kind are good to about ±20–25 % (common practice).")
-}
-
-/// The unit picker for one dimension; changing it changes that dimension everywhere on the page.
-#[component]
-fn UnitSelect(
-    dim: Dim,
-    choice: RwSignal<UnitChoice>,
-    on_pick: impl Fn(String) + Copy + Send + Sync + 'static,
-) -> impl IntoView {
-    let options = units::units_of(dim)
-        .map(|u| {
-            view! {
-                <option value=u.id prop:selected=move || choice.get().get(dim).id == u.id>
-                    {u.symbol}
-                </option>
-            }
-        })
-        .collect_view();
-    view! {
-        <select
-            class="unit-pick"
-            aria-label="Unit"
-            data-unit-for=format!("{dim:?}")
-            on:change=move |ev| on_pick(event_target_value(&ev))
-        >
-            {options}
-        </select>
     }
 }

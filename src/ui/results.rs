@@ -616,3 +616,20 @@ pub fn report(
         </article>
     }
 }
+
+/// The spread of the correlations inside their ranges and the usual uncertainty, in words.
+pub fn spread_text(o: &Outcome, c: &UnitChoice) -> String {
+    let u = c.get(Dim::HeatTransferCoefficient);
+    let f = |v: f64| format_sig(u.from_si(v), 3);
+    let total = o.analysis.forced.len();
+    let band = match o.analysis.spread {
+        Some((lo, hi, n)) if n > 1 => format!(
+            "{n} of {total} forced correlations are inside their ranges here; they give h_F from {} to {} {}.",
+            f(lo), f(hi), u.symbol
+        ),
+        Some(_) if total > 1 => format!("Only one of {total} forced correlations is inside its range here."),
+        Some(_) => "One published correlation covers this shape.".to_string(),
+        None => "No forced correlation is inside its range here: every value below is an extrapolation.".to_string(),
+    };
+    format!("{band} Correlations of this kind are good to about ±20–25 % (common practice).")
+}
