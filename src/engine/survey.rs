@@ -35,6 +35,47 @@ pub fn evaluate_item(s: &Scenario) -> Result<ItemResult, EngineError> {
     })
 }
 
+/// An item's figures, or why it could not be computed (shown in its row).
+pub type Figure = Result<ItemResult, String>;
+
+/// The survey's figures remembered by link: when the list changes, only items whose inputs changed
+/// (a link not seen before) are computed again; a change of units or sort order computes nothing.
+#[derive(Debug, Default)]
+pub struct Figures {
+    known: std::collections::HashMap<String, Figure>,
+    /// How many items have been computed so far (for tests and the progress note).
+    pub computed: usize,
+}
+
+impl Figures {
+    /// The figure for a link, when known.
+    pub fn get(&self, link: &str) -> Option<&Figure> {
+        self.known.get(link)
+    }
+    /// Compute the first links not yet known, while `more()` says there is time; true when every
+    /// link is then known.
+    pub fn fill(&mut self, links: &[&str], more: &mut dyn FnMut() -> bool) -> bool {
+        for l in links {
+            if self.known.contains_key(*l) {
+                continue;
+            }
+            if !more() {
+                return false;
+            }
+            let f = scenario::from_fragment(l)
+                .and_then(|(s, _)| evaluate_item(&s).map_err(|e| e.to_string()));
+            self.known.insert(l.to_string(), f);
+            self.computed += 1;
+        }
+        true
+    }
+    /// Forget links no longer in the list.
+    pub fn keep_only(&mut self, links: &[&str]) {
+        let keep: std::collections::HashSet<&str> = links.iter().copied().collect();
+        self.known.retain(|k, _| keep.contains(k.as_str()));
+    }
+}
+
 /// Sums over the items that computed: heat flow W, energy J/yr, cost per year.
 pub fn totals(results: &[Result<ItemResult, EngineError>]) -> (f64, f64, f64) {
     results
@@ -476,6 +517,41 @@ mod tests {
         let (back, errors) = from_csv(text);
         assert!(errors.is_empty(), "{errors:?}");
         assert_eq!(back[0].scenario().unwrap().0.diameter, 0.0334);
+    }
+
+    #[test]
+    fn a_change_computes_only_the_items_it_changed() {
+        let links: Vec<String> = items().iter().map(|i| i.link.clone()).collect();
+        let all: Vec<&str> = links.iter().map(String::as_str).collect();
+        let mut f = Figures::default();
+        assert!(f.fill(&all, &mut || true));
+        assert_eq!(f.computed, all.len());
+        // Each figure is the item evaluated on its own.
+        for l in &all {
+            let (s, _) = scenario::from_fragment(l).unwrap();
+            assert_eq!(
+                f.get(l).unwrap().as_ref().ok(),
+                evaluate_item(&s).ok().as_ref()
+            );
+        }
+        // One item edited: one computation.
+        let mut s = DEMO;
+        s.diameter = 0.1;
+        let edited = scenario::to_fragment(&s, System::Si);
+        let mut now = all.clone();
+        now[0] = &edited;
+        assert!(f.fill(&now, &mut || true));
+        assert_eq!(f.computed, all.len() + 1);
+        // Out of time: stops, and says so.
+        let mut g = Figures::default();
+        let mut budget = 1;
+        assert!(!g.fill(&all, &mut || {
+            budget -= 1;
+            budget >= 0
+        }));
+        assert_eq!(g.computed, 1);
+        f.keep_only(&now);
+        assert!(f.get(all[0]).is_none() && f.get(&edited).is_some());
     }
 
     #[test]

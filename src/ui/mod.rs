@@ -20,9 +20,17 @@ use crate::engine::units::{self, format_sig, Dim, System, UnitChoice};
 #[derive(Debug, Clone, PartialEq)]
 struct Shown {
     outcome: Option<Outcome>,
-    error: Option<String>,
+    error: Option<crate::engine::error::EngineError>,
     /// The field the error belongs beside, if any (otherwise it shows in the results).
     error_at: Option<Field>,
+}
+
+/// At most `n` characters of `t`, with an ellipsis when cut.
+fn clip_text(t: &str, n: usize) -> String {
+    match t.char_indices().nth(n) {
+        Some((i, _)) => format!("{}…", &t[..i]),
+        None => t.to_string(),
+    }
 }
 
 /// Read the scenario from the page's URL fragment, or the demo with a message.
@@ -37,15 +45,18 @@ fn initial() -> (Scenario, System, Option<String>) {
             scenario::DEMO,
             System::Si,
             Some(format!(
-                "This link could not be read ({e}). The demo is shown instead."
+                "This link could not be read ({e}). The demo is shown instead; the link stays in the address bar until you change an input. As given: {}",
+                clip_text(hash.trim_start_matches('#'), 300)
             )),
         ),
     }
 }
 
-/// Text for a field in the unit shown, trimmed to sensible digits (display only).
-fn shown_text(si: f64, unit: &units::Unit) -> String {
-    format_sig(unit.from_si(si), 6)
+/// A named point on the page's performance timeline (the browser harness and tests read them).
+pub(crate) fn mark(name: &str) {
+    if let Some(p) = window().performance() {
+        let _ = p.mark(name);
+    }
 }
 
 #[component]
@@ -64,7 +75,7 @@ pub fn App() -> impl IntoView {
             let u = choice.get_untracked().get(spec.dim);
             (
                 spec.field,
-                RwSignal::new(shown_text(start.get(spec.field), u)),
+                RwSignal::new(scenario::shown_text(start.get(spec.field), u)),
             )
         })
         .collect();
@@ -78,19 +89,24 @@ pub fn App() -> impl IntoView {
         })
     };
 
-    // Change the units shown. Texts the user had accepted are rewritten from the stored SI values
-    // (display rounding only; the SI values are untouched). A refused entry is kept as typed.
+    // Change the units shown: each field's text, unit and value stay in agreement
+    // (`scenario::switch_unit`: accepted texts are rewritten, refused ones read again).
     let change_units = move |new: UnitChoice| {
         let old = choice.get_untracked();
-        let s = scenario.get_untracked();
+        let mut s = scenario.get_untracked();
         for spec in &FIELDS {
-            let (from, to) = (old.get(spec.dim), new.get(spec.dim));
             let t = text_of(spec.field);
-            if from != to && scenario::read_field(spec, &t.get_untracked(), from).is_ok() {
-                t.set(shown_text(s.get(spec.field), to));
+            let before = t.get_untracked();
+            let after =
+                scenario::switch_unit(&mut s, spec, &before, old.get(spec.dim), new.get(spec.dim));
+            if after != before {
+                t.set(after);
             }
         }
         choice.set(new);
+        if s != scenario.get_untracked() {
+            scenario.set(s);
+        }
     };
 
     let set_system = move |sys: System| {
@@ -128,19 +144,36 @@ pub fn App() -> impl IntoView {
             Err(e) => Shown {
                 outcome: prev.and_then(|p| p.outcome.clone()),
                 error_at: scenario::error_field(&s, &e),
-                error: Some(e.to_string()),
+                error: Some(e),
             },
         }
+    });
+    // The moment the first result is on the page (read by the browser timing harness).
+    Effect::new(move |marked: Option<bool>| {
+        if marked == Some(true) {
+            return true;
+        }
+        let has = shown.with(|s| s.outcome.is_some());
+        if has {
+            mark("leeward-first-result");
+        }
+        has
     });
     let stale = move || any_field_error() || shown.with(|s| s.error.is_some());
 
     // The outside world: keep the link in the address bar in step with the scenario.
-    Effect::new(move |_| {
+    // A refused link stays in the address bar (and in the notice) until the person changes an
+    // input: their link text is never replaced by the demo's unasked.
+    let refused_link = link_message.is_some();
+    Effect::new(move |prev: Option<()>| {
         let frag = format!(
             "{}{}",
             scenario::to_fragment(&scenario.get(), system.get()),
             view_opts.suffix()
         );
+        if prev.is_none() && refused_link {
+            return;
+        }
         let loc = window().location();
         if loc.hash().unwrap_or_default().trim_start_matches('#') != frag {
             let _ = loc.replace(&format!("#{frag}"));
@@ -154,7 +187,9 @@ pub fn App() -> impl IntoView {
         let extra = move || {
             shown.with(|s| {
                 if s.error_at == Some(spec.field) {
-                    s.error.clone()
+                    s.error
+                        .as_ref()
+                        .map(|e| scenario::error_message(e, &choice.get()))
                 } else {
                     None
                 }
@@ -166,8 +201,9 @@ pub fn App() -> impl IntoView {
             let v = event_target_value(&ev);
             t.set(v.clone());
             let u = choice.get_untracked().get(spec.dim);
-            if let Ok(si) = scenario::read_field(spec, &v, u) {
-                scenario.update(|s| s.set(spec.field, si));
+            let mut s = scenario.get_untracked();
+            if scenario::type_text(&mut s, spec, &v, u).is_ok() {
+                scenario.set(s);
             }
         };
         view! {
@@ -390,7 +426,7 @@ pub fn App() -> impl IntoView {
                     let Some((_, d)) = crate::engine::job::NOMINAL_SIZES.get(i) else { return };
                     scenario.update(|s| s.diameter = *d);
                     let u = choice.get_untracked().get(Dim::Length);
-                    text_of(Field::Diameter).set(shown_text(*d, u));
+                    text_of(Field::Diameter).set(scenario::shown_text(*d, u));
                 }>
                     <option value="" selected>"Choose a size, or type D below"</option>
                     {opts}
@@ -413,7 +449,7 @@ pub fn App() -> impl IntoView {
                     let Some((_, e)) = crate::engine::job::EMISSIVITIES.get(i) else { return };
                     scenario.update(|s| s.emissivity = *e);
                     let u = choice.get_untracked().get(Dim::Ratio);
-                    text_of(Field::Emissivity).set(shown_text(*e, u));
+                    text_of(Field::Emissivity).set(scenario::shown_text(*e, u));
                 }>
                     <option value="" selected>"Choose a surface, or type ε above"</option>
                     {opts}
@@ -527,7 +563,7 @@ pub fn App() -> impl IntoView {
         let c = UnitChoice::for_system(sys);
         choice.set(c);
         for spec in &FIELDS {
-            text_of(spec.field).set(shown_text(sc.get(spec.field), c.get(spec.dim)));
+            text_of(spec.field).set(scenario::shown_text(sc.get(spec.field), c.get(spec.dim)));
         }
         scenario.set(sc);
     };
@@ -615,7 +651,7 @@ pub fn App() -> impl IntoView {
                 <p class="stale-note" data-stale=move || stale().to_string()>
                     {move || stale().then_some("⏸ Showing the last good result: fix the marked input to update.")}
                 </p>
-                {move || shown.with(|s| s.error.clone().filter(|_| s.error_at.is_none()).map(|e| view! { <p class="error" data-error>"⚠ "{e}</p> }))}
+                {move || shown.with(|s| s.error.as_ref().filter(|_| s.error_at.is_none()).map(|e| view! { <p class="error" data-error>"⚠ "{scenario::error_message(e, &choice.get())}</p> }))}
                 <dl class="figures">
                     <div class="main" class:hidden=move || shown.with(|s| s.outcome.as_ref().is_some_and(|o| o.q_per_length.is_none()))><dt>"Heat loss per length"</dt><dd>{out("q_per_length", |o| o.q_per_length, Some(Dim::HeatFlowPerLength))}{flag_mark}</dd></div>
                     <div class="main"><dt>{move || if scenario.with(|s| s.shape == Shape::Sphere) { "Heat loss from the body" } else { "Heat loss over the length L" }}</dt><dd>{out("q_total", |o| Some(o.q_total), Some(Dim::HeatFlow))}{flag_mark}</dd></div>

@@ -5,6 +5,7 @@
 use leptos::prelude::*;
 use wasm_bindgen::JsCast;
 
+use super::mark;
 use crate::engine::scenario::Scenario;
 use crate::engine::store::{self, Plan, Saved, Store};
 use crate::engine::survey;
@@ -17,33 +18,111 @@ fn storage() -> Option<web_sys::Storage> {
     window().local_storage().ok().flatten()
 }
 
-/// Read the store; a message when something could not be read (the raw text is kept aside).
-fn load() -> (Store, Option<String>) {
+/// What opening the store found.
+struct Opened {
+    store: Store,
+    message: Option<String>,
+    /// The text of a store that could not be read and could not be copied aside: the page holds
+    /// it, offers it as a download, and writes nothing over it until the person says so.
+    held: Option<String>,
+}
+
+/// Read the store; a message when something could not be read. An unreadable text is copied
+/// under `UNREADABLE_KEY` (checked), or held by the page when the copy fails.
+fn load() -> Opened {
     let Some(st) = storage() else {
-        return (Store::default(), Some("This browser keeps no storage for the page here (private mode, or a file the browser isolates): saving is off; export a file instead.".into()));
+        return Opened { store: Store::default(), message: Some("This browser keeps no storage for the page here (private mode, or a file the browser isolates): saving is off; export a file instead.".into()), held: None };
     };
     let Ok(Some(text)) = st.get_item(KEY) else {
-        return (Store::default(), None);
+        return Opened {
+            store: Store::default(),
+            message: None,
+            held: None,
+        };
     };
     match store::from_json(&text) {
-        Ok(l) if l.problems.is_empty() => (l.store, None),
-        Ok(l) => (
-            l.store,
-            Some(format!(
-                "Some saved entries could not be read and were kept aside: {}",
-                l.problems.join("; ")
-            )),
-        ),
+        Ok(l) => Opened {
+            store: l.store,
+            message: (!l.problems.is_empty()).then(|| {
+                format!(
+                    "Some saved entries could not be read and were kept aside: {}",
+                    l.problems.join("; ")
+                )
+            }),
+            held: None,
+        },
         Err(why) => {
-            let _ = st.set_item(UNREADABLE_KEY, &text);
-            (Store::default(), Some(format!("The saved work could not be read ({why}). Its text is kept under “{UNREADABLE_KEY}” in this browser's storage; nothing was deleted.")))
+            let copied = st.set_item(UNREADABLE_KEY, &text).is_ok()
+                && st.get_item(UNREADABLE_KEY).ok().flatten().as_deref() == Some(text.as_str());
+            if copied {
+                Opened { store: Store::default(), message: Some(format!("The saved work could not be read ({why}). Its text is kept under “{UNREADABLE_KEY}” in this browser's storage; nothing was deleted.")), held: None }
+            } else {
+                Opened { store: Store::default(), message: Some(format!("The saved work could not be read ({why}), and the browser has no room to keep a copy aside. It is still stored as it was: download it below before saving anything here.")), held: Some(text) }
+            }
         }
     }
 }
 
+/// Write the store: checked first (size, read-back), written, then read back from storage. On any
+/// failure nothing has changed and the reason is returned.
 fn save(s: &Store) -> Result<(), String> {
     let st = storage().ok_or("no storage in this browser")?;
-    st.set_item(KEY, &store::to_json(s)).map_err(|_| "the browser's storage is full or refused the write: nothing was changed; export a file to keep this work".to_string())
+    let text = store::checked_text(s)?;
+    st.set_item(KEY, &text).map_err(|_| {
+        "the browser's storage is full or refused the write; nothing was changed".to_string()
+    })?;
+    match st.get_item(KEY) {
+        Ok(Some(back)) if back == text => Ok(()),
+        _ => Err("the browser did not keep what was written".into()),
+    }
+}
+
+/// Compute the survey's figures a slice at a time (about 25 ms, then yield to the browser), and
+/// publish the list with its figures once all are known. A newer change (`generation`) stops an
+/// older run.
+fn compute_list(
+    gen: u64,
+    generation: StoredValue<u64>,
+    saved: RwSignal<Store>,
+    figures: StoredValue<survey::Figures>,
+    list: RwSignal<Vec<(Saved, survey::Figure)>>,
+    progress: RwSignal<Option<(usize, usize)>>,
+) {
+    if generation.get_value() != gen {
+        return;
+    }
+    let items = saved.get_untracked().items;
+    let links: Vec<&str> = items.iter().map(|i| i.link.as_str()).collect();
+    let t0 = js_sys::Date::now();
+    let done = figures
+        .try_update_value(|f| f.fill(&links, &mut || js_sys::Date::now() - t0 < 25.0))
+        .unwrap_or(true);
+    if done {
+        let shown = figures.with_value(|f| {
+            items
+                .iter()
+                .map(|it| {
+                    (
+                        it.clone(),
+                        f.get(&it.link)
+                            .cloned()
+                            .unwrap_or_else(|| Err("not computed".into())),
+                    )
+                })
+                .collect()
+        });
+        figures.update_value(|f| f.keep_only(&links));
+        progress.set(None);
+        list.set(shown);
+        mark("leeward-survey-shown");
+    } else {
+        let known = figures.with_value(|f| links.iter().filter(|l| f.get(l).is_some()).count());
+        progress.set(Some((known, links.len())));
+        set_timeout(
+            move || compute_list(gen, generation, saved, figures, list, progress),
+            std::time::Duration::ZERO,
+        );
+    }
 }
 
 /// Read the file just chosen in a file input as text, clear the input (so the same file can be
@@ -101,18 +180,36 @@ pub fn SavedPanel(
     choice: RwSignal<UnitChoice>,
     on_open: impl Fn(Scenario, System) + Copy + Send + Sync + 'static,
 ) -> impl IntoView {
-    let (start, message) = load();
-    let saved = RwSignal::new(start);
-    let note = RwSignal::new(message);
+    let saved = RwSignal::new(Store::default());
+    let note = RwSignal::new(None::<String>);
+    let held = RwSignal::new(None::<String>);
+    // False until the saved work has been read (just after the first result is shown).
+    let ready = RwSignal::new(false);
     let name = RwSignal::new(String::from("Line 1"));
     let pending: RwSignal<Option<(Store, Plan)>> = RwSignal::new(None);
 
-    let commit = move |next: Store, done: String| match save(&next) {
-        Ok(()) => {
-            saved.set(next);
-            note.set(Some(done));
+    // Every change to the saved work goes through here: refused while an unreadable store is
+    // held (it would be overwritten), and committed to the page only once storage has it.
+    let commit = move |next: Store, done: String| {
+        if !ready.get_untracked() {
+            note.set(Some(
+                "Not saved yet: the saved work is still being read; try again in a moment.".into(),
+            ));
+            return;
         }
-        Err(e) => note.set(Some(format!("Not saved: {e}."))),
+        if held.with_untracked(Option::is_some) {
+            note.set(Some("Not saved: the saved work that could not be read is still stored and would be overwritten. Download it first (below).".into()));
+            return;
+        }
+        match save(&next) {
+            Ok(()) => {
+                saved.set(next);
+                note.set(Some(done));
+            }
+            Err(e) => note.set(Some(format!(
+                "Not saved: {e}. Export a file to keep this work."
+            ))),
+        }
     };
     let save_now = move |_| {
         let mut next = saved.get_untracked();
@@ -179,19 +276,38 @@ pub fn SavedPanel(
         });
     };
     let by_loss = RwSignal::new(false);
-    // Every item's figures, recomputed when the list changes.
-    let results = Memo::new(move |_| {
-        saved.with(|s| {
-            s.items
-                .iter()
-                .map(|it| {
-                    it.scenario()
-                        .map_err(|e| e.to_string())
-                        .and_then(|(sc, _)| survey::evaluate_item(&sc).map_err(|e| e.to_string()))
-                })
-                .collect::<Vec<_>>()
-        })
+    // The list as shown: items with their figures, published together once every figure is
+    // known, so a row never shows another item's figures. Figures are remembered by link
+    // (`survey::Figures`) and computed in slices of about 25 ms between frames, so the page stays
+    // responsive and the first result never waits for the survey.
+    let figures = StoredValue::new(survey::Figures::default());
+    let list: RwSignal<Vec<(Saved, survey::Figure)>> = RwSignal::new(Vec::new());
+    let progress: RwSignal<Option<(usize, usize)>> = RwSignal::new(None);
+    let generation = StoredValue::new(0u64);
+    Effect::new(move |_| {
+        saved.track();
+        generation.update_value(|g| *g += 1);
+        compute_list(
+            generation.get_value(),
+            generation,
+            saved,
+            figures,
+            list,
+            progress,
+        );
     });
+    // Read the saved work once the page has shown its first result.
+    set_timeout(
+        move || {
+            let opened = load();
+            saved.set(opened.store);
+            note.set(opened.message);
+            held.set(opened.held);
+            ready.set(true);
+            mark("leeward-saved-read");
+        },
+        std::time::Duration::ZERO,
+    );
 
     let confirm = move |_| {
         if let Some((incoming, _)) = pending.get_untracked() {
@@ -207,104 +323,108 @@ pub fn SavedPanel(
             let u = c.get(d);
             format!("{} {}", format_sig(u.from_si(v), 4), u.symbol)
         };
-        let res = results.get();
-        let mut order: Vec<usize> = (0..res.len()).collect();
+        let mut shown = list.get();
         if by_loss.get() {
-            let loss = |i: &usize| {
-                res[*i]
-                    .as_ref()
+            let loss = |r: &survey::Figure| {
+                r.as_ref()
                     .map(|r| r.q_total.abs())
                     .unwrap_or(f64::NEG_INFINITY)
             };
-            order.sort_by(|a, b| loss(b).total_cmp(&loss(a)));
+            shown.sort_by(|a, b| loss(&b.1).total_cmp(&loss(&a.1)));
         }
-        saved.with(|s| {
-            order
-                .into_iter()
-                .filter_map(|i| s.items.get(i).map(|it| (i, it.clone())))
-                .map(|(i, it)| {
-                    let label = it.name.clone();
-                    let figs = match &res[i] {
-                        Ok(r) => (f(r.q_total, Dim::HeatFlow), f(r.surface_temp, Dim::Temperature), if r.flags == 0 { "✓".to_string() } else { format!("⚠ {}", r.flags) }),
-                        Err(e) => (format!("⚠ {e}"), "—".into(), "—".into()),
-                    };
-                    let open = move |_| {
-                        let item = saved.with_untracked(|s| s.items.get(i).cloned());
-                        if let Some(it) = item {
-                            if let Ok((sc, sys)) = it.scenario() {
-                                name.set(it.name.clone());
-                                tag.set(it.tag.clone());
-                                place.set(it.location.clone());
-                                on_open(sc, sys);
-                            }
+        // Rows act on their item by name (names are unique in the store): the list shown may be
+        // a moment behind the store while new figures are computed.
+        let find =
+            move |name: &str| saved.with_untracked(|s| s.items.iter().position(|i| i.name == name));
+        shown
+            .into_iter()
+            .map(|(it, res)| {
+                let label = it.name.clone();
+                let figs = match &res {
+                    Ok(r) => (f(r.q_total, Dim::HeatFlow), f(r.surface_temp, Dim::Temperature), if r.flags == 0 { "✓".to_string() } else { format!("⚠ {}", r.flags) }),
+                    Err(e) => (format!("⚠ {e}"), "—".into(), "—".into()),
+                };
+                let key = StoredValue::new(it.name.clone());
+                let open = move |_| {
+                    let item = key.with_value(|k| find(k)).and_then(|i| saved.with_untracked(|s| s.items.get(i).cloned()));
+                    if let Some(it) = item {
+                        if let Ok((sc, sys)) = it.scenario() {
+                            name.set(it.name.clone());
+                            tag.set(it.tag.clone());
+                            place.set(it.location.clone());
+                            on_open(sc, sys);
                         }
-                    };
-                    let update = move |_| {
-                        let mut next = saved.get_untracked();
-                        if let Some(c) = next.items.get_mut(i) {
-                            let n = c.name.clone();
-                            *c = Saved::new(&n, &tag.get_untracked(), &place.get_untracked(), &scenario.get_untracked(), system.get_untracked());
-                            commit(next, format!("“{n}” now holds the inputs shown."));
-                        }
-                    };
-                    let dup = move |_| {
-                        let mut next = saved.get_untracked();
-                        if let Some(mut c) = next.items.get(i).cloned() {
-                            c.name = store::free_name(&next, &c.name);
-                            let n = c.name.clone();
-                            next.items.push(c);
-                            commit(next, format!("Duplicated as “{n}”."));
-                        }
-                    };
-                    let rename = move |_| {
-                        let mut next = saved.get_untracked();
-                        let new = store::free_name(&next, &name.get_untracked());
-                        if let Some(c) = next.items.get_mut(i) {
-                            c.name = new.clone();
-                            commit(next, format!("Renamed to “{new}”."));
-                        }
-                    };
-                    let delete = move |_| {
-                        let mut next = saved.get_untracked();
-                        if i < next.items.len() {
-                            let gone = next.items.remove(i).name;
-                            commit(next, format!("Deleted “{gone}”."));
-                        }
-                    };
-                    let sub = [it.tag.as_str(), it.location.as_str()].iter().filter(|x| !x.is_empty()).cloned().collect::<Vec<_>>().join(" · ");
-                    view! {
-                        <tr data-saved=label.clone()>
-                            <th scope="row">{label.clone()}<small>{sub}</small></th>
-                            <td data-item-loss>{figs.0}</td>
-                            <td>{figs.1}</td>
-                            <td>{figs.2}</td>
-                            <td class="saved-actions">
-                                <button type="button" on:click=open>"Open"</button>
-                                <button type="button" on:click=update title="Store the inputs shown in this item">"Update"</button>
-                                <button type="button" on:click=rename title="Rename to the name typed above">"Rename"</button>
-                                <button type="button" on:click=dup>"Duplicate"</button>
-                                <button type="button" on:click=delete>"Delete"</button>
-                            </td>
-                        </tr>
                     }
-                })
-                .collect_view()
-        })
+                };
+                let update = move |_| {
+                    let mut next = saved.get_untracked();
+                    if let Some(c) = key.with_value(|k| find(k)).and_then(|i| next.items.get_mut(i)) {
+                        let n = c.name.clone();
+                        *c = Saved::new(&n, &tag.get_untracked(), &place.get_untracked(), &scenario.get_untracked(), system.get_untracked());
+                        commit(next, format!("“{n}” now holds the inputs shown."));
+                    }
+                };
+                let dup = move |_| {
+                    let mut next = saved.get_untracked();
+                    if let Some(mut c) = key.with_value(|k| find(k)).and_then(|i| next.items.get(i).cloned()) {
+                        c.name = store::free_name(&next, &c.name);
+                        let n = c.name.clone();
+                        next.items.push(c);
+                        commit(next, format!("Duplicated as “{n}”."));
+                    }
+                };
+                let rename = move |_| {
+                    let mut next = saved.get_untracked();
+                    let new = store::free_name(&next, &name.get_untracked());
+                    if let Some(c) = key.with_value(|k| find(k)).and_then(|i| next.items.get_mut(i)) {
+                        c.name = new.clone();
+                        commit(next, format!("Renamed to “{new}”."));
+                    }
+                };
+                let delete = move |_| {
+                    let mut next = saved.get_untracked();
+                    if let Some(i) = key.with_value(|k| find(k)) {
+                        let gone = next.items.remove(i).name;
+                        commit(next, format!("Deleted “{gone}”."));
+                    }
+                };
+                let sub = [it.tag.as_str(), it.location.as_str()].iter().filter(|x| !x.is_empty()).cloned().collect::<Vec<_>>().join(" · ");
+                view! {
+                    <tr data-saved=label.clone()>
+                        <th scope="row">{label.clone()}<small>{sub}</small></th>
+                        <td data-item-loss>{figs.0}</td>
+                        <td>{figs.1}</td>
+                        <td>{figs.2}</td>
+                        <td class="saved-actions">
+                            <button type="button" on:click=open>"Open"</button>
+                            <button type="button" on:click=update title="Store the inputs shown in this item">"Update"</button>
+                            <button type="button" on:click=rename title="Rename to the name typed above">"Rename"</button>
+                            <button type="button" on:click=dup>"Duplicate"</button>
+                            <button type="button" on:click=delete>"Delete"</button>
+                        </td>
+                    </tr>
+                }
+            })
+            .collect_view()
     };
     let totals = move || {
         let c = choice.get();
-        let ok: Vec<_> = results
-            .get()
-            .into_iter()
-            .filter_map(|r| r.ok())
-            .map(Ok)
-            .collect();
-        let (q, e, m) = survey::totals(&ok);
+        let (n, (q, e, m)) = list.with(|l| {
+            (
+                l.len(),
+                survey::totals(
+                    &l.iter()
+                        .filter_map(|(_, r)| r.clone().ok())
+                        .map(Ok)
+                        .collect::<Vec<_>>(),
+                ),
+            )
+        });
         let u =
             |v: f64, d: Dim| format!("{} {}", format_sig(c.get(d).from_si(v), 4), c.get(d).symbol);
         view! {
             <tr class="totals" data-totals>
-                <th scope="row">{format!("Total of {} item(s)", results.with(|r| r.len()))}</th>
+                <th scope="row">{format!("Total of {n} item(s)")}</th>
                 <td data-total-loss>{u(q, Dim::HeatFlow)}</td>
                 <td colspan="3">{format!("{} · {} per year", u(e, Dim::EnergyPerYear), u(m, Dim::MoneyPerYear))}</td>
             </tr>
@@ -321,7 +441,7 @@ pub fn SavedPanel(
     };
 
     view! {
-        <section aria-labelledby="saved-title" data-panel="saved">
+        <section aria-labelledby="saved-title" data-panel="saved" data-saved-ready=move || ready.get().to_string()>
             <h2 id="saved-title">"5 · Saved work"</h2>
             {text_field("in-save-name", "Name", name)}
             {text_field("in-save-tag", "Item tag (optional; printed on the report)", tag)}
@@ -337,6 +457,19 @@ pub fn SavedPanel(
                 }>"Print a one-page report"</button>
             </div>
             <p class="notice" role="status" data-saved-note class:hidden=move || note.with(|n| n.is_none())>{move || note.get()}</p>
+            {move || held.get().map(|text| {
+                let text2 = text.clone();
+                view! {
+                    <div class="actions" data-held>
+                        <button type="button" data-action="download-unreadable" on:click=move |_| download("leeward-unreadable-saved-work.txt", "text/plain", &text)>"Download the unreadable saved work"</button>
+                        <button type="button" data-action="release-unreadable" on:click=move |_| {
+                            download("leeward-unreadable-saved-work.txt", "text/plain", &text2);
+                            held.set(None);
+                            note.set(Some("Downloaded. Saving here will now replace the unreadable text.".into()));
+                        }>"Download it and start afresh"</button>
+                    </div>
+                }
+            })}
             {move || pending.with(|p| p.as_ref().map(|(_, plan)| {
                 let adds = plan.add.join(", ");
                 let repl = plan.replace.join(", ");
@@ -354,7 +487,10 @@ pub fn SavedPanel(
                 <label class="file-button">"Import CSV rows"<input type="file" accept=".csv,text/csv" data-action="import-csv" on:change=import_csv/></label>
                 <button type="button" data-action="sort" aria-pressed=move || by_loss.get().to_string() on:click=move |_| by_loss.update(|b| *b = !*b)>"Worst first"</button>
             </div>
-            <div class="table-wrap" tabindex="0" role="region" aria-label="Survey list (scrolls sideways)">
+            <p class="notice" role="status" data-survey-progress class:hidden=move || progress.with(|p| p.is_none())>
+                {move || progress.get().map(|(done, all)| format!("Computing the survey list: {done} of {all} items…"))}
+            </p>
+                        <div class="table-wrap" tabindex="0" role="region" aria-label="Survey list (scrolls sideways)">
                 <table class="saved-list" data-saved-list>
                     <caption>"Survey list: every saved item with its results"</caption>
                     <thead><tr><th scope="col">"Item"</th><th scope="col">"Heat loss"</th><th scope="col">"Surface"</th><th scope="col">"Range"</th><th scope="col">"Actions"</th></tr></thead>

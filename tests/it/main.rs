@@ -3,10 +3,12 @@
 mod air_reference;
 mod browser;
 mod correlation_reference;
+mod entry;
 mod fixture;
 mod fluid_reference;
 mod property_laws;
 mod recommendation;
 mod round_trip;
 mod snapshot;
+mod store_fuzz;
 mod worked_examples;

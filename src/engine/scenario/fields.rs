@@ -401,6 +401,61 @@ pub fn error_field(s: &Scenario, e: &EngineError) -> Option<Field> {
     Some(field)
 }
 
+/// An evaluation error as the page shows it: values in the person's units (never raw SI with
+/// float noise), the first letter capitalised.
+pub fn error_message(e: &EngineError, c: &units::UnitChoice) -> String {
+    let show = |v: f64, unit: &str| {
+        let dim = match unit {
+            "K" => Some(Dim::Temperature),
+            "Pa" => Some(Dim::Pressure),
+            "m" => Some(Dim::Length),
+            "W/(m·K)" => Some(Dim::ThermalConductivity),
+            "1/K" => Some(Dim::ExpansionCoefficient),
+            _ => None,
+        };
+        match dim {
+            Some(d) => {
+                let u = c.get(d);
+                format!("{} {}", format_sig(u.from_si(v), 4), u.symbol)
+            }
+            None => format!("{} {unit}", format_sig(v, 4))
+                .trim_end()
+                .to_string(),
+        }
+    };
+    let text = match e {
+        EngineError::Undefined {
+            quantity,
+            value,
+            unit,
+            why,
+            ..
+        } => format!("{quantity} = {}: {why}", show(*value, unit)),
+        EngineError::NoTemperatureDifference { value, unit } => format!(
+            "surface and stream are both at {}: no heat flows, so there is nothing to compute",
+            show(*value, unit)
+        ),
+        EngineError::WrongPhase {
+            asked,
+            t,
+            boundary,
+            why,
+            ..
+        } => format!(
+            "{asked} at {}: {why}; the phase changes at {}",
+            show(*t, "K"),
+            show(*boundary, "K")
+        ),
+        other => other.to_string(),
+    };
+    // ASCII only: `char::to_uppercase` would bring Unicode's case tables (14 kB) into the page.
+    let mut text = text;
+    if let Some(first) = text.get_mut(..1) {
+        first.make_ascii_uppercase();
+    }
+    text
+}
+
 /// How a phase error of the process fluid names it, so the page puts it beside the process
 /// temperature.
 pub const PROCESS_FLUID: &str = "the process fluid";

@@ -189,7 +189,7 @@ pub fn from_fragment(fragment: &str) -> Result<(Scenario, System), String> {
                 };
                 let si_unit = units::units_of(spec.dim).next().expect("SI unit");
                 let v = read_field(spec, value, si_unit).map_err(|e| {
-                    format!("the link's {} is unusable: {e}", spec.label.to_lowercase())
+                    format!("the link's value for “{}” is unusable: {e}", spec.label)
                 })?;
                 s.set(spec.field, v);
             }

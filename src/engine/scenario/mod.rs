@@ -18,6 +18,7 @@ use crate::engine::units::{self, format_sig, Dim, System, Unit};
 use crate::engine::validity::Flag;
 
 mod choices;
+mod entry;
 mod evaluate;
 mod fields;
 mod link;
@@ -27,6 +28,7 @@ mod tests;
 mod working;
 
 pub use choices::*;
+pub use entry::*;
 pub use evaluate::*;
 pub use fields::*;
 pub use link::*;

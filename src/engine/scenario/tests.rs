@@ -474,3 +474,25 @@ fn no_temperature_difference_in_solved_mode_goes_beside_the_process_temperature(
     );
     assert_eq!(error_field(&s, &e), Some(Field::ProcessTemp));
 }
+
+/// Regression (defect 9 of the hostile-user report): messages showed raw SI numbers with float
+/// noise ("bore radius = -0.0028499999999999984 m"). Now in the person's units, four figures.
+#[test]
+fn error_messages_are_in_the_persons_units_without_float_noise() {
+    let mut s = DEMO;
+    s.surface_mode = SurfaceMode::Solved;
+    s.wall_thickness = 0.033; // more than the 30.15 mm outer radius
+    let e = evaluate(&s).unwrap_err();
+    let si = error_message(&e, &units::UnitChoice::for_system(System::Si));
+    assert!(si.contains("-2.85 mm") && si.starts_with('B'), "{si}");
+    let us = error_message(&e, &units::UnitChoice::for_system(System::Us));
+    assert!(us.contains("-0.1122 in") && !us.contains("mm"), "{us}");
+    // A phase error in °F on a US page.
+    let mut w = DEMO;
+    w.fluid = FluidKind::Water;
+    w.fluid_temp = 390.0;
+    if let Err(e) = evaluate(&w) {
+        let us = error_message(&e, &units::UnitChoice::for_system(System::Us));
+        assert!(us.contains("°F") && !us.contains(" K"), "{us}");
+    }
+}
