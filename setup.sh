@@ -70,6 +70,19 @@ ensure_wasm_opt() {
   fi
 }
 
+TWIGGY_VERSION=0.8.0
+# twiggy (crates.io) reads the wasm's code by function for the size ledger.
+ensure_twiggy() {
+  local have
+  have=$(twiggy --version 2>/dev/null | awk '{print $2}' || true)
+  if [ "$have" = "$TWIGGY_VERSION" ]; then
+    log "twiggy $have: present"
+  else
+    log "twiggy: found '${have:-none}', installing $TWIGGY_VERSION (about 3 minutes)"
+    cargo install --locked twiggy --version "$TWIGGY_VERSION" --force
+  fi
+}
+
 AXE_VERSION=4.14.1
 # axe-core (npm registry) for the accessibility check inside the browser tests; kept in .tools/.
 ensure_axe() {
@@ -106,6 +119,7 @@ tools() {
   ensure_trunk
   ensure_wasm_bindgen
   ensure_axe
+  ensure_twiggy
   log "fetching crates"
   cargo fetch --quiet
 }
@@ -127,11 +141,25 @@ size_report() {
   fi
 }
 
+# The size ledger: the release wasm Trunk just built from, optimised as Trunk does but keeping
+# its function names, summed by crate and by module of this crate (tests/bench/size_ledger.awk).
+ledger() {
+  local tmp
+  tmp=$(mktemp -d)
+  wasm-bindgen --target web --out-dir "$tmp" target/wasm32-unknown-unknown/release/leeward.wasm
+  wasm-opt -Oz --converge --low-memory-unused -g --enable-bulk-memory --enable-nontrapping-float-to-int \
+    --enable-sign-ext --enable-mutable-globals "$tmp/leeward_bg.wasm" -o "$tmp/named.wasm"
+  log "size ledger (raw bytes of the optimised wasm, by crate; generic view code counts under tachys):"
+  twiggy top -n 1000000 "$tmp/named.wasm" | awk -f tests/bench/size_ledger.awk >&2
+  rm -rf "$tmp"
+}
+
 build() {
   log "building dist/ (release, size-tuned, wasm-opt)"
   trunk build --release
   log "building dist/leeward.html (single self-contained file)"
   cargo run --quiet --no-default-features --bin leeward-bundle -- dist
+  ledger
   size_report
 }
 
@@ -170,8 +198,8 @@ case "${1:-}" in
     log "everything, the browser tests against dist/ included (a plain cargo test lists them as ignored)"
     mkdir -p target
     cargo test -- --include-ignored 2>&1 | tee target/test-everything.log
-    ran=$(grep -cE '^test browser::[a-z_]+ \.\.\. ok$' target/test-everything.log || true)
-    want=$(grep -c '#\[ignore = "browser:' tests/it/browser.rs)
+    ran=$(grep -cE '^test browser::[a-z_:0-9]+ \.\.\. ok$' target/test-everything.log || true)
+    want=$(cat tests/it/browser/*.rs | grep -c '#\[ignore = "browser:')
     log "browser tests run: $ran of $want"
     if [ "$ran" -ne "$want" ]; then
       log "not every browser test ran and passed: that is a failure, not a skip"
