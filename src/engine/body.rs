@@ -20,14 +20,14 @@ use std::f64::consts::PI;
 pub use crate::engine::shape::Shape;
 
 /// The axis of a prism.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum Axis {
     Horizontal,
     Vertical,
 }
 
 /// Which way the wind blows.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum Wind {
     Horizontal,
     Up,

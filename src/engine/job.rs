@@ -9,7 +9,7 @@ use crate::engine::units::Dim;
 
 /// Wall materials with properties near 300 K from Incropera & DeWitt, Fundamentals of Heat and Mass
 /// Transfer, Table A.1 (from memory): k W/(m·K), ρ kg/m³, cp J/(kg·K).
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum WallMaterial {
     CarbonSteel,
     Stainless,

@@ -12,7 +12,6 @@ pub mod correlations;
 pub mod error;
 pub mod heatloss;
 pub mod job;
-pub mod json;
 pub mod layers;
 pub mod pick;
 pub mod props;
@@ -23,6 +22,7 @@ pub mod store;
 pub mod survey;
 pub mod units;
 pub mod validity;
+pub mod value;
 
 pub use error::EngineError;
 pub use validity::{Flag, Flagged};

@@ -5,7 +5,7 @@ use crate::engine::correlations::{bars, cylinder, sphere, Forced};
 use std::f64::consts::PI;
 
 /// The cross-section of the body (or a sphere).
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum Shape {
     Cylinder,
     Sphere,

@@ -5,19 +5,27 @@
 //! Each scenario is its link fragment (itself versioned, see `scenario::to_fragment`), so the
 //! file and the links stay one format. Entries that cannot be read are kept, as they were, under
 //! `unreadable`, never dropped.
+//!
+//! The text crosses with serde (`serde_json` natively; the page's own `JSON.parse` and
+//! `JSON.stringify` through `serde-wasm-bindgen`): [`file`] is what is written, [`read`] takes a
+//! parsed [`Value`] apart, [`verify`] checks a write before it is committed.
 
-use crate::engine::json::{self, Value};
+use serde::{Deserialize, Serialize};
+
 use crate::engine::scenario::{self, Scenario};
 use crate::engine::units::System;
+pub use crate::engine::value::{too_deep, Value};
 
 pub const FORMAT: &str = "leeward-saved-work";
 pub const VERSION: u32 = 1;
 pub const MAX_NAME: usize = 120;
 
-#[derive(Debug, Clone, PartialEq)]
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 pub struct Saved {
     pub name: String,
+    #[serde(default)]
     pub tag: String,
+    #[serde(default)]
     pub location: String,
     /// The scenario as a link fragment (without '#').
     pub link: String,
@@ -58,51 +66,55 @@ pub struct Loaded {
     pub problems: Vec<String>,
 }
 
-pub fn to_json(s: &Store) -> String {
-    let items = s
-        .items
-        .iter()
-        .map(|i| {
-            format!(
-                "{{\"name\":{},\"tag\":{},\"location\":{},\"link\":{}}}",
-                json::quote(&i.name),
-                json::quote(&i.tag),
-                json::quote(&i.location),
-                json::quote(&i.link)
-            )
-        })
-        .collect::<Vec<_>>()
-        .join(",\n  ");
-    let unreadable = s
-        .unreadable
-        .iter()
-        .map(json::write)
-        .collect::<Vec<_>>()
-        .join(",");
-    format!(
-        "{{\"format\":{},\"version\":{VERSION},\"scenarios\":[\n  {items}\n],\"unreadable\":[{unreadable}]}}\n",
-        json::quote(FORMAT)
-    )
+/// The saved-work file as written: serialise it with any serde serializer.
+#[derive(Serialize)]
+pub struct File<'a> {
+    format: &'static str,
+    version: u32,
+    scenarios: &'a [Saved],
+    unreadable: &'a [Value],
 }
 
-/// The longest saved-work text the reader accepts (bytes): every write is held to it.
-pub const MAX_TEXT: usize = json::MAX_LEN;
+pub fn file(s: &Store) -> File<'_> {
+    File {
+        format: FORMAT,
+        version: VERSION,
+        scenarios: &s.items,
+        unreadable: &s.unreadable,
+    }
+}
 
-/// The text to write for `s`, checked before anything is written: no longer than the reader
-/// accepts, and read back to the very same store. A store that would fail either way is refused
-/// with the reason (the caller then changes nothing and offers an export instead).
-pub fn checked_text(s: &Store) -> Result<String, String> {
-    let text = to_json(s);
-    if text.len() > MAX_TEXT {
+/// The longest saved-work text the reader accepts (characters): every write is held to it.
+pub const MAX_TEXT: usize = 4 * 1024 * 1024;
+
+/// Before a text is parsed: refuse what the reader would not take (too long, nested too deep).
+pub fn admissible(text_len: usize, text: &str) -> Result<(), String> {
+    if text_len > MAX_TEXT {
         return Err(format!(
-            "the saved work would be {:.1} MB, more than the {:.0} MB this page can read back",
-            text.len() as f64 / 1e6,
+            "the text is {:.1} MB, more than the {:.0} MB this page reads",
+            text_len as f64 / 1e6,
             MAX_TEXT as f64 / (1024.0 * 1024.0)
         ));
     }
-    // Read back: the text parses and holds the very same entries (compared as written; the links
-    // were checked when they were made or read, and are not parsed again here).
-    let same = json::parse(&text).ok().is_some_and(|v| {
+    if too_deep(text) {
+        return Err("nested too deeply to be a saved-work file".into());
+    }
+    Ok(())
+}
+
+/// Check a write before it is committed: the text (of `text_len` characters) is no longer than
+/// the reader accepts, and `back` — the text parsed again — holds the very same entries (compared
+/// as written; the links were checked when they were made or read). A write that fails is refused
+/// with the reason; the caller then changes nothing and offers an export instead.
+pub fn verify(s: &Store, text_len: usize, back: Result<Value, String>) -> Result<(), String> {
+    if text_len > MAX_TEXT {
+        return Err(format!(
+            "the saved work would be {:.1} MB, more than the {:.0} MB this page can read back",
+            text_len as f64 / 1e6,
+            MAX_TEXT as f64 / (1024.0 * 1024.0)
+        ));
+    }
+    let same = back.ok().is_some_and(|v| {
         let list = v.get("scenarios").and_then(Value::as_array).unwrap_or(&[]);
         list.len() == s.items.len()
             && list.iter().zip(&s.items).all(|(e, i)| {
@@ -115,16 +127,42 @@ pub fn checked_text(s: &Store) -> Result<String, String> {
             && v.get("unreadable").and_then(Value::as_array) == Some(s.unreadable.as_slice())
     });
     if same {
-        Ok(text)
+        Ok(())
     } else {
         Err("the saved work would not read back as written".into())
     }
 }
 
-/// Read a saved-work text. `Err` when nothing of it can be read (not JSON, another format, a
-/// later version); otherwise every readable entry, and a problem line for each one that is not.
+/// The file as text, natively (tests, harnesses, the build step): `serde_json`, compact.
+#[cfg(not(target_arch = "wasm32"))]
+pub fn to_json(s: &Store) -> String {
+    serde_json::to_string(&file(s)).expect("a store always serialises")
+}
+
+/// Parse a text, natively, as the page does: bounded first, then `serde_json`.
+#[cfg(not(target_arch = "wasm32"))]
+pub fn parse(text: &str) -> Result<Value, String> {
+    admissible(text.len(), text)?;
+    serde_json::from_str(text).map_err(|e| e.to_string())
+}
+
+/// The text to write for `s`, natively, checked as the page checks it.
+#[cfg(not(target_arch = "wasm32"))]
+pub fn checked_text(s: &Store) -> Result<String, String> {
+    let text = to_json(s);
+    verify(s, text.len(), parse(&text))?;
+    Ok(text)
+}
+
+/// Read a saved-work text, natively (see [`read`]).
+#[cfg(not(target_arch = "wasm32"))]
 pub fn from_json(text: &str) -> Result<Loaded, String> {
-    let v = json::parse(text).map_err(|e| format!("not a saved-work file: {e}"))?;
+    read(parse(text).map_err(|e| format!("not a saved-work file: {e}"))?)
+}
+
+/// Take a parsed saved-work file apart. `Err` when nothing of it can be read (another format, a
+/// later version); otherwise every readable entry, and a problem line for each one that is not.
+pub fn read(v: Value) -> Result<Loaded, String> {
     if v.get("format").and_then(Value::as_str) != Some(FORMAT) {
         return Err("not a Leeward saved-work file (no \"format\": \"leeward-saved-work\")".into());
     }
@@ -458,7 +496,10 @@ mod tests {
     #[test]
     fn a_store_of_another_shape_keeps_everything_aside() {
         let link = scenario::to_fragment(&DEMO, System::Si);
-        let entry = format!("{{\"name\":\"A\",\"link\":{}}}", json::quote(&link));
+        let entry = format!(
+            "{{\"name\":\"A\",\"link\":{}}}",
+            serde_json::to_string(&link).unwrap()
+        );
         for (text, kept) in [
             (format!("{{\"format\":\"{FORMAT}\",\"version\":1,\"scenarios\":{{\"a\":{entry}}}}}"), 1),
             (format!("{{\"format\":\"{FORMAT}\",\"version\":1,\"items\":[{entry}]}}"), 1),

@@ -73,7 +73,7 @@ pub const ALL_DIMS: [Dim; 24] = [
 ];
 
 /// A unit system for the global switch.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum System {
     Si,
     Us,

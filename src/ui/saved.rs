@@ -7,7 +7,7 @@ use wasm_bindgen::JsCast;
 
 use super::mark;
 use crate::engine::scenario::Scenario;
-use crate::engine::store::{self, Plan, Saved, Store};
+use crate::engine::store::{self, Loaded, Plan, Saved, Store};
 use crate::engine::survey;
 use crate::engine::units::{format_sig, Dim, System, UnitChoice};
 
@@ -16,6 +16,47 @@ const UNREADABLE_KEY: &str = "leeward.saved.unreadable";
 
 fn storage() -> Option<web_sys::Storage> {
     window().local_storage().ok().flatten()
+}
+
+/// The message of a JavaScript exception (JSON.parse's syntax error, a storage refusal).
+fn js_message(e: &wasm_bindgen::JsValue) -> String {
+    e.dyn_ref::<js_sys::Error>()
+        .map(|e| String::from(e.message()))
+        .unwrap_or_else(|| "not JSON".into())
+}
+
+/// Parse saved-work text with the browser's own `JSON.parse`, bounded first (length, nesting).
+fn parse_text(text: &str) -> Result<store::Value, String> {
+    store::admissible(text.len(), text)?;
+    let v = js_sys::JSON::parse(text).map_err(|e| js_message(&e))?;
+    serde_wasm_bindgen::from_value(v).map_err(|e| e.to_string())
+}
+
+/// Read a saved-work text (storage or a chosen file).
+fn read_text(text: &str) -> Result<Loaded, String> {
+    store::read(parse_text(text).map_err(|e| format!("not a saved-work file: {e}"))?)
+}
+
+/// The saved-work file as text through the browser's `JSON.stringify` (indented for a file a
+/// person may open, compact for storage).
+fn file_text(s: &Store, indent: bool) -> Result<String, String> {
+    use serde::Serialize;
+    let v = store::file(s)
+        .serialize(&serde_wasm_bindgen::Serializer::json_compatible())
+        .map_err(|e| e.to_string())?;
+    let t = if indent {
+        js_sys::JSON::stringify_with_replacer_and_space(&v, &wasm_bindgen::JsValue::NULL, &1.into())
+    } else {
+        js_sys::JSON::stringify(&v)
+    };
+    t.map(String::from).map_err(|e| js_message(&e))
+}
+
+/// The text to store for `s`, checked before anything is written (`store::verify`).
+fn checked_text(s: &Store) -> Result<String, String> {
+    let text = file_text(s, false)?;
+    store::verify(s, text.len(), parse_text(&text))?;
+    Ok(text)
 }
 
 /// What opening the store found.
@@ -40,7 +81,7 @@ fn load() -> Opened {
             held: None,
         };
     };
-    match store::from_json(&text) {
+    match read_text(&text) {
         Ok(l) => Opened {
             store: l.store,
             message: (!l.problems.is_empty()).then(|| {
@@ -67,7 +108,7 @@ fn load() -> Opened {
 /// failure nothing has changed and the reason is returned.
 fn save(s: &Store) -> Result<(), String> {
     let st = storage().ok_or("no storage in this browser")?;
-    let text = store::checked_text(s)?;
+    let text = checked_text(s)?;
     st.set_item(KEY, &text).map_err(|_| {
         "the browser's storage is full or refused the write; nothing was changed".to_string()
     })?;
@@ -223,15 +264,12 @@ pub fn SavedPanel(
         ));
         commit(next, format!("Saved as “{n}”."));
     };
-    let export = move |_| {
-        download(
-            "leeward-saved-work.json",
-            "application/json",
-            &store::to_json(&saved.get_untracked()),
-        );
+    let export = move |_| match file_text(&saved.get_untracked(), true) {
+        Ok(text) => download("leeward-saved-work.json", "application/json", &text),
+        Err(e) => note.set(Some(format!("Not exported: {e}."))),
     };
     let import = move |ev: leptos::ev::Event| {
-        read_chosen_file(ev, move |text| match store::from_json(&text) {
+        read_chosen_file(ev, move |text| match read_text(&text) {
             Ok(l) => {
                 let plan = store::plan_import(&saved.get_untracked(), &l.store);
                 let extra = if l.problems.is_empty() {

@@ -116,3 +116,24 @@ fn every_field_round_trips_through_link_file_and_csv() {
         "fields no scenario here uses: {missing:?}"
     );
 }
+
+/// The scenario's serde form (derived in the engine, no web dependency) carries every field and
+/// every choice exactly; the view options' too. Checked through `serde_json`'s text.
+#[test]
+fn the_scenario_and_view_options_round_trip_through_serde() {
+    for base in scenarios() {
+        let mut s = base;
+        for sp in FIELDS.iter().filter(|sp| base.uses(sp.field)) {
+            s.set(sp.field, nudged(&base, sp.field));
+        }
+        let text = serde_json::to_string(&s).unwrap();
+        let back: Scenario = serde_json::from_str(&text).unwrap();
+        assert_eq!(back, s, "{text}");
+    }
+    for frag in ["#v=1", "#v=1&view=embed", "#v=1&lock=1&view=embed"] {
+        let v = scenario::ViewOptions::from_fragment(frag);
+        let back: scenario::ViewOptions =
+            serde_json::from_str(&serde_json::to_string(&v).unwrap()).unwrap();
+        assert_eq!(back, v);
+    }
+}

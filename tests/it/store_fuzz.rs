@@ -2,12 +2,10 @@
 //! back unchanged, a written text is never larger than the reader accepts (else the write is
 //! refused), and no text at all — cut, spliced or random — makes the reader panic.
 //!
-//! The independent check is `serde_json` (crates.io), a reader written by others: every text the
-//! writer produces must be valid JSON to it, with the same names and links.
-
-use leeward::engine::json::Value;
+//! Natively the text is `serde_json`'s; the page's is the browser's `JSON.stringify`. The two meet
+//! in the browser tests, where the page reads with `JSON.parse` stores written here natively.
 use leeward::engine::scenario::{self, DEMO};
-use leeward::engine::store::{self, Saved, Store, MAX_TEXT};
+use leeward::engine::store::{self, Saved, Store, Value, MAX_TEXT};
 use leeward::engine::units::System;
 use proptest::prelude::*;
 
@@ -62,8 +60,8 @@ proptest! {
         let back = store::from_json(&text).unwrap();
         prop_assert!(back.problems.is_empty(), "{:?}", back.problems);
         prop_assert_eq!(&back.store, &s);
-        // Another reader agrees on what was written.
-        let v: serde_json::Value = serde_json::from_str(&text).expect("valid JSON to serde_json");
+        // Written as the format says: the entries under "scenarios", in order.
+        let v: serde_json::Value = serde_json::from_str(&text).expect("valid JSON");
         let list = v["scenarios"].as_array().unwrap();
         prop_assert_eq!(list.len(), s.items.len());
         for (j, it) in list.iter().zip(&s.items) {

@@ -4,7 +4,7 @@
 use super::*;
 
 /// The fluid of the stream.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum FluidKind {
     DryAir,
     HumidAir,
@@ -54,7 +54,7 @@ impl FluidKind {
 }
 
 /// How the stream's pressure is given.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum PressureInput {
     Absolute,
     /// From the site elevation through the standard atmosphere.
@@ -62,7 +62,7 @@ pub enum PressureInput {
 }
 
 /// How humid air's moisture is given.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum HumidityInput {
     Relative,
     DewPoint,
@@ -70,7 +70,7 @@ pub enum HumidityInput {
 
 /// Where the inside film coefficient of a pipe comes from: typed (0 for none), or computed from
 /// the flow of a process fluid through the bore.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum InsideFilm {
     Typed,
     Water,
@@ -138,7 +138,7 @@ impl Inside {
 }
 
 /// Whether the surface temperature is typed or solved from the process inside.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum SurfaceMode {
     Given,
     Solved,

@@ -64,7 +64,7 @@ pub fn to_fragment(s: &Scenario, system: System) -> String {
 /// How the page is shown, from the same fragment: `view=embed` for the compact view inside a
 /// wiki page (no header, no plots, no saved-work panel), `lock=1` to make the inputs read-only
 /// (a worked example). Unknown values are ignored.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default, serde::Serialize, serde::Deserialize)]
 pub struct ViewOptions {
     pub embed: bool,
     pub locked: bool,

@@ -36,7 +36,7 @@ pub(crate) use working::*;
 
 /// The inputs, SI: lengths m, speed m/s, temperatures K, pressure Pa, elevation m, fractions 0–1,
 /// user-fluid properties in SI.
-#[derive(Debug, Clone, Copy, PartialEq)]
+#[derive(Debug, Clone, Copy, PartialEq, serde::Serialize, serde::Deserialize)]
 pub struct Scenario {
     pub shape: Shape,
     pub axis: Axis,
