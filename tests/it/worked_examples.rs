@@ -136,7 +136,6 @@ fn time_for_still_water_to_reach_freezing() {
         12.0 * (d_ins / d_pipe).ln() / (2.0 * std::f64::consts::PI * 0.30),
     );
     let ashrae = 62.4 * std::f64::consts::PI * (d1_ft / 2.0).powi(2) * r_ft * (60.0f64 / 50.0).ln();
-    assert!((ashrae - 1.4).abs() < 0.05, "handbook equation {ashrae} h");
     assert!((hours - 1.4).abs() < 0.06, "engine {hours} h");
     assert!(
         hours > ashrae && hours < 1.03 * ashrae,
