@@ -3,7 +3,8 @@
 //!
 //! Columns: `name`, `tag`, `location`; the choice keys of the link (`s`, `ax`, `w`, `f`, `pm`, `hm`,
 //! `sm`, `wm`, `nl`; blank where the link leaves them out); then every numeric input as
-//! `key [unit id]`, e.g. `D [mm]`, `Ta [C]`. A blank cell takes the demo's value.
+//! `label (key) [unit id]`, e.g. `Size D (D) [mm]`, `Stream temperature (Ta) [C]` (files with the
+//! bare `key [unit id]` of earlier versions still read). A blank cell takes the demo's value.
 
 use crate::engine::error::EngineError;
 use crate::engine::scenario::{self, check_field, Scenario, FIELDS};
@@ -115,7 +116,7 @@ pub fn header(system: System) -> Vec<String> {
     h.extend(
         FIELDS
             .iter()
-            .map(|f| format!("{} [{}]", f.key, c.get(f.dim).id)),
+            .map(|f| format!("{} ({}) [{}]", f.label, f.key, c.get(f.dim).id)),
     );
     h
 }
@@ -230,6 +231,15 @@ fn records(text: &str) -> Vec<(usize, Vec<String>)> {
 /// The most data rows one CSV import reads.
 pub const MAX_ROWS: usize = 10_000;
 
+/// The link key of a field column's header: "Size D (D)" (the label as the page writes it, the
+/// key in parentheses) or the bare key "D" of earlier files.
+fn column_key(head: &str) -> &str {
+    let head = head.trim();
+    head.strip_suffix(')')
+        .and_then(|h| h.rsplit_once(" ("))
+        .map_or(head, |(_, key)| key)
+}
+
 /// Read a CSV list. Rows that fail are reported by line and column and left out; the rest are
 /// returned. Limits: 10,000 rows, 4 MB. A file that is not text, or has no column of the list's
 /// format, is refused whole with a reason; rows past the limit are reported, never dropped
@@ -282,8 +292,8 @@ pub fn from_csv(text: &str) -> (Vec<Saved>, Vec<CsvError>) {
         } else if let Some(k) = CHOICE_KEYS.iter().find(|k| **k == h) {
             Col::Choice(k)
         } else if let Some((key, unit)) = h
-            .split_once(" [")
-            .and_then(|(k, u)| u.strip_suffix(']').map(|u| (k.trim(), u)))
+            .rsplit_once(" [")
+            .and_then(|(k, u)| u.strip_suffix(']').map(|u| (column_key(k), u)))
         {
             match (FIELDS.iter().find(|f| f.key == key), units::unit(unit)) {
                 (Some(f), Some(u)) if u.dim == f.dim => Col::Field(f, u),
@@ -497,7 +507,11 @@ mod tests {
     fn bad_rows_are_reported_by_line_and_column_and_the_rest_import() {
         let mut text = to_csv(&items(), System::Si);
         let head = text.lines().next().unwrap().to_string();
-        let d_col = head.split(',').position(|h| h == "D [mm]").unwrap() + 1;
+        let d_col = head
+            .split(',')
+            .position(|h| h == "Size D (D) [mm]")
+            .unwrap()
+            + 1;
         let mut row = vec![String::new(); d_col];
         row[0] = "Broken".into();
         row[d_col - 1] = "-5".into();

@@ -10,7 +10,6 @@ pub enum Field {
     Length,
     Speed,
     FluidTemp,
-    SurfaceTemp,
     Pressure,
     Elevation,
     RelativeHumidity,
@@ -21,6 +20,7 @@ pub enum Field {
     UserK,
     UserCp,
     UserBeta,
+    SurfaceTemp,
     ProcessTemp,
     HInside,
     ProcessGlycol,
@@ -45,14 +45,14 @@ pub enum Field {
     KTempC,
     TouchLimit,
     DewMargin,
+    LossTarget,
+    FreezeTarget,
     MassFlow,
     ProcessCp,
     Hours,
     Price,
     Efficiency,
     CoolTarget,
-    LossTarget,
-    FreezeTarget,
 }
 
 /// The group a field is shown in.
@@ -65,13 +65,19 @@ pub enum Group {
     Job,
 }
 
-/// An input's label, dimension, link key and hard limits. The limits are where the computation
-/// stops making physical sense (not a method's fitted range, which only flags).
-#[derive(Debug, Clone, Copy, PartialEq)]
+/// One input, the single source of truth for it: identity, group, link key, label and help as
+/// the page writes them, quantity (units, display, the CSV header's unit), hard limits, where the
+/// value lives in the `Scenario`, and when it applies. Link, CSV, saved file, the form, unit
+/// rewrites and messages all read this row; adding an input is one row (plus its `Field` name and
+/// its typed `Scenario` field, and the demo's value there).
+///
+/// The limits are where the computation stops making physical sense (not a method's fitted
+/// range, which only flags).
+#[derive(Clone, Copy)]
 pub struct FieldSpec {
     pub field: Field,
     pub group: Group,
-    /// Key in the link fragment.
+    /// Key in the link fragment and in the CSV header.
     pub key: &'static str,
     pub label: &'static str,
     pub dim: Dim,
@@ -80,8 +86,34 @@ pub struct FieldSpec {
     pub min_open: bool,
     pub max: f64,
     pub help: &'static str,
+    /// The value in a scenario, SI.
+    pub get: fn(&Scenario) -> f64,
+    pub put: fn(&mut Scenario, f64),
+    /// Whether the field takes part in a scenario (the page hides it otherwise, the CSV leaves
+    /// it blank).
+    pub applies: fn(&Scenario) -> bool,
 }
 
+impl std::fmt::Debug for FieldSpec {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        write!(f, "FieldSpec({:?})", self.field)
+    }
+}
+
+impl PartialEq for FieldSpec {
+    fn eq(&self, other: &Self) -> bool {
+        self.field == other.field
+    }
+}
+
+/// Where a field's value lives in the `Scenario`: a getter and a setter from one path.
+macro_rules! at {
+    ($($path:tt)+) => {
+        (|s: &Scenario| s.$($path)+, |s: &mut Scenario, v: f64| s.$($path)+ = v)
+    };
+}
+
+#[allow(clippy::too_many_arguments)]
 pub(crate) const fn f(
     field: Field,
     group: Group,
@@ -90,6 +122,8 @@ pub(crate) const fn f(
     dim: Dim,
     (min, min_open, max): (f64, bool, f64),
     help: &'static str,
+    (get, put): (fn(&Scenario) -> f64, fn(&mut Scenario, f64)),
+    applies: fn(&Scenario) -> bool,
 ) -> FieldSpec {
     FieldSpec {
         field,
@@ -101,222 +135,149 @@ pub(crate) const fn f(
         min_open,
         max,
         help,
+        get,
+        put,
+        applies,
     }
+}
+
+// When a field applies: one predicate per condition, named as the page would say it.
+fn always(_: &Scenario) -> bool {
+    true
+}
+fn not_sphere(s: &Scenario) -> bool {
+    s.shape != Shape::Sphere
+}
+fn pressure_typed(s: &Scenario) -> bool {
+    s.pressure_input == PressureInput::Absolute
+}
+fn elevation_typed(s: &Scenario) -> bool {
+    s.pressure_input == PressureInput::Elevation
+}
+fn humidity_typed(s: &Scenario) -> bool {
+    s.fluid == FluidKind::HumidAir && s.humidity_input == HumidityInput::Relative
+}
+fn dew_point_typed(s: &Scenario) -> bool {
+    s.fluid == FluidKind::HumidAir && s.humidity_input == HumidityInput::DewPoint
+}
+fn glycol_stream(s: &Scenario) -> bool {
+    matches!(
+        s.fluid,
+        FluidKind::EthyleneGlycol | FluidKind::PropyleneGlycol
+    )
+}
+fn user_fluid(s: &Scenario) -> bool {
+    s.fluid == FluidKind::User
+}
+fn surface_typed(s: &Scenario) -> bool {
+    !s.solved()
+}
+fn solved(s: &Scenario) -> bool {
+    s.solved()
+}
+fn inside_typed(s: &Scenario) -> bool {
+    s.solved() && !s.inside_computed()
+}
+fn offers_film(s: &Scenario) -> bool {
+    s.offers_inside_film()
+}
+fn process_glycol(s: &Scenario) -> bool {
+    s.inside_computed()
+        && matches!(
+            s.inside,
+            InsideFilm::EthyleneGlycol | InsideFilm::PropyleneGlycol
+        )
+}
+fn wall_typed(s: &Scenario) -> bool {
+    s.solved() && s.wall == WallMaterial::User
+}
+fn layer_1(s: &Scenario) -> bool {
+    s.solved() && s.layer_count >= 1
+}
+fn layer_2(s: &Scenario) -> bool {
+    s.solved() && s.layer_count >= 2
+}
+fn layer_3(s: &Scenario) -> bool {
+    s.solved() && s.layer_count >= 3
+}
+fn still_water(s: &Scenario) -> bool {
+    s.offers_inside_film() && s.mass_flow == 0.0
+}
+fn process_cp_typed(s: &Scenario) -> bool {
+    s.offers_inside_film() && !s.inside_computed()
+}
+fn cools(s: &Scenario) -> bool {
+    s.cools()
 }
 
 #[rustfmt::skip]
 pub const FIELDS: [FieldSpec; 47] = [
-    f(Field::Diameter, Group::Body, "D", "Size D", Dim::Length, (0.0, true, 100.0), "as drawn: the width across the stream (bare outside diameter of a pipe)"),
-    f(Field::Length, Group::Body, "L", "Length", Dim::RunLength, (0.0, true, 10_000.0), "along the axis; the height when upright"),
-    f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air"),
-    f(Field::FluidTemp, Group::Stream, "Ta", "Stream temperature", Dim::Temperature, (0.0, true, 3000.0), "of the approaching fluid"),
-    f(Field::Pressure, Group::Stream, "p", "Pressure", Dim::Pressure, (0.0, true, 100e6), "absolute, at the site"),
-    f(Field::Elevation, Group::Stream, "z", "Site elevation", Dim::Elevation, (-500.0, false, 11_000.0), "above sea level; standard atmosphere"),
-    f(Field::RelativeHumidity, Group::Stream, "rh", "Relative humidity", Dim::Fraction, (0.0, false, 1.0), "to water above 0 °C, to ice below"),
-    f(Field::DewPoint, Group::Stream, "td", "Dew point", Dim::Temperature, (0.0, true, 3000.0), "frost point below 0 °C"),
-    f(Field::GlycolFraction, Group::Stream, "xg", "Glycol content", Dim::Fraction, (0.0, false, 0.6), "by mass, 0–60 %"),
-    f(Field::UserRho, Group::Stream, "ur", "Density", Dim::Density, (0.0, true, 1e5), "of your fluid"),
-    f(Field::UserMu, Group::Stream, "um", "Viscosity", Dim::DynamicViscosity, (0.0, true, 1e3), "dynamic, of your fluid"),
-    f(Field::UserK, Group::Stream, "uk", "Thermal conductivity", Dim::ThermalConductivity, (0.0, true, 1e4), "of your fluid"),
-    f(Field::UserCp, Group::Stream, "uc", "Heat capacity", Dim::SpecificHeat, (0.0, true, 1e6), "isobaric, of your fluid"),
-    f(Field::UserBeta, Group::Stream, "ub", "Expansion coefficient β", Dim::ExpansionCoefficient, (0.0, false, 1.0), "volumetric; 0 if unknown"),
-    f(Field::SurfaceTemp, Group::Surface, "Ts", "Surface temperature", Dim::Temperature, (0.0, true, 3000.0), "of the outer surface"),
-    f(Field::ProcessTemp, Group::Surface, "Tp", "Process temperature", Dim::Temperature, (0.0, true, 3000.0), "of the fluid inside"),
-    f(Field::HInside, Group::Surface, "hi", "Inside film coefficient", Dim::HeatTransferCoefficient, (0.0, false, 1e6), "0 if the bore sits at the process temperature"),
-    f(Field::ProcessGlycol, Group::Surface, "xgp", "Glycol in the process fluid", Dim::Fraction, (0.0, false, 0.6), "by mass, 0–60 %"),
-    f(Field::WallThickness, Group::Surface, "tw", "Wall thickness", Dim::Length, (0.0, false, 1.0), "of the pipe or vessel"),
-    f(Field::WallK, Group::Surface, "kw", "Wall conductivity", Dim::ThermalConductivity, (0.0, true, 1e4), "of your wall material"),
-    f(Field::Emissivity, Group::Surface, "e", "Emissivity", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 painted or oxidised, 0.1 bright aluminium (common practice)"),
-    f(Field::Surround, Group::Surface, "Tr", "Surroundings temperature", Dim::Temperature, (0.0, true, 3000.0), "what the surface sees (sky, walls); the stream's if unsure"),
-    f(Field::Layer1T, Group::Layers, "t1", "Layer 1 thickness", Dim::Length, (0.0, false, 2.0), "innermost insulation"),
-    f(Field::Layer1Ka, Group::Layers, "ka1", "Layer 1 k at mean temperature A", Dim::ThermalConductivity, (0.0, true, 100.0), "from the data sheet"),
-    f(Field::Layer1Kb, Group::Layers, "kb1", "Layer 1 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k"),
-    f(Field::Layer2T, Group::Layers, "t2", "Layer 2 thickness", Dim::Length, (0.0, false, 2.0), "over layer 1"),
-    f(Field::Layer2Ka, Group::Layers, "ka2", "Layer 2 k at mean temperature A", Dim::ThermalConductivity, (0.0, true, 100.0), "from the data sheet"),
-    f(Field::Layer2Kb, Group::Layers, "kb2", "Layer 2 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k"),
-    f(Field::Layer3T, Group::Layers, "t3", "Layer 3 thickness", Dim::Length, (0.0, false, 2.0), "outermost"),
-    f(Field::Layer3Ka, Group::Layers, "ka3", "Layer 3 k at mean temperature A", Dim::ThermalConductivity, (0.0, true, 100.0), "from the data sheet"),
-    f(Field::Layer3Kb, Group::Layers, "kb3", "Layer 3 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k"),
-    f(Field::KTempA, Group::Layers, "Tka", "Mean temperature A", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's first k"),
-    f(Field::KTempB, Group::Layers, "Tkb", "Mean temperature B", Dim::Temperature, (0.0, true, 3000.0), "of its second k"),
-    f(Field::Layer1Kc, Group::Layers, "kc1", "Layer 1 k at mean temperature C", Dim::ThermalConductivity, (0.0, false, 100.0), "optional third point (0: k is linear through A and B)"),
-    f(Field::Layer2Kc, Group::Layers, "kc2", "Layer 2 k at mean temperature C", Dim::ThermalConductivity, (0.0, false, 100.0), "optional third point (0: linear)"),
-    f(Field::Layer3Kc, Group::Layers, "kc3", "Layer 3 k at mean temperature C", Dim::ThermalConductivity, (0.0, false, 100.0), "optional third point (0: linear)"),
-    f(Field::KTempC, Group::Layers, "Tkc", "Mean temperature C", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's third k, if given"),
-    f(Field::TouchLimit, Group::Job, "Tl", "Touch limit", Dim::Temperature, (0.0, true, 3000.0), "60 °C is common practice; local codes govern"),
-    f(Field::DewMargin, Group::Job, "dm", "Margin above the dew point", Dim::TemperatureDifference, (0.0, false, 50.0), "for cold surfaces in humid air"),
-    f(Field::LossTarget, Group::Job, "qt", "Loss target", Dim::HeatFlowPerLength, (0.0, false, 1e6), "highest loss per metre wanted; 0 for none"),
-    f(Field::FreezeTarget, Group::Job, "tft", "Hold out against freezing for", Dim::Duration, (0.0, false, 3.6e7), "still water in frost; 0 for none"),
-    f(Field::MassFlow, Group::Job, "mf", "Flow through the pipe", Dim::MassFlow, (0.0, false, 1e4), "0 for still water (then the freezing times)"),
-    f(Field::ProcessCp, Group::Job, "cpp", "Heat capacity of the process fluid", Dim::SpecificHeat, (0.0, true, 1e6), "about 4180 J/(kg·K) for water"),
-    f(Field::Hours, Group::Job, "hy", "Operating hours", Dim::HoursPerYear, (0.0, false, 8784.0), "per year"),
-    f(Field::Price, Group::Job, "pe", "Energy price", Dim::EnergyPrice, (0.0, false, 1e-4), "of the fuel or power that makes up the loss"),
-    f(Field::Efficiency, Group::Job, "ef", "Heater or boiler efficiency", Dim::Fraction, (0.01, false, 1.0), "share of that energy that becomes heat"),
-    f(Field::CoolTarget, Group::Job, "T1", "Cool or warm a solid body to", Dim::Temperature, (0.0, true, 3000.0), "its cooling time in this stream (material above)"),
+    f(Field::Diameter, Group::Body, "D", "Size D", Dim::Length, (0.0, true, 100.0), "as drawn: the width across the stream (bare outside diameter of a pipe)", at!(diameter), always),
+    f(Field::Length, Group::Body, "L", "Length", Dim::RunLength, (0.0, true, 10_000.0), "along the axis; the height when upright", at!(length), not_sphere),
+    f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air", at!(speed), always),
+    f(Field::FluidTemp, Group::Stream, "Ta", "Stream temperature", Dim::Temperature, (0.0, true, 3000.0), "of the approaching fluid", at!(fluid_temp), always),
+    f(Field::Pressure, Group::Stream, "p", "Pressure", Dim::Pressure, (0.0, true, 100e6), "absolute, at the site", at!(pressure), pressure_typed),
+    f(Field::Elevation, Group::Stream, "z", "Site elevation", Dim::Elevation, (-500.0, false, 11_000.0), "above sea level; standard atmosphere", at!(elevation), elevation_typed),
+    f(Field::RelativeHumidity, Group::Stream, "rh", "Relative humidity", Dim::Fraction, (0.0, false, 1.0), "to water above 0 °C, to ice below", at!(relative_humidity), humidity_typed),
+    f(Field::DewPoint, Group::Stream, "td", "Dew point", Dim::Temperature, (0.0, true, 3000.0), "frost point below 0 °C", at!(dew_point), dew_point_typed),
+    f(Field::GlycolFraction, Group::Stream, "xg", "Glycol content", Dim::Fraction, (0.0, false, 0.6), "by mass, 0–60 %", at!(glycol_fraction), glycol_stream),
+    f(Field::UserRho, Group::Stream, "ur", "Density", Dim::Density, (0.0, true, 1e5), "of your fluid", at!(user_rho), user_fluid),
+    f(Field::UserMu, Group::Stream, "um", "Viscosity", Dim::DynamicViscosity, (0.0, true, 1e3), "dynamic, of your fluid", at!(user_mu), user_fluid),
+    f(Field::UserK, Group::Stream, "uk", "Thermal conductivity", Dim::ThermalConductivity, (0.0, true, 1e4), "of your fluid", at!(user_k), user_fluid),
+    f(Field::UserCp, Group::Stream, "uc", "Heat capacity", Dim::SpecificHeat, (0.0, true, 1e6), "isobaric, of your fluid", at!(user_cp), user_fluid),
+    f(Field::UserBeta, Group::Stream, "ub", "Expansion coefficient β", Dim::ExpansionCoefficient, (0.0, false, 1.0), "volumetric; 0 if unknown", at!(user_beta), user_fluid),
+    f(Field::SurfaceTemp, Group::Surface, "Ts", "Surface temperature", Dim::Temperature, (0.0, true, 3000.0), "of the outer surface", at!(surface_temp), surface_typed),
+    f(Field::ProcessTemp, Group::Surface, "Tp", "Process temperature", Dim::Temperature, (0.0, true, 3000.0), "of the fluid inside", at!(process_temp), solved),
+    f(Field::HInside, Group::Surface, "hi", "Inside film coefficient", Dim::HeatTransferCoefficient, (0.0, false, 1e6), "0 if the bore sits at the process temperature", at!(h_inside), inside_typed),
+    f(Field::ProcessGlycol, Group::Surface, "xgp", "Glycol in the process fluid", Dim::Fraction, (0.0, false, 0.6), "by mass, 0–60 %", at!(process_glycol), process_glycol),
+    f(Field::WallThickness, Group::Surface, "tw", "Wall thickness", Dim::Length, (0.0, false, 1.0), "of the pipe or vessel", at!(wall_thickness), solved),
+    f(Field::WallK, Group::Surface, "kw", "Wall conductivity", Dim::ThermalConductivity, (0.0, true, 1e4), "of your wall material", at!(wall_k), wall_typed),
+    f(Field::Emissivity, Group::Surface, "e", "Emissivity", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 painted or oxidised, 0.1 bright aluminium (common practice)", at!(emissivity), always),
+    f(Field::Surround, Group::Surface, "Tr", "Surroundings temperature", Dim::Temperature, (0.0, true, 3000.0), "what the surface sees (sky, walls); the stream's if unsure", at!(t_surround), always),
+    f(Field::Layer1T, Group::Layers, "t1", "Layer 1 thickness", Dim::Length, (0.0, false, 2.0), "innermost insulation", at!(layer_t[0]), layer_1),
+    f(Field::Layer1Ka, Group::Layers, "ka1", "Layer 1 k at mean temperature A", Dim::ThermalConductivity, (0.0, true, 100.0), "from the data sheet", at!(layer_ka[0]), layer_1),
+    f(Field::Layer1Kb, Group::Layers, "kb1", "Layer 1 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k", at!(layer_kb[0]), layer_1),
+    f(Field::Layer2T, Group::Layers, "t2", "Layer 2 thickness", Dim::Length, (0.0, false, 2.0), "over layer 1", at!(layer_t[1]), layer_2),
+    f(Field::Layer2Ka, Group::Layers, "ka2", "Layer 2 k at mean temperature A", Dim::ThermalConductivity, (0.0, true, 100.0), "from the data sheet", at!(layer_ka[1]), layer_2),
+    f(Field::Layer2Kb, Group::Layers, "kb2", "Layer 2 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k", at!(layer_kb[1]), layer_2),
+    f(Field::Layer3T, Group::Layers, "t3", "Layer 3 thickness", Dim::Length, (0.0, false, 2.0), "outermost", at!(layer_t[2]), layer_3),
+    f(Field::Layer3Ka, Group::Layers, "ka3", "Layer 3 k at mean temperature A", Dim::ThermalConductivity, (0.0, true, 100.0), "from the data sheet", at!(layer_ka[2]), layer_3),
+    f(Field::Layer3Kb, Group::Layers, "kb3", "Layer 3 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k", at!(layer_kb[2]), layer_3),
+    f(Field::KTempA, Group::Layers, "Tka", "Mean temperature A", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's first k", at!(k_temp_a), layer_1),
+    f(Field::KTempB, Group::Layers, "Tkb", "Mean temperature B", Dim::Temperature, (0.0, true, 3000.0), "of its second k", at!(k_temp_b), layer_1),
+    f(Field::Layer1Kc, Group::Layers, "kc1", "Layer 1 k at mean temperature C", Dim::ThermalConductivity, (0.0, false, 100.0), "optional third point (0: k is linear through A and B)", at!(layer_kc[0]), layer_1),
+    f(Field::Layer2Kc, Group::Layers, "kc2", "Layer 2 k at mean temperature C", Dim::ThermalConductivity, (0.0, false, 100.0), "optional third point (0: linear)", at!(layer_kc[1]), layer_2),
+    f(Field::Layer3Kc, Group::Layers, "kc3", "Layer 3 k at mean temperature C", Dim::ThermalConductivity, (0.0, false, 100.0), "optional third point (0: linear)", at!(layer_kc[2]), layer_3),
+    f(Field::KTempC, Group::Layers, "Tkc", "Mean temperature C", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's third k, if given", at!(k_temp_c), layer_1),
+    f(Field::TouchLimit, Group::Job, "Tl", "Touch limit", Dim::Temperature, (0.0, true, 3000.0), "60 °C is common practice; local codes govern", at!(touch_limit), always),
+    f(Field::DewMargin, Group::Job, "dm", "Margin above the dew point", Dim::TemperatureDifference, (0.0, false, 50.0), "for cold surfaces in humid air", at!(dew_margin), always),
+    f(Field::LossTarget, Group::Job, "qt", "Loss target", Dim::HeatFlowPerLength, (0.0, false, 1e6), "highest loss per metre wanted; 0 for none", at!(loss_target), offers_film),
+    f(Field::FreezeTarget, Group::Job, "tft", "Hold out against freezing for", Dim::Duration, (0.0, false, 3.6e7), "still water in frost; 0 for none", at!(freeze_target), still_water),
+    f(Field::MassFlow, Group::Job, "mf", "Flow through the pipe", Dim::MassFlow, (0.0, false, 1e4), "0 for still water (then the freezing times)", at!(mass_flow), offers_film),
+    f(Field::ProcessCp, Group::Job, "cpp", "Heat capacity of the process fluid", Dim::SpecificHeat, (0.0, true, 1e6), "about 4180 J/(kg·K) for water", at!(process_cp), process_cp_typed),
+    f(Field::Hours, Group::Job, "hy", "Operating hours", Dim::HoursPerYear, (0.0, false, 8784.0), "per year", at!(hours), always),
+    f(Field::Price, Group::Job, "pe", "Energy price", Dim::EnergyPrice, (0.0, false, 1e-4), "of the fuel or power that makes up the loss", at!(price), always),
+    f(Field::Efficiency, Group::Job, "ef", "Heater or boiler efficiency", Dim::Fraction, (0.01, false, 1.0), "share of that energy that becomes heat", at!(efficiency), always),
+    f(Field::CoolTarget, Group::Job, "T1", "Cool or warm a solid body to", Dim::Temperature, (0.0, true, 3000.0), "its cooling time in this stream (material above)", at!(cool_target), cools),
 ];
 
+/// The row of a field: `FIELDS` is in `Field`'s order (a test holds it so).
 pub fn spec(field: Field) -> &'static FieldSpec {
-    FIELDS
-        .iter()
-        .find(|s| s.field == field)
-        .expect("every field has a spec")
+    &FIELDS[field as usize]
 }
 
 impl Scenario {
     pub fn get(&self, f: Field) -> f64 {
-        match f {
-            Field::Diameter => self.diameter,
-            Field::Length => self.length,
-            Field::Speed => self.speed,
-            Field::FluidTemp => self.fluid_temp,
-            Field::SurfaceTemp => self.surface_temp,
-            Field::Pressure => self.pressure,
-            Field::Elevation => self.elevation,
-            Field::RelativeHumidity => self.relative_humidity,
-            Field::DewPoint => self.dew_point,
-            Field::GlycolFraction => self.glycol_fraction,
-            Field::UserRho => self.user_rho,
-            Field::UserMu => self.user_mu,
-            Field::UserK => self.user_k,
-            Field::UserCp => self.user_cp,
-            Field::UserBeta => self.user_beta,
-            Field::ProcessTemp => self.process_temp,
-            Field::HInside => self.h_inside,
-            Field::ProcessGlycol => self.process_glycol,
-            Field::WallThickness => self.wall_thickness,
-            Field::WallK => self.wall_k,
-            Field::Emissivity => self.emissivity,
-            Field::Surround => self.t_surround,
-            Field::Layer1T => self.layer_t[0],
-            Field::Layer1Ka => self.layer_ka[0],
-            Field::Layer1Kb => self.layer_kb[0],
-            Field::Layer2T => self.layer_t[1],
-            Field::Layer2Ka => self.layer_ka[1],
-            Field::Layer2Kb => self.layer_kb[1],
-            Field::Layer3T => self.layer_t[2],
-            Field::Layer3Ka => self.layer_ka[2],
-            Field::Layer3Kb => self.layer_kb[2],
-            Field::KTempA => self.k_temp_a,
-            Field::KTempB => self.k_temp_b,
-            Field::Layer1Kc => self.layer_kc[0],
-            Field::Layer2Kc => self.layer_kc[1],
-            Field::Layer3Kc => self.layer_kc[2],
-            Field::KTempC => self.k_temp_c,
-            Field::TouchLimit => self.touch_limit,
-            Field::DewMargin => self.dew_margin,
-            Field::MassFlow => self.mass_flow,
-            Field::ProcessCp => self.process_cp,
-            Field::Hours => self.hours,
-            Field::Price => self.price,
-            Field::Efficiency => self.efficiency,
-            Field::CoolTarget => self.cool_target,
-            Field::LossTarget => self.loss_target,
-            Field::FreezeTarget => self.freeze_target,
-        }
+        (spec(f).get)(self)
     }
 
     pub fn set(&mut self, f: Field, v: f64) {
-        let slot = match f {
-            Field::Diameter => &mut self.diameter,
-            Field::Length => &mut self.length,
-            Field::Speed => &mut self.speed,
-            Field::FluidTemp => &mut self.fluid_temp,
-            Field::SurfaceTemp => &mut self.surface_temp,
-            Field::Pressure => &mut self.pressure,
-            Field::Elevation => &mut self.elevation,
-            Field::RelativeHumidity => &mut self.relative_humidity,
-            Field::DewPoint => &mut self.dew_point,
-            Field::GlycolFraction => &mut self.glycol_fraction,
-            Field::UserRho => &mut self.user_rho,
-            Field::UserMu => &mut self.user_mu,
-            Field::UserK => &mut self.user_k,
-            Field::UserCp => &mut self.user_cp,
-            Field::UserBeta => &mut self.user_beta,
-            Field::ProcessTemp => &mut self.process_temp,
-            Field::HInside => &mut self.h_inside,
-            Field::ProcessGlycol => &mut self.process_glycol,
-            Field::WallThickness => &mut self.wall_thickness,
-            Field::WallK => &mut self.wall_k,
-            Field::Emissivity => &mut self.emissivity,
-            Field::Surround => &mut self.t_surround,
-            Field::Layer1T => &mut self.layer_t[0],
-            Field::Layer1Ka => &mut self.layer_ka[0],
-            Field::Layer1Kb => &mut self.layer_kb[0],
-            Field::Layer2T => &mut self.layer_t[1],
-            Field::Layer2Ka => &mut self.layer_ka[1],
-            Field::Layer2Kb => &mut self.layer_kb[1],
-            Field::Layer3T => &mut self.layer_t[2],
-            Field::Layer3Ka => &mut self.layer_ka[2],
-            Field::Layer3Kb => &mut self.layer_kb[2],
-            Field::KTempA => &mut self.k_temp_a,
-            Field::KTempB => &mut self.k_temp_b,
-            Field::Layer1Kc => &mut self.layer_kc[0],
-            Field::Layer2Kc => &mut self.layer_kc[1],
-            Field::Layer3Kc => &mut self.layer_kc[2],
-            Field::KTempC => &mut self.k_temp_c,
-            Field::TouchLimit => &mut self.touch_limit,
-            Field::DewMargin => &mut self.dew_margin,
-            Field::MassFlow => &mut self.mass_flow,
-            Field::ProcessCp => &mut self.process_cp,
-            Field::Hours => &mut self.hours,
-            Field::Price => &mut self.price,
-            Field::Efficiency => &mut self.efficiency,
-            Field::CoolTarget => &mut self.cool_target,
-            Field::LossTarget => &mut self.loss_target,
-            Field::FreezeTarget => &mut self.freeze_target,
-        };
-        *slot = v;
+        (spec(f).put)(self, v)
     }
 
     /// Whether a field takes part in this scenario (the page hides the others).
     pub fn uses(&self, f: Field) -> bool {
-        use FluidKind as K;
-        match f {
-            Field::Length => self.shape != Shape::Sphere,
-            Field::Pressure => self.pressure_input == PressureInput::Absolute,
-            Field::Elevation => self.pressure_input == PressureInput::Elevation,
-            Field::RelativeHumidity => {
-                self.fluid == K::HumidAir && self.humidity_input == HumidityInput::Relative
-            }
-            Field::DewPoint => {
-                self.fluid == K::HumidAir && self.humidity_input == HumidityInput::DewPoint
-            }
-            Field::GlycolFraction => {
-                matches!(self.fluid, K::EthyleneGlycol | K::PropyleneGlycol)
-            }
-            Field::UserRho | Field::UserMu | Field::UserK | Field::UserCp | Field::UserBeta => {
-                self.fluid == K::User
-            }
-            Field::SurfaceTemp => !self.solved(),
-            Field::ProcessTemp | Field::WallThickness => self.solved(),
-            Field::HInside => self.solved() && !self.inside_computed(),
-            Field::MassFlow | Field::LossTarget => self.offers_inside_film(),
-            Field::ProcessGlycol => {
-                self.inside_computed()
-                    && matches!(
-                        self.inside,
-                        InsideFilm::EthyleneGlycol | InsideFilm::PropyleneGlycol
-                    )
-            }
-            Field::WallK => self.solved() && self.wall == WallMaterial::User,
-            Field::Layer1T
-            | Field::Layer1Ka
-            | Field::Layer1Kb
-            | Field::Layer1Kc
-            | Field::KTempA
-            | Field::KTempB
-            | Field::KTempC => self.solved() && self.layer_count >= 1,
-            Field::Layer2T | Field::Layer2Ka | Field::Layer2Kb | Field::Layer2Kc => {
-                self.solved() && self.layer_count >= 2
-            }
-            Field::Layer3T | Field::Layer3Ka | Field::Layer3Kb | Field::Layer3Kc => {
-                self.solved() && self.layer_count >= 3
-            }
-            Field::FreezeTarget => self.offers_inside_film() && self.mass_flow == 0.0,
-            Field::ProcessCp => self.offers_inside_film() && !self.inside_computed(),
-            Field::CoolTarget => self.cools(),
-            _ => true,
-        }
+        (spec(f).applies)(self)
     }
 }
 

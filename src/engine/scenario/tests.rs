@@ -496,3 +496,33 @@ fn error_messages_are_in_the_persons_units_without_float_noise() {
         assert!(us.contains("°F") && !us.contains(" K"), "{us}");
     }
 }
+
+/// The field table is the single source of truth: in `Field`'s order, keys and labels unique, and
+/// every row's getter and setter reach its own slot of the scenario and no other.
+#[test]
+fn every_row_of_the_field_table_owns_one_slot() {
+    let mut keys = std::collections::HashSet::new();
+    let mut labels = std::collections::HashSet::new();
+    for (i, row) in FIELDS.iter().enumerate() {
+        assert_eq!(row.field as usize, i, "{:?} out of order", row.field);
+        assert!(keys.insert(row.key), "key {} twice", row.key);
+        assert!(labels.insert(row.label), "label {} twice", row.label);
+        let mut s = DEMO;
+        let v = 12345.678 + i as f64;
+        s.set(row.field, v);
+        for other in &FIELDS {
+            let want = if other.field == row.field {
+                v
+            } else {
+                DEMO.get(other.field)
+            };
+            assert_eq!(
+                s.get(other.field).to_bits(),
+                want.to_bits(),
+                "setting {} moved {}",
+                row.key,
+                other.key
+            );
+        }
+    }
+}
