@@ -84,93 +84,35 @@ pub fn evaluate(s: &Scenario) -> Result<Outcome, EngineError> {
 /// As [`evaluate`]; without the sweeps (the plots' data) and the written working when `sweeps` is
 /// false, for lists.
 pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError> {
-    for spec in FIELDS.iter().filter(|sp| s.uses(sp.field)) {
-        let v = s.get(spec.field);
-        let si_unit = units::units_of(spec.dim).next().expect("SI unit");
-        check_field(spec, v, si_unit).map_err(|_| EngineError::Undefined {
-            subject: crate::engine::error::Subject::Input(spec.key),
-            quantity: spec.label,
-            value: v,
-            unit: si_unit.symbol,
-            why: "outside the physical limits of the input",
-        })?;
-    }
-    if !s.solved() && s.surface_temp == s.fluid_temp {
-        return Err(EngineError::NoTemperatureDifference {
-            value: s.fluid_temp,
-            unit: "K",
-        });
-    }
-    let p = s.pressure_pa();
-    let fluid = s.fluid();
-    let mut flags = Vec::new();
-    if s.pressure_input == PressureInput::Elevation {
-        flags.extend(atmosphere::TROPOSPHERE.check("standard atmosphere", s.elevation, false));
-    }
-    let dew_point = match fluid {
-        Fluid::HumidAir(h) => {
-            Some(crate::engine::props::humid_air::moisture(s.fluid_temp, p, h)?.dew_point)
-        }
-        _ => None,
-    };
-    let stream = s.stream(p, fluid);
-    let inside = s.inside_flow()?;
-    let targets = Targets {
-        touch_limit: s.touch_limit,
+    // Lowered once: every check, the stream, the inside film, the targets and the job.
+    let Case {
+        p,
+        fluid,
         dew_point,
-        dew_margin: s.dew_margin,
-        hours: s.hours,
-        price: s.price,
-        efficiency: s.efficiency,
-        mass_flow: s.mass_flow,
-        process_cp: inside.props().map(|pr| pr.cp).unwrap_or(s.process_cp),
-        process_water: !matches!(s.process_fluid(), Some(Fluid::Glycol(..))),
-        wall_heat_capacity: s.wall.properties().map(|(_, rho, cp)| {
-            crate::engine::layers::wall_heat_capacity(s.diameter, s.wall_thickness, rho, cp)
-        }),
-        loss_target: s.loss_target,
-        freeze_target: s.freeze_target,
-    };
-    let (a, ts, outer_d, job_result) = if s.solved() {
-        if s.layer_count > 0 && (s.k_temp_a - s.k_temp_b).abs() < 1e-9 && s.layer_ka != s.layer_kb {
-            return Err(EngineError::Undefined {
-                subject: crate::engine::error::Subject::MeanTempB,
-                quantity: "mean temperature B",
-                value: s.k_temp_b,
-                unit: "K",
-                why: "the two data-sheet mean temperatures must differ when the two k values do",
-            });
+        stream,
+        inside,
+        targets,
+        job,
+        mut flags,
+    } = s.case()?;
+    let (a, ts, outer_d, job_result) = match job {
+        Some(job) => {
+            let mut r = crate::engine::job::evaluate(&job, &targets, s.layer_count)?;
+            if let Inside::Still(_) = &inside {
+                r.notes.push("No flow through the pipe: the inside film is not worked out, and the bore is taken at the process temperature (still fluid).".into());
+            }
+            let a =
+                r.solution
+                    .loss
+                    .analysis
+                    .clone()
+                    .ok_or(EngineError::NoTemperatureDifference {
+                        value: s.fluid_temp,
+                        unit: "K",
+                    })?;
+            (a, r.solution.t_surface, r.solution.outer_d, Some(r))
         }
-        let third = s.layer_kc[..s.layer_count.min(3)].iter().any(|k| *k > 0.0);
-        if third
-            && ((s.k_temp_c - s.k_temp_a).abs() < 1e-9 || (s.k_temp_c - s.k_temp_b).abs() < 1e-9)
-        {
-            return Err(EngineError::Undefined {
-                subject: crate::engine::error::Subject::MeanTempC,
-                quantity: "mean temperature C",
-                value: s.k_temp_c,
-                unit: "K",
-                why:
-                    "the third data-sheet point needs its own mean temperature, apart from A and B",
-            });
-        }
-        let job = s.job_with(stream, &inside);
-        let mut r = crate::engine::job::evaluate(&job, &targets, s.layer_count)?;
-        if let Inside::Still(_) = &inside {
-            r.notes.push("No flow through the pipe: the inside film is not worked out, and the bore is taken at the process temperature (still fluid).".into());
-        }
-        let a = r
-            .solution
-            .loss
-            .analysis
-            .clone()
-            .ok_or(EngineError::NoTemperatureDifference {
-                value: s.fluid_temp,
-                unit: "K",
-            })?;
-        (a, r.solution.t_surface, r.solution.outer_d, Some(r))
-    } else {
-        (body::analyse(&stream)?, s.surface_temp, s.diameter, None)
+        None => (body::analyse(&stream)?, s.surface_temp, s.diameter, None),
     };
     let thickness_sweep = match &job_result {
         Some(_) if sweeps && s.layer_count > 0 => {

@@ -196,3 +196,124 @@ impl Scenario {
         }
     }
 }
+
+/// A scenario lowered once into the engine's own terms: the stream, the process inside, the job
+/// when the surface is worked out, and the targets its verdicts are judged by. Every check of the
+/// inputs happens here, before anything is computed.
+pub(crate) struct Case {
+    pub p: f64,
+    pub fluid: Fluid,
+    pub dew_point: Option<f64>,
+    pub stream: Body,
+    pub inside: Inside,
+    pub targets: Targets,
+    pub job: Option<Job>,
+    /// Flags found while lowering (the standard atmosphere's range).
+    pub flags: Vec<Flag>,
+}
+
+impl Scenario {
+    /// Lower the scenario (see [`Case`]); the first input that cannot be used is the error.
+    pub(crate) fn case(&self) -> Result<Case, EngineError> {
+        for spec in FIELDS.iter().filter(|sp| self.uses(sp.field)) {
+            let v = self.get(spec.field);
+            let si_unit = units::units_of(spec.dim).next().expect("SI unit");
+            check_field(spec, v, si_unit).map_err(|_| EngineError::Undefined {
+                subject: crate::engine::error::Subject::Input(spec.key),
+                quantity: spec.label,
+                value: v,
+                unit: si_unit.symbol,
+                why: "outside the physical limits of the input",
+            })?;
+        }
+        if !self.solved() && self.surface_temp == self.fluid_temp {
+            return Err(EngineError::NoTemperatureDifference {
+                value: self.fluid_temp,
+                unit: "K",
+            });
+        }
+        let p = self.pressure_pa();
+        let fluid = self.fluid();
+        let mut flags = Vec::new();
+        if self.pressure_input == PressureInput::Elevation {
+            flags.extend(atmosphere::TROPOSPHERE.check(
+                "standard atmosphere",
+                self.elevation,
+                false,
+            ));
+        }
+        let dew_point = match fluid {
+            Fluid::HumidAir(h) => {
+                Some(crate::engine::props::humid_air::moisture(self.fluid_temp, p, h)?.dew_point)
+            }
+            _ => None,
+        };
+        let stream = self.stream(p, fluid);
+        let inside = self.inside_flow()?;
+        let targets = Targets {
+            touch_limit: self.touch_limit,
+            dew_point,
+            dew_margin: self.dew_margin,
+            hours: self.hours,
+            price: self.price,
+            efficiency: self.efficiency,
+            mass_flow: self.mass_flow,
+            process_cp: inside.props().map(|pr| pr.cp).unwrap_or(self.process_cp),
+            process_water: !matches!(self.process_fluid(), Some(Fluid::Glycol(..))),
+            wall_heat_capacity: self.wall.properties().map(|(_, rho, cp)| {
+                crate::engine::layers::wall_heat_capacity(
+                    self.diameter,
+                    self.wall_thickness,
+                    rho,
+                    cp,
+                )
+            }),
+            loss_target: self.loss_target,
+            freeze_target: self.freeze_target,
+        };
+        let job = if self.solved() {
+            if self.layer_count > 0
+                && (self.k_temp_a - self.k_temp_b).abs() < 1e-9
+                && self.layer_ka != self.layer_kb
+            {
+                return Err(EngineError::Undefined {
+                    subject: crate::engine::error::Subject::MeanTempB,
+                    quantity: "mean temperature B",
+                    value: self.k_temp_b,
+                    unit: "K",
+                    why:
+                        "the two data-sheet mean temperatures must differ when the two k values do",
+                });
+            }
+            let third = self.layer_kc[..self.layer_count.min(3)]
+                .iter()
+                .any(|k| *k > 0.0);
+            if third
+                && ((self.k_temp_c - self.k_temp_a).abs() < 1e-9
+                    || (self.k_temp_c - self.k_temp_b).abs() < 1e-9)
+            {
+                return Err(EngineError::Undefined {
+                subject: crate::engine::error::Subject::MeanTempC,
+                quantity: "mean temperature C",
+                value: self.k_temp_c,
+                unit: "K",
+                why:
+                    "the third data-sheet point needs its own mean temperature, apart from A and B",
+            });
+            }
+            Some(self.job_with(stream, &inside))
+        } else {
+            None
+        };
+        Ok(Case {
+            p,
+            fluid,
+            dew_point,
+            stream,
+            inside,
+            targets,
+            job,
+            flags,
+        })
+    }
+}

@@ -32,6 +32,7 @@ pub use entry::*;
 pub use evaluate::*;
 pub use fields::*;
 pub use link::*;
+pub(crate) use lower::Case;
 pub(crate) use working::*;
 
 /// The inputs, SI: lengths m, speed m/s, temperatures K, pressure Pa, elevation m, fractions 0–1,
