@@ -3,6 +3,8 @@
 
 use leptos::prelude::*;
 
+mod answer;
+mod pickers;
 mod results;
 mod saved;
 mod shapes;
@@ -15,14 +17,14 @@ pub(crate) use start::mark;
 use unit_select::UnitSelect;
 
 use crate::engine::scenario::{
-    self, Axis, Field, FieldSpec, FluidKind, Group, HumidityInput, InsideFilm, Outcome,
-    PressureInput, Scenario, Shape, SurfaceMode, WallMaterial, Wind, FIELDS,
+    self, Axis, Field, FieldSpec, FluidKind, Group, HumidityInput, Outcome, PressureInput,
+    Scenario, Shape, SurfaceMode, Wind, FIELDS,
 };
 use crate::engine::units::{self, format_sig, Dim, System, UnitChoice};
 
 /// What the results panel shows: the latest good outcome, and why it is stale if it is.
 #[derive(Debug, Clone, PartialEq)]
-struct Shown {
+pub(crate) struct Shown {
     outcome: Option<Outcome>,
     error: Option<crate::engine::error::EngineError>,
     /// The field the error belongs beside, if any (otherwise it shows in the results).
@@ -45,7 +47,7 @@ pub fn App() -> impl IntoView {
             let u = choice.get_untracked().get(spec.dim);
             (
                 spec.field,
-                RwSignal::new(scenario::shown_text(start.get(spec.field), u)),
+                RwSignal::new(scenario::shown_text(spec, start.get(spec.field), u)),
             )
         })
         .collect();
@@ -130,6 +132,7 @@ pub fn App() -> impl IntoView {
         has
     });
     let stale = move || any_field_error() || shown.with(|s| s.error.is_some());
+    let stale_signal = Signal::derive(stale);
 
     // The outside world: keep the link in the address bar in step with the scenario.
     // A refused link stays in the address bar (and in the notice) until the person changes an
@@ -172,7 +175,12 @@ pub fn App() -> impl IntoView {
             t.set(v.clone());
             let u = choice.get_untracked().get(spec.dim);
             let mut s = scenario.get_untracked();
-            if scenario::type_text(&mut s, spec, &v, u).is_ok() {
+            if let Ok(followed) = scenario::type_text(&mut s, spec, &v, u) {
+                let c = choice.get_untracked();
+                for f in followed {
+                    let sp = scenario::spec(f);
+                    text_of(f).set(scenario::shown_text(sp, s.get(f), c.get(sp.dim)));
+                }
                 scenario.set(s);
             }
         };
@@ -183,7 +191,7 @@ pub fn App() -> impl IntoView {
                 class:hidden=move || !scenario.with(|s| s.uses(spec.field))
                 data-field-box=spec.key
             >
-                <label for=input_id.clone()>{spec.label}<small>{spec.help}</small></label>
+                <label for=input_id.clone()>{spec.label}<small>{move || scenario::help_text(spec, &choice.get())}</small></label>
                 <div class="entry">
                     <input
                         id=input_id
@@ -201,6 +209,7 @@ pub fn App() -> impl IntoView {
                 <p class="field-msg" id=msg_id role="status" data-msg-for=spec.key>
                     {move || err().or_else(extra).map(|m| format!("⚠ {m}"))}
                 </p>
+                {move || scenario.with(|s| scenario::field_note(s, spec.field)).map(|n| view! { <p class="field-note" data-note-for=spec.key>{n}</p> })}
             </div>
         }
     };
@@ -340,6 +349,10 @@ pub fn App() -> impl IntoView {
         "Work it out from inside",
         |s| s.surface_mode == SurfaceMode::Given,
         |s, a| {
+            // Working the surface out starts from the bare line: layers are added on purpose.
+            if !a && s.surface_mode == SurfaceMode::Given {
+                s.layer_count = 0;
+            }
             s.surface_mode = if a {
                 SurfaceMode::Given
             } else {
@@ -348,173 +361,39 @@ pub fn App() -> impl IntoView {
         },
         |s| matches!(s.shape, Shape::Cylinder | Shape::Sphere),
     );
-    let wall_select = move || {
-        let opts = WallMaterial::ALL
-            .into_iter()
-            .map(|m| view! { <option value=m.id() prop:selected=move || scenario.with(|s| s.wall == m)>{m.label()}</option> })
-            .collect_view();
-        view! {
-            <div class="field" class:hidden=move || !scenario.with(|s| s.solved() || s.cools())>
-                <label for="in-wall">{move || if scenario.with(|s| s.solved()) { "Wall material" } else { "Material of the body" }}<small>"k in W/(m·K) near 300 K, Incropera & DeWitt Table A.1"</small></label>
-                <select id="in-wall" class="wide" data-choice="wall" on:change=move |ev| {
-                    if let Some(m) = WallMaterial::from_id(&event_target_value(&ev)) {
-                        scenario.update(|s| s.wall = m);
-                    }
-                }>{opts}</select>
-            </div>
-        }
-    };
-    // Where the inside film comes from: typed, or worked out from a process fluid's flow.
-    let inside_select = move || {
-        let opts = InsideFilm::ALL
-            .into_iter()
-            .map(|m| view! { <option value=m.id() prop:selected=move || scenario.with(|s| s.inside == m)>{m.label()}</option> })
-            .collect_view();
-        view! {
-            <div class="field" class:hidden=move || !scenario.with(|s| s.offers_inside_film())>
-                <label for="in-inside">"Inside film"<small>"typed, or worked out from the flow set under 4 · The job"</small></label>
-                <select id="in-inside" class="wide" data-choice="inside" on:change=move |ev| {
-                    if let Some(m) = InsideFilm::from_id(&event_target_value(&ev)) {
-                        scenario.update(|s| s.inside = m);
-                    }
-                }>{opts}</select>
-            </div>
-        }
-    };
-    // Nominal pipe sizes set D (and the text shown in the D field).
-    let size_picker = move || {
-        let opts = crate::engine::job::NOMINAL_SIZES
-            .iter()
-            .enumerate()
-            .map(|(i, (name, _))| view! { <option value=i.to_string()>{*name}</option> })
-            .collect_view();
-        view! {
-            <div class="field" class:hidden=move || !scenario.with(|s| s.shape == Shape::Cylinder)>
-                <label for="in-nps">"Nominal pipe size"<small>"sets D to the outside diameter (ASME B36.10M)"</small></label>
-                <select id="in-nps" class="wide" data-choice="nps" on:change=move |ev| {
-                    let Ok(i) = event_target_value(&ev).parse::<usize>() else { return };
-                    let Some((_, d)) = crate::engine::job::NOMINAL_SIZES.get(i) else { return };
-                    scenario.update(|s| s.diameter = *d);
-                    let u = choice.get_untracked().get(Dim::Length);
-                    text_of(Field::Diameter).set(scenario::shown_text(*d, u));
-                }>
-                    <option value="" selected>"Choose a size, or type D below"</option>
-                    {opts}
-                </select>
-            </div>
-        }
-    };
-    // Typical emissivities set ε (and the text shown in its field).
-    let emissivity_picker = move || {
-        let opts = crate::engine::job::EMISSIVITIES
-            .iter()
-            .enumerate()
-            .map(|(i, (name, e))| view! { <option value=i.to_string()>{format!("{name}: {e}")}</option> })
-            .collect_view();
-        view! {
-            <div class="field">
-                <label for="in-eps-pick">"Typical emissivities"<small>"common practice, rounded; a measured value is better"</small></label>
-                <select id="in-eps-pick" class="wide" data-choice="emissivity" on:change=move |ev| {
-                    let Ok(i) = event_target_value(&ev).parse::<usize>() else { return };
-                    let Some((_, e)) = crate::engine::job::EMISSIVITIES.get(i) else { return };
-                    scenario.update(|s| s.emissivity = *e);
-                    let u = choice.get_untracked().get(Dim::Ratio);
-                    text_of(Field::Emissivity).set(scenario::shown_text(*e, u));
-                }>
-                    <option value="" selected>"Choose a surface, or type ε above"</option>
-                    {opts}
-                </select>
-            </div>
-        }
-    };
-    let layer_picker = move || {
-        let buttons = (0..=3usize)
-            .map(|n| {
-                view! {
-                    <button type="button" data-layers=n.to_string()
-                        aria-pressed=move || scenario.with(|s| s.layer_count == n).to_string()
-                        on:click=move |_| scenario.update(|s| s.layer_count = n)>
-                        {match n { 0 => "Bare".to_string(), 1 => "1 layer".to_string(), k => format!("{k} layers") }}
-                    </button>
-                }
-            })
-            .collect_view();
-        view! {
-            <div class:hidden=move || !scenario.with(|s| s.solved())>
-                <h3 class="sub">"Insulation"</h3>
-                <div class="toggle" role="group" aria-label="Insulation layers">{buttons}</div>
-            </div>
-        }
-    };
-
-    let prop_table = move || {
-        shown.with(|s| {
-            s.outcome.as_ref().map(|o| {
-                let c = choice.get();
-                let cell = |v: f64, d: Dim| {
-                    let u = c.get(d);
-                    format!("{} {}", format_sig(u.from_si(v), 4), u.symbol)
-                };
-                let rows = o
-                    .properties
-                    .iter()
-                    .map(|r| {
-                        let p = &r.props;
-                        view! {
-                            <tr data-prop-row=r.role>
-                                <th scope="row">{r.role}<br/>{cell(p.t, Dim::Temperature)}</th>
-                                <td>{cell(p.rho, Dim::Density)}</td>
-                                <td>{cell(p.mu, Dim::DynamicViscosity)}</td>
-                                <td>{cell(p.k, Dim::ThermalConductivity)}</td>
-                                <td>{cell(p.cp, Dim::SpecificHeat)}</td>
-                                <td>{format_sig(p.pr, 4)}</td>
-                            </tr>
-                        }
-                    })
-                    .collect_view();
-                let sources = o
-                    .properties
-                    .first()
-                    .map(|r| {
-                        r.props
-                            .sources
-                            .iter()
-                            .map(|(q, src)| format!("{q}: {src}"))
-                            .collect::<Vec<_>>()
-                            .join(" · ")
-                    })
-                    .unwrap_or_default();
-                view! {
-                    <table class="props" data-props>
-                        <caption>{format!("Properties of {} used", o.fluid)}</caption>
-                        <thead><tr><th scope="col">"at"</th><th scope="col">"ρ"</th><th scope="col">"μ"</th><th scope="col">"k"</th><th scope="col">"cp"</th><th scope="col">"Pr"</th></tr></thead>
-                        <tbody>{rows}</tbody>
-                    </table>
-                    <p class="sources">{sources}</p>
-                }
-            })
-        })
-    };
-
     let out = move |quantity: &'static str, get: fn(&Outcome) -> Option<f64>, dim: Option<Dim>| {
         view! {
             <output data-quantity=quantity data-si=move || {
                 shown.with(|s| s.outcome.as_ref().and_then(get).map(|v| format!("{v}")).unwrap_or_default())
             }>
                 {move || {
-                    shown.with(|s| match s.outcome.as_ref().and_then(get) {
-                        Some(v) => {
-                            match dim {
-                                Some(d) => format_sig(choice.get().get(d).from_si(v), 4),
-                                None => format_sig(v, 4),
-                            }
-                        }
-                        None => "—".to_string(),
+                    shown.with(|s| match (s.outcome.as_ref().and_then(get), dim) {
+                        (Some(v), Some(d)) => units::shown(v, choice.get().get(d)).0,
+                        (Some(v), None) => format_sig(v, 3),
+                        (None, _) => "—".to_string(),
                     })
                 }}
             </output>
-            <span class="unit">{move || dim.map(|d| choice.get().get(d).symbol).unwrap_or("")}</span>
+            <span class="unit">{move || {
+                let v = shown.with(|s| s.outcome.as_ref().and_then(get)).unwrap_or(0.0);
+                dim.map(|d| units::shown(v, choice.get().get(d)).1).unwrap_or("")
+            }}</span>
         }
+    };
+
+    // The run length every total is over, said beside each total (the demo's 12 m once drove
+    // totals without a word).
+    let run_note = move || {
+        scenario.with(|s| {
+            if s.shape == Shape::Sphere {
+                String::new()
+            } else {
+                format!(
+                    " (over L = {})",
+                    units::show(s.length, choice.get().get(Dim::RunLength))
+                )
+            }
+        })
     };
 
     // The report is built only for printing (it is a large view): the browser's beforeprint and
@@ -524,6 +403,7 @@ pub fn App() -> impl IntoView {
     let _ = window_event_listener(leptos::ev::afterprint, move |_| printing.set(false));
 
     // Item tag and location: typed in the saved-work panel, printed on the report.
+    let item_name = RwSignal::new(String::from("Line 1"));
     let tag = RwSignal::new(String::new());
     let place = RwSignal::new(String::new());
 
@@ -533,7 +413,11 @@ pub fn App() -> impl IntoView {
         let c = UnitChoice::for_system(sys);
         choice.set(c);
         for spec in &FIELDS {
-            text_of(spec.field).set(scenario::shown_text(sc.get(spec.field), c.get(spec.dim)));
+            text_of(spec.field).set(scenario::shown_text(
+                spec,
+                sc.get(spec.field),
+                c.get(spec.dim),
+            ));
         }
         scenario.set(sc);
     };
@@ -574,6 +458,7 @@ pub fn App() -> impl IntoView {
             </div>
         </header>
         <main class="layout" class:embed=view_opts.embed data-embed=view_opts.embed.to_string()>
+            <answer::AnswerBar shown=shown choice=choice stale=stale_signal/>
             {link_message.map(|m| view! { <p class="notice" role="alert" data-notice="link">"⚠ "{m}</p> })}
             <fieldset class="inputs" disabled=view_opts.locked data-locked=view_opts.locked.to_string()>
                 <legend class="sr-only">"Inputs"</legend>
@@ -584,13 +469,13 @@ pub fn App() -> impl IntoView {
                     <h2 id="body-title">"1 · Body"</h2>
                     {shape_picker}
                     {axis_toggle}
-                    {size_picker}
+                    {pickers::size_picker(scenario, choice, text_of)}
                     {fields_of(Group::Body)}
                 </section>
                 <section aria-labelledby="stream-title">
-                    <h2 id="stream-title">"2 · Stream"</h2>
+                    <h2 id="stream-title">"2 · Stream: what flows past the outside"</h2>
                     <div class="field">
-                        <label for="in-fluid">"Fluid"</label>
+                        <label for="in-fluid">"Fluid outside the body"<small>"the air or liquid flowing past it (what flows inside a pipe is set under 3 · Surface)"</small></label>
                         <select id="in-fluid" class="wide" data-choice="fluid" on:change=pick_fluid>
                             {fluid_options}
                         </select>
@@ -603,18 +488,17 @@ pub fn App() -> impl IntoView {
                 <section aria-labelledby="surface-title">
                     <h2 id="surface-title">"3 · Surface"</h2>
                     {surface_toggle}
-                    {wall_select}
-                    {inside_select}
+                    {pickers::wall_select(scenario)}
+                    {pickers::inside_select(scenario)}
                     {fields_of(Group::Surface)}
-                    {emissivity_picker}
-                    {layer_picker}
+                    {pickers::emissivity_picker(scenario, choice, text_of)}
+                    {pickers::layer_picker(scenario)}
                     {fields_of(Group::Layers)}
                 </section>
                 <section aria-labelledby="job-title">
                     <h2 id="job-title">"4 · The job"</h2>
                     {fields_of(Group::Job)}
                 </section>
-                {(!view_opts.embed).then(|| view! { <saved::SavedPanel scenario=scenario system=system tag=tag place=place choice=choice on_open=open_saved/> })}
             </fieldset>
             <section class="results" class:stale=stale aria-labelledby="results-title" aria-live="polite">
                 <h2 id="results-title">"Results"</h2>
@@ -624,13 +508,23 @@ pub fn App() -> impl IntoView {
                 {move || shown.with(|s| s.error.as_ref().filter(|_| s.error_at.is_none()).map(|e| view! { <p class="error" data-error>"⚠ "{scenario::error_message(e, &choice.get())}</p> }))}
                 <dl class="figures">
                     <div class="main" class:hidden=move || shown.with(|s| s.outcome.as_ref().is_some_and(|o| o.q_per_length.is_none()))><dt>"Heat loss per length"</dt><dd>{out("q_per_length", |o| o.q_per_length, Some(Dim::HeatFlowPerLength))}{flag_mark}</dd></div>
-                    <div class="main"><dt>{move || if scenario.with(|s| s.shape == Shape::Sphere) { "Heat loss from the body" } else { "Heat loss over the length L" }}</dt><dd>{out("q_total", |o| Some(o.q_total), Some(Dim::HeatFlow))}{flag_mark}</dd></div>
+                    <div class="main"><dt>{move || scenario.with(|s| if s.shape == Shape::Sphere { "Heat loss from the body".to_string() } else {
+                        format!("Heat loss over the length L = {}", units::show(s.length, choice.get().get(Dim::RunLength)))
+                    })}</dt><dd>{out("q_total", |o| Some(o.q_total), Some(Dim::HeatFlow))}{flag_mark}</dd></div>
                     <div class="main"><dt>"Surface temperature"</dt><dd>{out("surface_temperature", |o| Some(o.surface_temp), Some(Dim::Temperature))}</dd></div>
+                </dl>
+                <div class="verdicts" data-verdicts>
+                    {move || shown.with(|s| s.outcome.as_ref().map(|o| results::verdicts(o, &choice.get())))}
+                </div>
+                <ul class="cautions" data-cautions>
+                    {move || shown.with(|s| s.outcome.as_ref().map(|o| scenario::cautions(&scenario.get(), o).into_iter().map(|c| view! { <li class="caution">"⚠ "{c}</li> }).collect_view()))}
+                </ul>
+                <dl class="figures">
                     <div><dt>"By convection"</dt><dd>{out("q_conv", |o| Some(o.q_conv_total), Some(Dim::HeatFlow))}</dd></div>
                     <div><dt>"By radiation"</dt><dd>{out("q_rad", |o| Some(o.q_rad_total), Some(Dim::HeatFlow))}</dd></div>
                     <div><dt>"Radiation coefficient h_rad"</dt><dd>{out("h_rad", |o| Some(o.h_rad), Some(Dim::HeatTransferCoefficient))}</dd></div>
-                    <div><dt>"Energy per year"</dt><dd>{out("annual_energy", |o| Some(o.annual_energy), Some(Dim::EnergyPerYear))}</dd></div>
-                    <div><dt>"Cost per year"</dt><dd>{out("annual_cost", |o| Some(o.annual_cost), Some(Dim::MoneyPerYear))}</dd></div>
+                    <div><dt>{move || format!("Energy per year{}", run_note())}</dt><dd>{out("annual_energy", |o| Some(o.annual_energy), Some(Dim::EnergyPerYear))}</dd></div>
+                    <div><dt>{move || format!("Cost per year{}", run_note())}</dt><dd>{out("annual_cost", |o| Some(o.annual_cost), Some(Dim::MoneyPerYear))}</dd></div>
                     <div class="main"><dt>"Heat-transfer coefficient h (convection)"</dt><dd>{out("h", |o| Some(o.h), Some(Dim::HeatTransferCoefficient))}{flag_mark}</dd></div>
                     <div><dt>"Nusselt number Nu = h·D/k"</dt><dd>{out("nusselt", |o| Some(o.nusselt), None)}</dd></div>
                     <div><dt>"Reynolds number Re (★)"</dt><dd>{out("reynolds", |o| Some(o.reynolds), None)}</dd></div>
@@ -644,12 +538,6 @@ pub fn App() -> impl IntoView {
                 <p class="spread" data-spread>{move || shown.with(|s| s.outcome.as_ref().map(|o| results::spread_text(o, &choice.get())))}</p>
                 <p class="method">{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Recommended: {} ({}). {} {}", o.method, o.analysis.mode(), o.regime, o.analysis.notes.join(" "))))}</p>
                 <p class="reason" data-reason>{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Why this one: {}", o.analysis.reason())))}</p>
-                <div class="verdicts" data-verdicts>
-                    {move || shown.with(|s| s.outcome.as_ref().map(|o| results::verdicts(o, &choice.get())))}
-                </div>
-                <ul class="cautions" data-cautions>
-                    {move || shown.with(|s| s.outcome.as_ref().map(|o| scenario::cautions(&scenario.get(), o).into_iter().map(|c| view! { <li class="caution">"⚠ "{c}</li> }).collect_view()))}
-                </ul>
                 <ul class="flags" data-flags>
                     {move || shown.with(|s| s.outcome.as_ref().map(|o| o.flags.iter().map(|f| view! {
                         <li class="flag" data-flag=f.method>"⚠ "{f.message()}</li>
@@ -664,16 +552,17 @@ pub fn App() -> impl IntoView {
                             <li><strong>{st.title}</strong><br/>{st.text.clone()}</li>
                         }).collect_view()))}
                     </ol>
-                    {prop_table}
+                    {move || shown.with(|s| s.outcome.as_ref().map(|o| results::property_table(o, &choice.get())))}
                 </details>
             </section>
+            {(!view_opts.embed).then(|| view! { <saved::SavedPanel scenario=scenario system=system name=item_name tag=tag place=place choice=choice on_open=open_saved/> })}
             <section class="plots" class:hidden=view_opts.embed aria-labelledby="plots-title">
                 <h2 id="plots-title">"Compare the correlations"</h2>
                 {move || shown.with(|s| s.outcome.as_ref().map(results::nu_re_plot))}
                 {move || shown.with(|s| s.outcome.as_ref().and_then(results::front_plot))}
                 {move || shown.with(|sh| sh.outcome.as_ref().map(|o| results::sweeps(o, &scenario.get(), &choice.get())))}
             </section>
-            {move || printing.get().then(|| shown.with(|sh| sh.outcome.as_ref().map(|o| results::report(o, &scenario.get(), &choice.get(), &tag.get(), &place.get()))))}
+            {move || printing.get().then(|| shown.with(|sh| sh.outcome.as_ref().map(|o| results::report(o, &scenario.get(), &choice.get(), &item_name.get(), &tag.get(), &place.get()))))}
             <footer class="standing">
                 "Results are engineering estimates from published correlations. Check them before you rely on them; local codes and licensed practice govern any decision about safety."
             </footer>

@@ -9,8 +9,7 @@ use crate::engine::scenario::{Outcome, Shape};
 use crate::engine::units::{format_sig, Dim, UnitChoice};
 
 fn with_unit(v: f64, d: Dim, c: &UnitChoice) -> String {
-    let u = c.get(d);
-    format!("{} {}", format_sig(u.from_si(v), 4), u.symbol)
+    crate::engine::units::show(v, c.get(d))
 }
 
 /// Forced correlations side by side, natural convection and the blend below them.
@@ -36,11 +35,11 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
                 <tr class:recommended=rec data-correlation=e.id data-h=format!("{}", e.h) data-valid=e.valid().to_string()>
                     <th scope="row">{e.name}{rec.then_some(view! { <span class="rec-mark">" ★ recommended"</span> })}{note.map(|t| view! { <small class="detail">{t}</small> })}
                         {e.detail().map(|d| view! { <small class="detail">{d}</small> })}</th>
-                    <td>{e.reference.short()}</td>
-                    <td>{format_sig(e.groups.re, 4)}</td>
-                    <td>{format_sig(e.nu, 4)}</td>
-                    <td>{with_unit(e.h, Dim::HeatTransferCoefficient, c)}</td>
-                    <td class:warn=!e.valid()>{if e.valid() { "✓ " } else { "⚠ " }}{status}<ul class="row-flags">{flags}</ul></td>
+                    <td data-label="Properties at">{e.reference.short()}</td>
+                    <td data-label="Re">{format_sig(e.groups.re, 3)}</td>
+                    <td data-label="Nu">{format_sig(e.nu, 3)}</td>
+                    <td data-label="h">{with_unit(e.h, Dim::HeatTransferCoefficient, c)}</td>
+                    <td data-label="Range" class:warn=!e.valid()>{if e.valid() { "✓ " } else { "⚠ " }}{status}<ul class="row-flags">{flags}</ul></td>
                 </tr>
             }
         })
@@ -51,11 +50,11 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
         view! {
             <tr data-correlation=n.id data-h=format!("{}", n.h)>
                 <th scope="row">{n.name}" (still fluid)"</th>
-                <td>"Tf"</td>
-                <td>{format!("Ra = {}", format_sig(n.ra, 4))}</td>
-                <td>{format_sig(n.nu, 4)}</td>
-                <td>{with_unit(n.h, Dim::HeatTransferCoefficient, c)}</td>
-                <td class:warn=!ok>{if ok { "✓ in range" } else { "⚠ see note" }}<ul class="row-flags">{flags}</ul></td>
+                <td data-label="Properties at">"Tf"</td>
+                <td data-label="Ra">{format_sig(n.ra, 3)}</td>
+                <td data-label="Nu">{format_sig(n.nu, 3)}</td>
+                <td data-label="h">{with_unit(n.h, Dim::HeatTransferCoefficient, c)}</td>
+                <td data-label="Range" class:warn=!ok>{if ok { "✓ in range" } else { "⚠ see note" }}<ul class="row-flags">{flags}</ul></td>
             </tr>
         }
     });
@@ -63,11 +62,11 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
         view! {
             <tr class="answer" data-correlation="mixed">
                 <th scope="row">{format!("Blend of ★ and natural, n = {}", format_sig(a.exponent, 2))}</th>
-                <td>"—"</td>
-                <td>"—"</td>
-                <td>{format_sig(o.nusselt, 4)}</td>
-                <td>{with_unit(a.h, Dim::HeatTransferCoefficient, c)}</td>
-                <td>{a.direction.describe()}</td>
+                <td class="empty">"—"</td>
+                <td class="empty">"—"</td>
+                <td data-label="Nu">{format_sig(o.nusselt, 3)}</td>
+                <td data-label="h">{with_unit(a.h, Dim::HeatTransferCoefficient, c)}</td>
+                <td data-label="Flow">{a.direction.describe()}</td>
             </tr>
         }
     });
@@ -224,6 +223,7 @@ pub fn verdicts(o: &Outcome, c: &UnitChoice) -> impl IntoView {
                 <article class="verdict" class:warn=!v.ok data-verdict=v.id data-ok=v.ok.to_string()>
                     <h3>{if v.ok { "✓ " } else { "⚠ " }}{v.title}</h3>
                     <p>{v.summary.clone()}</p>
+                    {v.thickness.map(|th| view! { <p class="order" data-order>"The outer layer "<strong>{crate::engine::catalogue::order_text(th, c.get(Dim::Length))}</strong>"."</p> })}
                     <ul>{figs}</ul>
                     {v.caution.map(|t| view! { <p class="caution-note">{t}</p> })}
                 </article>
@@ -510,6 +510,7 @@ pub fn report(
     o: &Outcome,
     s: &crate::engine::scenario::Scenario,
     c: &UnitChoice,
+    name: &str,
     tag: &str,
     place: &str,
 ) -> impl IntoView {
@@ -569,7 +570,11 @@ pub fn report(
         .verdicts
         .iter()
         .map(|v| {
-            let figs = v.figures.iter().map(|(l, x, d)| format!("{l}: {}", with_unit(*x, *d, c))).collect::<Vec<_>>().join("; ");
+            let mut figs = v.figures.iter().map(|(l, x, d)| format!("{l}: {}", with_unit(*x, *d, c))).collect::<Vec<_>>();
+            if let Some(th) = v.thickness {
+                figs.push(format!("outer layer {}", crate::engine::catalogue::order_text(th, c.get(Dim::Length))));
+            }
+            let figs = figs.join("; ");
             view! { <li><strong>{if v.ok { "✓ " } else { "⚠ " }}{v.title}</strong>": "{v.summary.clone()}" "{figs}</li> }
         })
         .collect_view();
@@ -600,7 +605,7 @@ pub fn report(
         .collect_view();
     view! {
         <article class="report" data-report>
-            <h1>"Leeward report"</h1>
+            <h1>{if name.trim().is_empty() { "Leeward report".to_string() } else { format!("Leeward report: {}", name.trim()) }}</h1>
             <p class="meta">{format!("{date} UTC · item {} · {}", if tag.is_empty() { "—" } else { tag }, if place.is_empty() { "location not given" } else { place })}</p>
             <p class="meta">{format!("{}, {} in {}; recommended {} ({}).", o.shape.label(), o.analysis.mode(), o.fluid, o.method, o.regime)}</p>
             <div class="cols">
@@ -632,4 +637,46 @@ pub fn spread_text(o: &Outcome, c: &UnitChoice) -> String {
         None => "No forced correlation is inside its range here: every value below is an extrapolation.".to_string(),
     };
     format!("{band} Correlations of this kind are good to about ±20–25 % (common practice).")
+}
+
+/// The properties used, at each temperature the correlations read them, with their sources.
+pub fn property_table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
+    let cell = |v: f64, d: Dim| with_unit(v, d, c);
+    let rows = o
+        .properties
+        .iter()
+        .map(|r| {
+            let p = &r.props;
+            view! {
+                <tr data-prop-row=r.role>
+                    <th scope="row">{r.role}<br/>{cell(p.t, Dim::Temperature)}</th>
+                    <td>{cell(p.rho, Dim::Density)}</td>
+                    <td>{cell(p.mu, Dim::DynamicViscosity)}</td>
+                    <td>{cell(p.k, Dim::ThermalConductivity)}</td>
+                    <td>{cell(p.cp, Dim::SpecificHeat)}</td>
+                    <td>{format_sig(p.pr, 4)}</td>
+                </tr>
+            }
+        })
+        .collect_view();
+    let sources = o
+        .properties
+        .first()
+        .map(|r| {
+            r.props
+                .sources
+                .iter()
+                .map(|(q, src)| format!("{q}: {src}"))
+                .collect::<Vec<_>>()
+                .join(" · ")
+        })
+        .unwrap_or_default();
+    view! {
+        <table class="props" data-props>
+            <caption>{format!("Properties of {} used", o.fluid)}</caption>
+            <thead><tr><th scope="col">"at"</th><th scope="col">"ρ"</th><th scope="col">"μ"</th><th scope="col">"k"</th><th scope="col">"cp"</th><th scope="col">"Pr"</th></tr></thead>
+            <tbody>{rows}</tbody>
+        </table>
+        <p class="sources">{sources}</p>
+    }
 }

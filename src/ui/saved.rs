@@ -9,7 +9,7 @@ use super::mark;
 use crate::engine::scenario::Scenario;
 use crate::engine::store::{self, Loaded, Plan, Saved, Store};
 use crate::engine::survey;
-use crate::engine::units::{format_sig, Dim, System, UnitChoice};
+use crate::engine::units::{Dim, System, UnitChoice};
 
 const KEY: &str = "leeward.saved";
 const UNREADABLE_KEY: &str = "leeward.saved.unreadable";
@@ -216,6 +216,8 @@ fn download(name: &str, mime: &str, text: &str) {
 pub fn SavedPanel(
     scenario: RwSignal<Scenario>,
     system: RwSignal<System>,
+    /// The item's name: typed here, printed on the report.
+    name: RwSignal<String>,
     tag: RwSignal<String>,
     place: RwSignal<String>,
     choice: RwSignal<UnitChoice>,
@@ -226,7 +228,6 @@ pub fn SavedPanel(
     let held = RwSignal::new(None::<String>);
     // False until the saved work has been read (just after the first result is shown).
     let ready = RwSignal::new(false);
-    let name = RwSignal::new(String::from("Line 1"));
     let pending: RwSignal<Option<(Store, Plan)>> = RwSignal::new(None);
 
     // Every change to the saved work goes through here: refused while an unreadable store is
@@ -283,10 +284,7 @@ pub fn SavedPanel(
             Err(why) => note.set(Some(format!("Nothing imported: {why}."))),
         });
     };
-    let export_csv = move |_| {
-        let text = survey::to_csv(&saved.get_untracked().items, system.get_untracked());
-        download("leeward-survey.csv", "text/csv", &text);
-    };
+
     let import_csv = move |ev: leptos::ev::Event| {
         read_chosen_file(ev, move |text| {
             let (rows, errors) = survey::from_csv(&text);
@@ -319,6 +317,13 @@ pub fn SavedPanel(
     // (`survey::Figures`) and computed in slices of about 25 ms between frames, so the page stays
     // responsive and the first result never waits for the survey.
     let figures = StoredValue::new(survey::Figures::default());
+    // The CSV carries each item's results: those already worked out for the list are reused.
+    let export_csv = move |_| {
+        let text = figures.with_value(|f| {
+            survey::to_csv(&saved.get_untracked().items, system.get_untracked(), f)
+        });
+        download("leeward-survey.csv", "text/csv", &text);
+    };
     let list: RwSignal<Vec<(Saved, survey::Figure)>> = RwSignal::new(Vec::new());
     let progress: RwSignal<Option<(usize, usize)>> = RwSignal::new(None);
     let generation = StoredValue::new(0u64);
@@ -357,10 +362,7 @@ pub fn SavedPanel(
 
     let rows = move || {
         let c = choice.get();
-        let f = move |v: f64, d: Dim| {
-            let u = c.get(d);
-            format!("{} {}", format_sig(u.from_si(v), 4), u.symbol)
-        };
+        let f = move |v: f64, d: Dim| crate::engine::units::show(v, c.get(d));
         let mut shown = list.get();
         if by_loss.get() {
             let loss = |r: &survey::Figure| {
@@ -458,13 +460,12 @@ pub fn SavedPanel(
                 ),
             )
         });
-        let u =
-            |v: f64, d: Dim| format!("{} {}", format_sig(c.get(d).from_si(v), 4), c.get(d).symbol);
+        let u = |v: f64, d: Dim| crate::engine::units::show(v, c.get(d));
         view! {
             <tr class="totals" data-totals>
                 <th scope="row">{format!("Total of {n} item(s)")}</th>
                 <td data-total-loss>{u(q, Dim::HeatFlow)}</td>
-                <td colspan="3">{format!("{} · {} per year", u(e, Dim::EnergyPerYear), u(m, Dim::MoneyPerYear))}</td>
+                <td colspan="3">{format!("{} · {}", u(e, Dim::EnergyPerYear), u(m, Dim::MoneyPerYear))}</td>
             </tr>
         }
     };

@@ -53,7 +53,7 @@ impl Page {
         let choice = UnitChoice::for_system(System::Si);
         let texts = FIELDS
             .iter()
-            .map(|f| scenario::shown_text(DEMO.get(f.field), choice.get(f.dim)))
+            .map(|f| scenario::shown_text(f, DEMO.get(f.field), choice.get(f.dim)))
             .collect();
         Page {
             s: DEMO,
@@ -73,7 +73,16 @@ impl Page {
             Act::Type(i, t) => {
                 let spec = &FIELDS[*i];
                 self.texts[*i] = t.clone();
-                let _ = scenario::type_text(&mut self.s, spec, t, self.choice.get(spec.dim));
+                if let Ok(followed) =
+                    scenario::type_text(&mut self.s, spec, t, self.choice.get(spec.dim))
+                {
+                    // As the page does: the fields that followed show their new values.
+                    for f in followed {
+                        let j = FIELDS.iter().position(|r| r.field == f).unwrap();
+                        let u = self.choice.get(FIELDS[j].dim);
+                        self.texts[j] = scenario::shown_text(&FIELDS[j], self.s.get(f), u);
+                    }
+                }
             }
             Act::Switch(i, n) => {
                 let dim = FIELDS[*i].dim;
@@ -107,9 +116,11 @@ fn check(spec: &FieldSpec, text: &str, unit: &Unit, used: f64) -> Result<(), Str
     let Ok(meant) = read_field(spec, text, unit) else {
         return Ok(());
     };
-    // The shown text is rounded to six significant figures in its own unit.
+    // The shown text is the value used rounded to the unit's display resolution (or to six
+    // figures where that rounding would cross a limit): it may differ by half a step of either.
     let (a, b) = (unit.from_si(meant), unit.from_si(used));
-    if (a - b).abs() <= 1e-5 * a.abs().max(b.abs()) + 1e-12 {
+    let half = units::resolution(unit).half_step(b).max(5e-6 * b.abs());
+    if (a - b).abs() <= half * (1.0 + 1e-9) + 1e-12 {
         Ok(())
     } else {
         Err(format!(
@@ -169,4 +180,24 @@ fn unit_switch_after_a_refused_entry_uses_what_the_field_shows() {
         p.s.diameter
     );
     p.agrees().unwrap();
+}
+
+/// No trap: the surroundings' temperature follows the stream's until a person sets it apart (it
+/// once stayed at its old value, and radiation showed −155 W with no word).
+#[test]
+fn the_surroundings_follow_the_stream_until_set_apart() {
+    let mut p = Page::new();
+    let ta = FIELDS.iter().position(|f| f.key == "Ta").unwrap();
+    let tr = FIELDS.iter().position(|f| f.key == "Tr").unwrap();
+    assert_eq!(p.s.t_surround, p.s.fluid_temp);
+    p.apply(&Act::Type(ta, "-20".into()));
+    assert!((p.s.t_surround - 253.15).abs() < 1e-9 && p.texts[tr] == "-20");
+    p.agrees().unwrap();
+    p.apply(&Act::Type(tr, "-40".into()));
+    p.apply(&Act::Type(ta, "0".into()));
+    assert!(
+        (p.s.t_surround - 233.15).abs() < 1e-9,
+        "set apart, it stays"
+    );
+    assert!(scenario::field_note(&p.s, leeward::engine::scenario::Field::Surround).is_some());
 }

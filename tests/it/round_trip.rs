@@ -79,7 +79,11 @@ fn every_field_round_trips_through_link_file_and_csv() {
                 .scenario()
                 .expect("its scenario reads");
             // The survey CSV.
-            let (rows, errors) = survey::from_csv(&survey::to_csv(&[item], system));
+            let (rows, errors) = survey::from_csv(&survey::to_csv(
+                &[item],
+                system,
+                &survey::Figures::default(),
+            ));
             assert!(errors.is_empty(), "{system:?}: {errors:?}");
             let (from_csv, _) = rows[0].scenario().expect("the CSV row reads");
             for sp in &used {

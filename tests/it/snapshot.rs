@@ -103,13 +103,7 @@ fn numbers(s: &Scenario) -> String {
     match scenario::evaluate(s) {
         Ok(o) => format!(
             "{:?} {:?} {:?} {:?} {:?} {:?} {:?}",
-            o.q_total,
-            o.q_per_length,
-            o.surface_temp,
-            o.h,
-            o.h_rad,
-            o.reynolds,
-            o.nusselt
+            o.q_total, o.q_per_length, o.surface_temp, o.h, o.h_rad, o.reynolds, o.nusselt
         ),
         Err(_) => "error".to_string(),
     }

@@ -77,6 +77,9 @@ pub struct Verdict {
     pub ok: bool,
     pub summary: String,
     pub figures: Vec<(&'static str, f64, Dim)>,
+    /// The outer-layer thickness that meets this card's limit, m, whenever there is a layer to
+    /// vary and a thickness up to 0.5 m meets it (whether or not the present layer does).
+    pub thickness: Option<f64>,
     pub caution: Option<&'static str>,
 }
 
@@ -164,32 +167,37 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
         }
     }
     if let Some(b) = &bare {
-        let saving = per_run(b.q - solution.q, g, run);
+        // A cold line gains heat (the flow is inward, negative): the card speaks of gain, and
+        // every figure is a magnitude, so "saved" is never shown negative.
+        let gain = b.q < 0.0;
+        let (bare_q, ins_q) = (per_run(b.q, g, run).abs(), q_run.abs());
+        let saving = bare_q - ins_q;
+        // Negative when the insulation adds to the flow (below the critical radius).
+        let energy_saved = annual_energy(saving, t.hours, t.efficiency).copysign(saving);
+        let (what, bare_w, ins_w, saved_w) = if gain {
+            ("heat gain", "bare gain", "insulated gain", "gain avoided")
+        } else {
+            ("loss", "bare loss", "insulated loss", "saved")
+        };
         verdicts.push(Verdict {
             id: "saving",
             title: "Insulated against bare",
-            ok: saving.abs() <= per_run(b.q, g, run).abs(),
-            summary: if b.q.abs() > solution.q.abs() {
-                "The insulation cuts the loss.".to_string()
+            ok: ins_q <= bare_q,
+            summary: if ins_q <= bare_q {
+                format!("The insulation cuts the {what}.")
             } else {
-                "The insulation increases the loss: the line is below the critical radius."
-                    .to_string()
+                format!(
+                    "The insulation increases the {what}: the line is below the critical radius."
+                )
             },
             figures: vec![
-                ("bare loss", per_run(b.q, g, run), Dim::HeatFlow),
-                ("insulated loss", q_run, Dim::HeatFlow),
-                ("saved", saving, Dim::HeatFlow),
-                (
-                    "energy saved",
-                    annual_energy(saving, t.hours, t.efficiency),
-                    Dim::EnergyPerYear,
-                ),
-                (
-                    "money saved",
-                    annual_energy(saving, t.hours, t.efficiency) * t.price,
-                    Dim::MoneyPerYear,
-                ),
+                (bare_w, bare_q, Dim::HeatFlow),
+                (ins_w, ins_q, Dim::HeatFlow),
+                (saved_w, saving, Dim::HeatFlow),
+                ("energy saved", energy_saved, Dim::EnergyPerYear),
+                ("money saved", energy_saved * t.price, Dim::MoneyPerYear),
             ],
+            thickness: None,
             caution: None,
         });
     }
@@ -198,7 +206,7 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
     // Personnel protection (hot side).
     if job.process_temp > t.touch_limit || ts > t.touch_limit {
         let hot = ts > t.touch_limit;
-        let mut figures = vec![
+        let figures = vec![
             ("surface", ts, Dim::Temperature),
             ("limit", t.touch_limit, Dim::Temperature),
         ];
@@ -207,12 +215,10 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
         } else {
             "The surface is below the touch limit.".to_string()
         };
-        if hot && insulated_layers > 0 {
+        let mut thickness = None;
+        if insulated_layers > 0 && job.process_temp > t.touch_limit {
             match heatloss::thickness_for(job, 0.5, t.touch_limit, |s| s.t_surface)? {
-                Some((th, _)) => {
-                    figures.push(("outer layer thickness for the limit", th, Dim::Length));
-                    summary.push_str(" The outer layer would need the thickness shown to bring it down to the limit.");
-                }
+                Some((th, _)) => thickness = Some(th),
                 None => summary
                     .push_str(" No outer-layer thickness up to 0.5 m brings it to the limit."),
             }
@@ -225,6 +231,7 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
             ok: !hot,
             summary,
             figures,
+            thickness,
             caution: Some(TOUCH_CAUTION),
         });
     }
@@ -233,7 +240,7 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
         let need = td + t.dew_margin;
         if ts < need || job.process_temp < need {
             let wet = ts < need;
-            let mut figures = vec![
+            let figures = vec![
                 ("surface", ts, Dim::Temperature),
                 ("dew point", td, Dim::Temperature),
                 ("margin", t.dew_margin, Dim::TemperatureDifference),
@@ -243,12 +250,10 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
             } else {
                 "The surface stays above the dew point plus the margin.".to_string()
             };
-            if wet && insulated_layers > 0 && job.process_temp < need {
+            let mut thickness = None;
+            if insulated_layers > 0 && job.process_temp < need {
                 match heatloss::thickness_for(job, 0.5, need, |s| s.t_surface)? {
-                    Some((th, _)) => {
-                        figures.push(("outer layer thickness for the margin", th, Dim::Length));
-                        summary.push_str(" The outer layer would need the thickness shown.");
-                    }
+                    Some((th, _)) => thickness = Some(th),
                     None => summary.push_str(
                         " No outer-layer thickness up to 0.5 m keeps the surface above it.",
                     ),
@@ -260,6 +265,7 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
                 ok: !wet,
                 summary,
                 figures,
+                thickness,
                 caution: Some(DEW_CAUTION),
             });
         }
@@ -285,34 +291,37 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
             )
         };
         let (t_cool, t_freeze) = times(&solution);
-        let mut summary = "Still water: time to cool to 0 °C, then to freeze through (lumped water and wall, constant resistance, the approach of ISO 12241; from memory).".to_string();
+        let mut summary = "Still water: time to cool to freezing, then to freeze through (lumped water and wall, constant resistance, the approach of ISO 12241; from memory).".to_string();
         if t.wall_heat_capacity.is_none() {
             summary.push_str(" The wall's heat capacity is left out for a material of your own (the times are then a little short).");
         }
         let mut figures = vec![
-            ("to 0 °C", t_cool, Dim::Duration),
+            ("to freezing", t_cool, Dim::Duration),
             ("then frozen through", t_freeze, Dim::Duration),
             ("in all", t_cool + t_freeze, Dim::Duration),
         ];
         let mut ok = false;
+        let mut thickness = None;
         if t.freeze_target > 0.0 {
             figures.push(("wanted", t.freeze_target, Dim::Duration));
-            if t_cool + t_freeze >= t.freeze_target {
+            let holds = t_cool + t_freeze >= t.freeze_target;
+            if holds {
                 ok = true;
                 summary.push_str(" It holds out for the time wanted.");
             } else if insulated_layers == 0 {
                 summary.push_str(" It freezes sooner than wanted; add an insulation layer to see the thickness that would hold out.");
             } else {
+                summary.push_str(" It freezes sooner than wanted.");
+            }
+            if insulated_layers > 0 {
                 let total = |s: &Solution| {
                     let (a, b) = times(s);
                     a + b
                 };
                 match heatloss::thickness_for(job, 0.5, t.freeze_target, total)? {
-                    Some((th, _)) => {
-                        figures.push(("outer layer thickness for the time", th, Dim::Length));
-                        summary.push_str(" It freezes sooner than wanted; the outer layer would need the thickness shown.");
-                    }
-                    None => summary.push_str(" It freezes sooner than wanted, and no outer-layer thickness up to 0.5 m holds out that long: insulation only slows freezing, it cannot stop it. Heat tracing, a flow kept moving, or draining the line is the usual remedy (common practice)."),
+                    Some((th, _)) => thickness = Some(th),
+                    None if !holds => summary.push_str(" No outer-layer thickness up to 0.5 m holds out that long: insulation only slows freezing, it cannot stop it. Heat tracing, a flow kept moving, or draining the line is the usual remedy (common practice)."),
+                    None => {}
                 }
             }
         }
@@ -322,6 +331,7 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
             ok,
             summary,
             figures,
+            thickness,
             caution: Some(FREEZE_CAUTION),
         });
     }
@@ -333,10 +343,13 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
             ("target", t.loss_target, Dim::HeatFlowPerLength),
         ];
         let met = q <= t.loss_target;
-        let summary = if met {
-            "The loss per metre is within the target.".to_string()
-        } else if insulated_layers == 0 {
-            "The loss per metre is above the target. Add an insulation layer to see the thickness that meets it.".to_string()
+        let mut thickness = None;
+        let summary = if insulated_layers == 0 {
+            if met {
+                "The loss per metre is within the target.".to_string()
+            } else {
+                "The loss per metre is above the target. Add an insulation layer to see the thickness that meets it.".to_string()
+            }
         } else {
             let search = heatloss::thickness_search(job, 0.5, t.loss_target, |s| s.q.abs())?;
             match search {
@@ -344,9 +357,14 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
                     found: Some((th, _)),
                     ..
                 }) => {
-                    figures.push(("outer layer thickness for the target", th, Dim::Length));
-                    "The loss per metre is above the target; the outer layer would need the thickness shown.".to_string()
+                    thickness = Some(th);
+                    if met {
+                        "The loss per metre is within the target.".to_string()
+                    } else {
+                        "The loss per metre is above the target.".to_string()
+                    }
                 }
+                _ if met => "The loss per metre is within the target.".to_string(),
                 Some(heatloss::Search { at_zero, .. }) if at_zero <= t.loss_target => "The loss per metre is above the target, and the layer makes it worse: without the outer layer the loss is within it (the line is below the critical radius, where a thin layer adds surface faster than resistance).".to_string(),
                 Some(heatloss::Search { at_max, .. }) => {
                     figures.push(("loss with 0.5 m of the outer layer", at_max, Dim::HeatFlowPerLength));
@@ -361,6 +379,7 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
             ok: met,
             summary,
             figures,
+            thickness,
             caution: None,
         });
     }
@@ -384,11 +403,18 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
         } else {
             tinf
         };
+        // Water that reaches 0 °C along the run can freeze there: the flow is too small to
+        // keep it liquid (the outlet figure assumes it stays liquid).
+        let freezes = t.process_water && job.process_temp > 273.15 && t_out <= 273.15;
+        let mut summary = "Outlet temperature of the flow over the run length, with the inlet's loss per degree held along it.".to_string();
+        if freezes {
+            summary.push_str(" The water reaches freezing before the outlet: this flow is too small to keep it liquid over the run, and it can freeze there (the outlet figure assumes it stays liquid).");
+        }
         verdicts.push(Verdict {
             id: "flow",
             title: "Along the run",
-            ok: true,
-            summary: "Outlet temperature of the flow over the run length, with the inlet's loss per degree held along it.".to_string(),
+            ok: !freezes,
+            summary,
             figures: vec![
                 ("inlet", job.process_temp, Dim::Temperature),
                 ("outlet", t_out, Dim::Temperature),
@@ -399,7 +425,8 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
                     ("rise", t_out - job.process_temp, Dim::TemperatureDifference)
                 },
             ],
-            caution: None,
+            thickness: None,
+            caution: freezes.then_some(FREEZE_CAUTION),
         });
     }
     Ok(JobResult {
@@ -476,193 +503,10 @@ pub fn lumped(
         ok,
         summary,
         figures,
+        thickness: None,
         caution: None,
     }
 }
 
 #[cfg(test)]
-mod tests {
-    use super::*;
-    use crate::engine::heatloss::tests_support::job;
-
-    fn targets() -> Targets {
-        Targets {
-            touch_limit: 333.15,
-            dew_point: None,
-            dew_margin: 2.0,
-            hours: 8000.0,
-            price: 0.05 / 3.6e6,
-            efficiency: 0.8,
-            mass_flow: 0.0,
-            process_cp: 4180.0,
-            process_water: true,
-            wall_heat_capacity: None,
-            loss_target: 0.0,
-            freeze_target: 0.0,
-        }
-    }
-
-    #[test]
-    fn bare_against_insulated_and_the_touch_thickness() {
-        let j = job(0.03, 0.9);
-        let r = evaluate(&j, &targets(), 1).unwrap();
-        let bare = r.bare.as_ref().unwrap();
-        assert!(bare.q > r.solution.q);
-        let touch = r.verdicts.iter().find(|v| v.id == "touch").unwrap();
-        assert_eq!(touch.ok, r.solution.t_surface <= 333.15);
-        // The saving card's energy: (q'_bare − q')·L·hours/efficiency.
-        let saved = (bare.q - r.solution.q) * 10.0 * 8000.0 * 3600.0 / 0.8;
-        let card = r.verdicts.iter().find(|v| v.id == "saving").unwrap();
-        assert!((card.figures[3].1 - saved).abs() < 1e-6 * saved);
-    }
-
-    /// The test line with still water at 10 °C inside, in −10 °C air under a −10 °C sky.
-    fn frost(insulation: f64) -> Job {
-        let mut j = job(insulation, 0.9);
-        j.stream.t_inf = 263.15;
-        j.t_surround = 263.15;
-        j.process_temp = 283.15;
-        j
-    }
-
-    #[test]
-    fn freezing_times_follow_the_lumped_model() {
-        let j = frost(0.03);
-        let r = evaluate(&j, &targets(), 1).unwrap();
-        let f = r.verdicts.iter().find(|v| v.id == "freeze").unwrap();
-        let (cool, frozen) = (f.figures[0].1, f.figures[1].1);
-        assert!(cool > 0.0 && frozen > 0.0);
-        // Hand check of the cooling time from the same resistance.
-        let r_in = j.construction.r_in;
-        let c = WATER_RHO * std::f64::consts::PI * r_in * r_in * WATER_CP;
-        let rt = 20.0 / r.solution.q;
-        assert!((cool - c * rt * 2f64.ln()).abs() < 1e-9 * cool);
-    }
-
-    /// A 10 mm copper sphere, h = 100 W/(m²·K): τ = ρc(D/6)/h = 8933·385·0.01/6/100 = 57.32 s (hand
-    /// arithmetic); Bi = 100·0.01/6/401 = 4.2×10⁻³, lumping valid.
-    #[test]
-    fn lumped_sphere_by_hand() {
-        let v = lumped(
-            true,
-            0.01,
-            100.0,
-            (401.0, 8933.0, 385.0),
-            300.0,
-            400.0,
-            300.0 + 100.0 / std::f64::consts::E,
-        );
-        assert!(
-            (v.figures[0].1 - 57.320_083).abs() < 1e-3,
-            "{}",
-            v.figures[0].1
-        );
-        assert!(
-            (v.figures[1].1 - v.figures[0].1).abs() < 1e-9,
-            "one time constant to 1/e"
-        );
-        assert!(v.ok);
-        let thick = lumped(
-            false,
-            0.3,
-            100.0,
-            (0.5, 1000.0, 1000.0),
-            300.0,
-            400.0,
-            350.0,
-        );
-        assert!(!thick.ok, "a thick poor conductor fails the Biot check");
-    }
-
-    /// The freeze-time inverse: a wanted time longer than the job holds out gives the outer-layer
-    /// thickness at which the lumped times add up to it; a time no insulation can reach says so.
-    #[test]
-    fn freeze_time_target_gives_a_thickness_or_says_none_can() {
-        let j = frost(0.01);
-        let mut t = targets();
-        let r = evaluate(&j, &t, 1).unwrap();
-        let now = r
-            .verdicts
-            .iter()
-            .find(|v| v.id == "freeze")
-            .unwrap()
-            .figures[2]
-            .1;
-        t.freeze_target = 2.0 * now;
-        let r = evaluate(&j, &t, 1).unwrap();
-        let f = r.verdicts.iter().find(|v| v.id == "freeze").unwrap();
-        assert!(!f.ok);
-        let th = f
-            .figures
-            .iter()
-            .find(|x| x.0 == "outer layer thickness for the time")
-            .expect("a thickness")
-            .1;
-        assert!(th > 0.01 && th < 0.5, "{th}");
-        // At that thickness the job holds out for the time wanted.
-        let mut thick = j.clone();
-        thick.construction.layers[1].thickness = th;
-        let r2 = evaluate(&thick, &t, 1).unwrap();
-        let f2 = r2.verdicts.iter().find(|v| v.id == "freeze").unwrap();
-        assert!((f2.figures[2].1 / t.freeze_target - 1.0).abs() < 1e-6);
-        assert!(f2.ok);
-        // A year: no thickness up to 0.5 m holds out (0.5 m gives about a month here).
-        t.freeze_target = 365.0 * 86_400.0;
-        let r3 = evaluate(&j, &t, 1).unwrap();
-        let f3 = r3.verdicts.iter().find(|v| v.id == "freeze").unwrap();
-        assert!(f3.summary.contains("cannot stop it"), "{}", f3.summary);
-    }
-
-    /// The loss-per-metre inverse, met and unmet, and a target below what any thickness reaches.
-    #[test]
-    fn loss_target_gives_a_thickness_or_says_none_can() {
-        let j = job(0.01, 0.9);
-        let mut t = targets();
-        let q = evaluate(&j, &t, 1).unwrap().solution.q;
-        t.loss_target = 0.5 * q;
-        let r = evaluate(&j, &t, 1).unwrap();
-        let v = r.verdicts.iter().find(|v| v.id == "loss").unwrap();
-        assert!(!v.ok);
-        let th = v.figures[2].1;
-        let mut at = j.clone();
-        at.construction.layers[1].thickness = th;
-        let q_at = heatloss::solve(&at).unwrap().q;
-        assert!((q_at / (0.5 * q) - 1.0).abs() < 1e-6, "{q_at}");
-        t.loss_target = 2.0 * q;
-        let r = evaluate(&j, &t, 1).unwrap();
-        assert!(r.verdicts.iter().find(|v| v.id == "loss").unwrap().ok);
-        // 1 W/m from a 180 °C line through this insulant would take metres of it.
-        t.loss_target = 1.0;
-        let r = evaluate(&j, &t, 1).unwrap();
-        let v = r.verdicts.iter().find(|v| v.id == "loss").unwrap();
-        assert!(
-            v.summary.contains("below what this construction can reach"),
-            "{}",
-            v.summary
-        );
-        assert!(v.figures[2].1 > 1.0);
-    }
-
-    #[test]
-    fn flow_outlet_lies_between_inlet_and_air() {
-        let j = job(0.03, 0.9);
-        let mut t = targets();
-        t.mass_flow = 0.2;
-        let r = evaluate(&j, &t, 1).unwrap();
-        let f = r.verdicts.iter().find(|v| v.id == "flow").unwrap();
-        let out = f.figures[1].1;
-        assert!(out < j.process_temp && out > j.stream.t_inf);
-        assert_eq!(f.figures[2].0, "drop");
-        assert!((f.figures[2].1 - (j.process_temp - out)).abs() < 1e-12);
-        // A cold line in warmer air warms along the run: a rise, shown positive.
-        let mut cold = j.clone();
-        cold.process_temp = 263.15;
-        cold.t_surround = 288.15;
-        cold.stream.t_inf = 288.15;
-        let r = evaluate(&cold, &t, 1).unwrap();
-        let f = r.verdicts.iter().find(|v| v.id == "flow").unwrap();
-        assert!(f.figures[1].1 > 263.15 && f.figures[1].1 < 288.15);
-        assert_eq!(f.figures[2].0, "rise");
-        assert!(f.figures[2].1 > 0.0);
-    }
-}
+mod tests;

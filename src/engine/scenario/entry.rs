@@ -6,23 +6,50 @@
 
 use super::*;
 
-/// Text for a field's value in the unit shown, trimmed to sensible digits (display only; the
-/// scenario keeps full precision).
-pub fn shown_text(si: f64, unit: &Unit) -> String {
-    format_sig(unit.from_si(si), 6)
+/// Text for a field's value in the unit shown, at the unit's display resolution (what a person
+/// would type: 2.37 in, not 2.37402); the scenario keeps full precision. Where rounding would
+/// carry the text across one of the field's limits, six figures are shown instead, so the text
+/// never reads as refused while its value is used.
+pub fn shown_text(spec: &FieldSpec, si: f64, unit: &Unit) -> String {
+    let v = unit.from_si(si);
+    let text = units::format_value(v, unit);
+    if read_field(spec, &text, unit).is_ok() {
+        text
+    } else {
+        format_sig(v, 6)
+    }
 }
 
 /// A person typed `text` with `unit` shown: the scenario takes the value when it reads, otherwise
 /// keeps its last good value and the message is returned for the page to show beside the field.
+///
+/// The surroundings' temperature follows the stream's while the two are equal (a person who has
+/// not set them apart means "the same"); the fields that followed are returned, for the page to
+/// rewrite their texts.
 pub fn type_text(
     s: &mut Scenario,
     spec: &FieldSpec,
     text: &str,
     unit: &Unit,
-) -> Result<(), String> {
+) -> Result<Vec<Field>, String> {
     let si = read_field(spec, text, unit)?;
+    let follows = spec.field == Field::FluidTemp && s.t_surround == s.fluid_temp;
     s.set(spec.field, si);
-    Ok(())
+    if follows {
+        s.t_surround = si;
+        return Ok(vec![Field::Surround]);
+    }
+    Ok(Vec::new())
+}
+
+/// A note under a field, where the page should say something about its value (not an error).
+pub fn field_note(s: &Scenario, f: Field) -> Option<&'static str> {
+    match f {
+        Field::Surround if s.uses(f) && s.t_surround != s.fluid_temp => Some(
+            "Set apart from the stream's temperature: the surface exchanges radiation with surroundings at this temperature.",
+        ),
+        _ => None,
+    }
 }
 
 /// The unit shown beside a field changes from `from` to `to`; returns the field's new text.
@@ -43,7 +70,7 @@ pub fn switch_unit(
         return text.to_string();
     }
     if read_field(spec, text, from).is_ok() {
-        return shown_text(s.get(spec.field), to);
+        return shown_text(spec, s.get(spec.field), to);
     }
     let _ = type_text(s, spec, text, to);
     text.to_string()

@@ -333,6 +333,7 @@ pub(crate) fn given_verdicts(s: &Scenario, ts: f64, dew_point: Option<f64>) -> V
             ok: false,
             summary: "The surface is above the touch limit. Work out the surface from the process temperature with an insulation layer to see the thickness that meets it.".into(),
             figures: vec![("surface", ts, Dim::Temperature), ("limit", s.touch_limit, Dim::Temperature)],
+            thickness: None,
             caution: Some(TOUCH_CAUTION),
         });
     }
@@ -349,6 +350,7 @@ pub(crate) fn given_verdicts(s: &Scenario, ts: f64, dew_point: Option<f64>) -> V
                     ("dew point", td, Dim::Temperature),
                     ("margin", s.dew_margin, Dim::TemperatureDifference),
                 ],
+                thickness: None,
                 caution: Some(DEW_CAUTION),
             });
         }
@@ -367,8 +369,10 @@ pub fn cautions(s: &Scenario, o: &Outcome) -> Vec<&'static str> {
     if o.dew_point.is_some_and(|td| ts <= td) {
         out.push("The surface is at or below the stream's dew point: moisture will condense on it. Condensate wets insulation and corrodes steel; a vapour-tight design is a matter for a qualified designer and local codes.");
     }
-    if ts < 273.15 {
-        out.push("The surface is below freezing: frost or ice can form on it, and water inside a line this cold can freeze and burst it. Follow local codes and licensed practice for freeze protection.");
+    // Frost needs moisture in the stream; a line's water freezing inside is the freezing card's
+    // own caution (still water in frost only), never said of a hot or flowing line here.
+    if ts < 273.15 && matches!(s.fluid, FluidKind::HumidAir) {
+        out.push("The surface is below freezing: frost or ice can form on it and make it slippery or heavy. Follow local codes and licensed practice.");
     }
     out
 }

@@ -218,8 +218,8 @@ pub const FIELDS: [FieldSpec; 47] = [
     f(Field::FluidTemp, Group::Stream, "Ta", "Stream temperature", Dim::Temperature, (0.0, true, 3000.0), "of the approaching fluid", at!(fluid_temp), always),
     f(Field::Pressure, Group::Stream, "p", "Pressure", Dim::Pressure, (0.0, true, 100e6), "absolute, at the site", at!(pressure), pressure_typed),
     f(Field::Elevation, Group::Stream, "z", "Site elevation", Dim::Elevation, (-500.0, false, 11_000.0), "above sea level; standard atmosphere", at!(elevation), elevation_typed),
-    f(Field::RelativeHumidity, Group::Stream, "rh", "Relative humidity", Dim::Fraction, (0.0, false, 1.0), "to water above 0 °C, to ice below", at!(relative_humidity), humidity_typed),
-    f(Field::DewPoint, Group::Stream, "td", "Dew point", Dim::Temperature, (0.0, true, 3000.0), "frost point below 0 °C", at!(dew_point), dew_point_typed),
+    f(Field::RelativeHumidity, Group::Stream, "rh", "Relative humidity", Dim::Fraction, (0.0, false, 1.0), "to water above {T:273.15}, to ice below", at!(relative_humidity), humidity_typed),
+    f(Field::DewPoint, Group::Stream, "td", "Dew point", Dim::Temperature, (0.0, true, 3000.0), "frost point below {T:273.15}", at!(dew_point), dew_point_typed),
     f(Field::GlycolFraction, Group::Stream, "xg", "Glycol content", Dim::Fraction, (0.0, false, 0.6), "by mass, 0–60 %", at!(glycol_fraction), glycol_stream),
     f(Field::UserRho, Group::Stream, "ur", "Density", Dim::Density, (0.0, true, 1e5), "of your fluid", at!(user_rho), user_fluid),
     f(Field::UserMu, Group::Stream, "um", "Viscosity", Dim::DynamicViscosity, (0.0, true, 1e3), "dynamic, of your fluid", at!(user_mu), user_fluid),
@@ -235,26 +235,26 @@ pub const FIELDS: [FieldSpec; 47] = [
     f(Field::Emissivity, Group::Surface, "e", "Emissivity", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 painted or oxidised, 0.1 bright aluminium (common practice)", at!(emissivity), always),
     f(Field::Surround, Group::Surface, "Tr", "Surroundings temperature", Dim::Temperature, (0.0, true, 3000.0), "what the surface sees (sky, walls); the stream's if unsure", at!(t_surround), always),
     f(Field::Layer1T, Group::Layers, "t1", "Layer 1 thickness", Dim::Length, (0.0, false, 2.0), "innermost insulation", at!(layer_t[0]), layer_1),
-    f(Field::Layer1Ka, Group::Layers, "ka1", "Layer 1 k at mean temperature A", Dim::ThermalConductivity, (0.0, true, 100.0), "from the data sheet", at!(layer_ka[0]), layer_1),
-    f(Field::Layer1Kb, Group::Layers, "kb1", "Layer 1 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k", at!(layer_kb[0]), layer_1),
+    f(Field::Layer1Ka, Group::Layers, "ka1", "Layer 1 k at mean temperature A", Dim::LayerConductivity, (0.0, true, 100.0), "from the data sheet", at!(layer_ka[0]), layer_1),
+    f(Field::Layer1Kb, Group::Layers, "kb1", "Layer 1 k at mean temperature B", Dim::LayerConductivity, (0.0, true, 100.0), "the same as at A for a constant k", at!(layer_kb[0]), layer_1),
     f(Field::Layer2T, Group::Layers, "t2", "Layer 2 thickness", Dim::Length, (0.0, false, 2.0), "over layer 1", at!(layer_t[1]), layer_2),
-    f(Field::Layer2Ka, Group::Layers, "ka2", "Layer 2 k at mean temperature A", Dim::ThermalConductivity, (0.0, true, 100.0), "from the data sheet", at!(layer_ka[1]), layer_2),
-    f(Field::Layer2Kb, Group::Layers, "kb2", "Layer 2 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k", at!(layer_kb[1]), layer_2),
+    f(Field::Layer2Ka, Group::Layers, "ka2", "Layer 2 k at mean temperature A", Dim::LayerConductivity, (0.0, true, 100.0), "from the data sheet", at!(layer_ka[1]), layer_2),
+    f(Field::Layer2Kb, Group::Layers, "kb2", "Layer 2 k at mean temperature B", Dim::LayerConductivity, (0.0, true, 100.0), "the same as at A for a constant k", at!(layer_kb[1]), layer_2),
     f(Field::Layer3T, Group::Layers, "t3", "Layer 3 thickness", Dim::Length, (0.0, false, 2.0), "outermost", at!(layer_t[2]), layer_3),
-    f(Field::Layer3Ka, Group::Layers, "ka3", "Layer 3 k at mean temperature A", Dim::ThermalConductivity, (0.0, true, 100.0), "from the data sheet", at!(layer_ka[2]), layer_3),
-    f(Field::Layer3Kb, Group::Layers, "kb3", "Layer 3 k at mean temperature B", Dim::ThermalConductivity, (0.0, true, 100.0), "the same as at A for a constant k", at!(layer_kb[2]), layer_3),
+    f(Field::Layer3Ka, Group::Layers, "ka3", "Layer 3 k at mean temperature A", Dim::LayerConductivity, (0.0, true, 100.0), "from the data sheet", at!(layer_ka[2]), layer_3),
+    f(Field::Layer3Kb, Group::Layers, "kb3", "Layer 3 k at mean temperature B", Dim::LayerConductivity, (0.0, true, 100.0), "the same as at A for a constant k", at!(layer_kb[2]), layer_3),
     f(Field::KTempA, Group::Layers, "Tka", "Mean temperature A", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's first k", at!(k_temp_a), layer_1),
     f(Field::KTempB, Group::Layers, "Tkb", "Mean temperature B", Dim::Temperature, (0.0, true, 3000.0), "of its second k", at!(k_temp_b), layer_1),
-    f(Field::Layer1Kc, Group::Layers, "kc1", "Layer 1 k at mean temperature C", Dim::ThermalConductivity, (0.0, false, 100.0), "optional third point (0: k is linear through A and B)", at!(layer_kc[0]), layer_1),
-    f(Field::Layer2Kc, Group::Layers, "kc2", "Layer 2 k at mean temperature C", Dim::ThermalConductivity, (0.0, false, 100.0), "optional third point (0: linear)", at!(layer_kc[1]), layer_2),
-    f(Field::Layer3Kc, Group::Layers, "kc3", "Layer 3 k at mean temperature C", Dim::ThermalConductivity, (0.0, false, 100.0), "optional third point (0: linear)", at!(layer_kc[2]), layer_3),
+    f(Field::Layer1Kc, Group::Layers, "kc1", "Layer 1 k at mean temperature C", Dim::LayerConductivity, (0.0, false, 100.0), "optional third point (0: k is linear through A and B)", at!(layer_kc[0]), layer_1),
+    f(Field::Layer2Kc, Group::Layers, "kc2", "Layer 2 k at mean temperature C", Dim::LayerConductivity, (0.0, false, 100.0), "optional third point (0: linear)", at!(layer_kc[1]), layer_2),
+    f(Field::Layer3Kc, Group::Layers, "kc3", "Layer 3 k at mean temperature C", Dim::LayerConductivity, (0.0, false, 100.0), "optional third point (0: linear)", at!(layer_kc[2]), layer_3),
     f(Field::KTempC, Group::Layers, "Tkc", "Mean temperature C", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's third k, if given", at!(k_temp_c), layer_1),
-    f(Field::TouchLimit, Group::Job, "Tl", "Touch limit", Dim::Temperature, (0.0, true, 3000.0), "60 °C is common practice; local codes govern", at!(touch_limit), always),
+    f(Field::TouchLimit, Group::Job, "Tl", "Touch limit", Dim::Temperature, (0.0, true, 3000.0), "{T:333.15} is common practice; local codes govern", at!(touch_limit), always),
     f(Field::DewMargin, Group::Job, "dm", "Margin above the dew point", Dim::TemperatureDifference, (0.0, false, 50.0), "for cold surfaces in humid air", at!(dew_margin), always),
-    f(Field::LossTarget, Group::Job, "qt", "Loss target", Dim::HeatFlowPerLength, (0.0, false, 1e6), "highest loss per metre wanted; 0 for none", at!(loss_target), offers_film),
+    f(Field::LossTarget, Group::Job, "qt", "Loss target", Dim::HeatFlowPerLength, (0.0, false, 1e6), "highest loss per length wanted; 0 for none", at!(loss_target), offers_film),
     f(Field::FreezeTarget, Group::Job, "tft", "Hold out against freezing for", Dim::Duration, (0.0, false, 3.6e7), "still water in frost; 0 for none", at!(freeze_target), still_water),
     f(Field::MassFlow, Group::Job, "mf", "Flow through the pipe", Dim::MassFlow, (0.0, false, 1e4), "0 for still water (then the freezing times)", at!(mass_flow), offers_film),
-    f(Field::ProcessCp, Group::Job, "cpp", "Heat capacity of the process fluid", Dim::SpecificHeat, (0.0, true, 1e6), "about 4180 J/(kg·K) for water", at!(process_cp), process_cp_typed),
+    f(Field::ProcessCp, Group::Job, "cpp", "Heat capacity of the process fluid", Dim::SpecificHeat, (0.0, true, 1e6), "about {cp:4180} for water", at!(process_cp), process_cp_typed),
     f(Field::Hours, Group::Job, "hy", "Operating hours", Dim::HoursPerYear, (0.0, false, 8784.0), "per year", at!(hours), always),
     f(Field::Price, Group::Job, "pe", "Energy price", Dim::EnergyPrice, (0.0, false, 1e-4), "of the fuel or power that makes up the loss", at!(price), always),
     f(Field::Efficiency, Group::Job, "ef", "Heater or boiler efficiency", Dim::Fraction, (0.01, false, 1.0), "share of that energy that becomes heat", at!(efficiency), always),
@@ -279,6 +279,31 @@ impl Scenario {
     pub fn uses(&self, f: Field) -> bool {
         (spec(f).applies)(self)
     }
+}
+
+/// A field's help text in the units the person reads: `{T:333.15}` in a row's help is a
+/// temperature in kelvin, `{cp:4180}` a heat capacity in J/(kg·K), each written in the unit
+/// chosen ("60 °C", "140 °F"; "4180 J/(kg·K)", "0.998 Btu/(lb·°F)").
+pub fn help_text(spec: &FieldSpec, c: &units::UnitChoice) -> String {
+    let mut out = String::new();
+    let mut rest = spec.help;
+    while let Some(i) = rest.find('{') {
+        out.push_str(&rest[..i]);
+        let Some(j) = rest[i..].find('}') else { break };
+        let token = &rest[i + 1..i + j];
+        let value = token.split_once(':').and_then(|(k, v)| {
+            let dim = match k {
+                "T" => Dim::Temperature,
+                "cp" => Dim::SpecificHeat,
+                _ => return None,
+            };
+            v.parse::<f64>().ok().map(|v| units::show(v, c.get(dim)))
+        });
+        out.push_str(&value.unwrap_or_else(|| rest[i..=i + j].to_string()));
+        rest = &rest[i + j + 1..];
+    }
+    out.push_str(rest);
+    out
 }
 
 /// Check an SI value against the field's hard limits. The message is written in `shown`, the
@@ -375,10 +400,7 @@ pub fn error_message(e: &EngineError, c: &units::UnitChoice) -> String {
             _ => None,
         };
         match dim {
-            Some(d) => {
-                let u = c.get(d);
-                format!("{} {}", format_sig(u.from_si(v), 4), u.symbol)
-            }
+            Some(d) => units::show(v, c.get(d)),
             None => format!("{} {unit}", format_sig(v, 4))
                 .trim_end()
                 .to_string(),

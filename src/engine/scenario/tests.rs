@@ -476,7 +476,8 @@ fn no_temperature_difference_in_solved_mode_goes_beside_the_process_temperature(
 }
 
 /// Regression (defect 9 of the hostile-user report): messages showed raw SI numbers with float
-/// noise ("bore radius = -0.0028499999999999984 m"). Now in the person's units, four figures.
+/// noise ("bore radius = -0.0028499999999999984 m"). Now in the person's units, at the unit's
+/// display resolution.
 #[test]
 fn error_messages_are_in_the_persons_units_without_float_noise() {
     let mut s = DEMO;
@@ -486,7 +487,7 @@ fn error_messages_are_in_the_persons_units_without_float_noise() {
     let si = error_message(&e, &units::UnitChoice::for_system(System::Si));
     assert!(si.contains("-2.85 mm") && si.starts_with('B'), "{si}");
     let us = error_message(&e, &units::UnitChoice::for_system(System::Us));
-    assert!(us.contains("-0.1122 in") && !us.contains("mm"), "{us}");
+    assert!(us.contains("-0.112 in") && !us.contains("mm"), "{us}");
     // A phase error in °F on a US page.
     let mut w = DEMO;
     w.fluid = FluidKind::Water;
@@ -524,5 +525,65 @@ fn every_row_of_the_field_table_owns_one_slot() {
                 other.key
             );
         }
+    }
+}
+
+/// Cautions only where they apply: a hot line in frost air carries no "freeze and burst" words
+/// (that caution belongs to the still-water freezing card); frost on a surface below 0 °C is
+/// named only where the stream carries moisture.
+#[test]
+fn cautions_apply_only_where_they_should() {
+    let mut hot = DEMO;
+    hot.surface_mode = SurfaceMode::Solved;
+    hot.process_temp = 423.15;
+    hot.fluid_temp = 263.15;
+    hot.t_surround = 263.15;
+    hot.layer_count = 0;
+    hot.mass_flow = 2.0;
+    let o = evaluate(&hot).unwrap();
+    let all = cautions(&hot, &o).join(" ");
+    assert!(!all.contains("burst") && !all.contains("frost"), "{all}");
+    assert!(
+        o.verdicts.iter().all(|v| v.id != "freeze"),
+        "no freezing card with flow"
+    );
+    // A surface below 0 °C in humid air: frost, in dry air: nothing about frost.
+    let mut cold = DEMO;
+    cold.fluid_temp = 263.15;
+    cold.t_surround = 263.15;
+    cold.surface_temp = 258.15;
+    let o = evaluate(&cold).unwrap();
+    assert!(cautions(&cold, &o).iter().any(|c| c.contains("frost")));
+    cold.fluid = FluidKind::DryAir;
+    let o = evaluate(&cold).unwrap();
+    assert!(!cautions(&cold, &o).iter().any(|c| c.contains("frost")));
+}
+
+/// Help texts speak the person's units: no "°C" in US units, no "°F" in SI.
+#[test]
+fn help_texts_are_in_the_units_chosen() {
+    use crate::engine::units::{System, UnitChoice};
+    let si = UnitChoice::for_system(System::Si);
+    let us = UnitChoice::for_system(System::Us);
+    let touch = spec(Field::TouchLimit);
+    assert_eq!(
+        help_text(touch, &si),
+        "60 °C is common practice; local codes govern"
+    );
+    assert_eq!(
+        help_text(touch, &us),
+        "140 °F is common practice; local codes govern"
+    );
+    assert_eq!(
+        help_text(spec(Field::ProcessCp), &us),
+        "about 0.9984 Btu/(lb·°F) for water"
+    );
+    for f in FIELDS.iter() {
+        let t = help_text(f, &us);
+        assert!(
+            !t.contains("°C") && !t.contains("J/") && !t.contains('{'),
+            "{}: {t}",
+            f.key
+        );
     }
 }

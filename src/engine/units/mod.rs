@@ -42,10 +42,13 @@ pub enum Dim {
     /// Money per year (currency-neutral).
     MoneyPerYear,
     MassFlow,
+    /// An insulation's conductivity: the same quantity as `ThermalConductivity`, in the units of
+    /// insulation data sheets (Btu·in/(h·ft²·°F) in US units).
+    LayerConductivity,
 }
 
 /// Every dimension, in the order the page lists them.
-pub const ALL_DIMS: [Dim; 24] = [
+pub const ALL_DIMS: [Dim; 25] = [
     Dim::Temperature,
     Dim::Length,
     Dim::Speed,
@@ -70,6 +73,7 @@ pub const ALL_DIMS: [Dim; 24] = [
     Dim::EnergyPerYear,
     Dim::MoneyPerYear,
     Dim::MassFlow,
+    Dim::LayerConductivity,
 ];
 
 /// A unit system for the global switch.
@@ -151,6 +155,21 @@ pub const UNITS: &[Unit] = &[
         BTU_IT / HOUR / FT / RANKINE,
         0.0,
     ),
+    u("W/mK-ins", "W/(m·K)", Dim::LayerConductivity, 1.0, 0.0),
+    u(
+        "Btuin/hft2F",
+        "Btu·in/(h·ft²·°F)",
+        Dim::LayerConductivity,
+        BTU_IT / HOUR * IN / (FT * FT) / RANKINE,
+        0.0,
+    ),
+    u(
+        "Btu/hftF-ins",
+        "Btu/(h·ft·°F)",
+        Dim::LayerConductivity,
+        BTU_IT / HOUR / FT / RANKINE,
+        0.0,
+    ),
     u("m2/s", "m²/s", Dim::KinematicViscosity, 1.0, 0.0),
     u("ft2/s", "ft²/s", Dim::KinematicViscosity, FT * FT, 0.0),
     u("Pas", "Pa·s", Dim::DynamicViscosity, 1.0, 0.0),
@@ -182,6 +201,7 @@ pub const UNITS: &[Unit] = &[
     u("s", "s", Dim::Duration, 1.0, 0.0),
     u("min", "min", Dim::Duration, 60.0, 0.0),
     u("h", "h", Dim::Duration, HOUR, 0.0),
+    u("d", "d", Dim::Duration, 24.0 * HOUR, 0.0),
     u("h/yr", "h/yr", Dim::HoursPerYear, 1.0, 0.0),
     u("/J", "per J", Dim::EnergyPrice, 1.0, 0.0),
     u("/kWh", "per kWh", Dim::EnergyPrice, 1.0 / (1e3 * HOUR), 0.0),
@@ -222,6 +242,16 @@ impl Unit {
     pub fn from_si(&self, si: f64) -> f64 {
         (si - self.offset) / self.scale
     }
+}
+
+/// Whether two dimensions measure the same quantity (an insulation's conductivity is a
+/// conductivity), so a value in a unit of one reads in the other (older files' headers).
+pub fn same_quantity(a: Dim, b: Dim) -> bool {
+    let norm = |d| match d {
+        Dim::LayerConductivity => Dim::ThermalConductivity,
+        d => d,
+    };
+    norm(a) == norm(b)
 }
 
 /// Look a unit up by its id.
@@ -279,6 +309,8 @@ pub fn default_unit(dim: Dim, system: System) -> &'static Unit {
         (Dim::MoneyPerYear, _) => "/yr",
         (Dim::MassFlow, System::Si) => "kg/h",
         (Dim::MassFlow, System::Us) => "lb/h",
+        (Dim::LayerConductivity, System::Si) => "W/mK-ins",
+        (Dim::LayerConductivity, System::Us) => "Btuin/hft2F",
     };
     unit(id).expect("every default unit is in UNITS")
 }
@@ -367,43 +399,8 @@ pub fn parse_number(text: &str) -> Result<f64, ParseError> {
     Ok(v)
 }
 
-/// Format with `sig` significant figures, no exponent for everyday magnitudes, no trailing noise.
-/// Never returns "NaN" or "inf": a non-finite value shows as an em dash.
-pub fn format_sig(v: f64, sig: usize) -> String {
-    if !v.is_finite() {
-        return "—".to_string();
-    }
-    if v == 0.0 {
-        return "0".to_string();
-    }
-    let sig = sig.clamp(1, 17);
-    let mag = v.abs().log10().floor() as i32;
-    if !(-4..9).contains(&mag) {
-        let s = format!("{:.*e}", sig - 1, v);
-        // "1.230e5" -> "1.23e5"
-        if let Some((m, e)) = s.split_once('e') {
-            let m = trim_zeros(m);
-            return format!("{m}e{e}");
-        }
-        return s;
-    }
-    let decimals = (sig as i32 - 1 - mag).max(0) as usize;
-    let s = format!("{:.*}", decimals, v);
-    let s = trim_zeros(&s);
-    if s == "-0" {
-        "0".to_string()
-    } else {
-        s
-    }
-}
-
-fn trim_zeros(s: &str) -> String {
-    if s.contains('.') {
-        s.trim_end_matches('0').trim_end_matches('.').to_string()
-    } else {
-        s.to_string()
-    }
-}
+mod display;
+pub use display::*;
 
 #[cfg(test)]
 mod tests {
@@ -527,17 +524,24 @@ mod tests {
         assert_eq!(parse_number("1234,567"), Ok(1234.567));
     }
 
+    /// NIST SP 811 (2008) Appendix B.9, "British thermal unit_IT inch per hour square foot
+    /// degree Fahrenheit": 1.442 279 E−01 W/(m·K) (from memory of the table; it follows from
+    /// the exact definitions above, which are checked independently).
     #[test]
-    fn formatting_significant_figures() {
-        assert_eq!(format_sig(96.0234, 3), "96");
-        assert_eq!(format_sig(96.0234, 4), "96.02");
-        assert_eq!(format_sig(0.026352, 3), "0.0264");
-        assert_eq!(format_sig(6071.4, 3), "6071");
-        assert_eq!(format_sig(1.5e-5, 3), "1.5e-5");
-        assert_eq!(format_sig(2.5e12, 3), "2.5e12");
-        assert_eq!(format_sig(f64::NAN, 3), "—");
-        assert_eq!(format_sig(f64::INFINITY, 3), "—");
-        assert_eq!(format_sig(-0.0001, 1), "-0.0001");
-        assert_eq!(format_sig(-0.00001, 1), "-1e-5");
+    fn insulation_conductivity_in_the_units_of_us_data_sheets() {
+        let u = unit("Btuin/hft2F").unwrap();
+        assert!(close(u.to_si(1.0), 0.1442279, 1e-6), "{}", u.to_si(1.0));
+        // 12 Btu·in/(h·ft²·°F) is one Btu/(h·ft·°F): an inch is a twelfth of a foot.
+        let per_ft = unit("Btu/hftF-ins").unwrap();
+        assert!(close(u.to_si(12.0), per_ft.to_si(1.0), 1e-12));
+        assert_eq!(
+            default_unit(Dim::LayerConductivity, System::Us).symbol,
+            "Btu·in/(h·ft²·°F)"
+        );
+        assert!(same_quantity(
+            Dim::LayerConductivity,
+            Dim::ThermalConductivity
+        ));
+        assert!(!same_quantity(Dim::Length, Dim::RunLength));
     }
 }

@@ -50,7 +50,11 @@ fn csv_of(n: usize) -> String {
             )
         })
         .collect();
-    leeward::engine::survey::to_csv(&items, leeward::engine::units::System::Si)
+    leeward::engine::survey::to_csv(
+        &items,
+        leeward::engine::units::System::Si,
+        &Default::default(),
+    )
 }
 
 /// Defects 1 and 5: a 10,000-row CSV then a 1,100-row one were both "Imported", wrote a store the
@@ -404,8 +408,12 @@ fn defect_2_and_6_every_naming_path_gives_distinct_names() {
             ));
         }
         // Saved::new clips to 120: write the 130 characters into the file by hand.
-        let csv = leeward::engine::survey::to_csv(&items, leeward::engine::units::System::Si)
-            .replace(&"C".repeat(120), &"C".repeat(130));
+        let csv = leeward::engine::survey::to_csv(
+            &items,
+            leeward::engine::units::System::Si,
+            &Default::default(),
+        )
+        .replace(&"C".repeat(120), &"C".repeat(130));
         choose_file(&c, "import-csv", "long.csv", &csv).await;
         wait_for(
             &c,
@@ -536,8 +544,12 @@ fn defect_3_and_7_odd_stores_and_files_are_kept_or_refused_with_a_reason() {
             &DEMO,
             leeward::engine::units::System::Si,
         )];
-        let csv = leeward::engine::survey::to_csv(&items, leeward::engine::units::System::Si)
-            .replace("\r\n", "\r");
+        let csv = leeward::engine::survey::to_csv(
+            &items,
+            leeward::engine::units::System::Si,
+            &Default::default(),
+        )
+        .replace("\r\n", "\r");
         choose_file(&c, "import-csv", "cr.csv", &csv).await;
         wait_for(
             &c,

@@ -174,7 +174,11 @@ fn saved_work_survives_travels_and_prints() {
             &DEMO,
             leeward::engine::units::System::Si,
         )];
-        let mut csv = leeward::engine::survey::to_csv(&items, leeward::engine::units::System::Us);
+        let mut csv = leeward::engine::survey::to_csv(
+            &items,
+            leeward::engine::units::System::Us,
+            &Default::default(),
+        );
         csv.push_str("Bad row,,,cube\r\n");
         let csv_file =
             std::env::temp_dir().join(format!("leeward-import-{}.csv", std::process::id()));

@@ -1,0 +1,125 @@
+//! The pick-lists of the inputs: wall material, inside film, nominal pipe size, typical
+//! emissivity, and the number of insulation layers. Each sets the scenario (and, where it fills
+//! a field, that field's text); none holds physics.
+
+use leptos::prelude::*;
+
+use crate::engine::scenario::{self, Field, InsideFilm, Scenario, Shape, WallMaterial};
+use crate::engine::units::{Dim, UnitChoice};
+
+/// The wall's material (or the body's, for a cooling body).
+pub fn wall_select(scenario: RwSignal<Scenario>) -> impl IntoView {
+    let opts = WallMaterial::ALL
+        .into_iter()
+        .map(|m| view! { <option value=m.id() prop:selected=move || scenario.with(|s| s.wall == m)>{m.label()}</option> })
+        .collect_view();
+    view! {
+        <div class="field" class:hidden=move || !scenario.with(|s| s.solved() || s.cools())>
+            <label for="in-wall">{move || if scenario.with(|s| s.solved()) { "Wall material" } else { "Material of the body" }}<small>"its k near room temperature, from Incropera & DeWitt Table A.1"</small></label>
+            <select id="in-wall" class="wide" data-choice="wall" on:change=move |ev| {
+                if let Some(m) = WallMaterial::from_id(&event_target_value(&ev)) {
+                    scenario.update(|s| s.wall = m);
+                }
+            }>{opts}</select>
+        </div>
+    }
+}
+
+/// Where the inside film comes from: typed, or worked out from a process fluid's flow.
+pub fn inside_select(scenario: RwSignal<Scenario>) -> impl IntoView {
+    let opts = InsideFilm::ALL
+        .into_iter()
+        .map(|m| view! { <option value=m.id() prop:selected=move || scenario.with(|s| s.inside == m)>{m.label()}</option> })
+        .collect_view();
+    view! {
+        <div class="field" class:hidden=move || !scenario.with(|s| s.offers_inside_film())>
+            <label for="in-inside">"Inside film"<small>"typed, or worked out from the flow set under 4 · The job"</small></label>
+            <select id="in-inside" class="wide" data-choice="inside" on:change=move |ev| {
+                if let Some(m) = InsideFilm::from_id(&event_target_value(&ev)) {
+                    scenario.update(|s| s.inside = m);
+                }
+            }>{opts}</select>
+        </div>
+    }
+}
+
+/// Nominal pipe sizes set D (and the text shown in the D field).
+pub fn size_picker(
+    scenario: RwSignal<Scenario>,
+    choice: RwSignal<UnitChoice>,
+    text_of: impl Fn(Field) -> RwSignal<String> + Copy + Send + Sync + 'static,
+) -> impl IntoView {
+    let opts = crate::engine::job::NOMINAL_SIZES
+        .iter()
+        .enumerate()
+        .map(|(i, (name, d))| {
+            let d = *d;
+            // The size stays chosen while D is its diameter (a reopened item shows its size).
+            view! { <option value=i.to_string() prop:selected=move || scenario.with(|s| (s.diameter - d).abs() < 1e-9)>{*name}</option> }
+        })
+        .collect_view();
+    view! {
+        <div class="field" class:hidden=move || !scenario.with(|s| s.shape == Shape::Cylinder)>
+            <label for="in-nps">"Nominal pipe size"<small>"sets D to the outside diameter (ASME B36.10M)"</small></label>
+            <select id="in-nps" class="wide" data-choice="nps" on:change=move |ev| {
+                let Ok(i) = event_target_value(&ev).parse::<usize>() else { return };
+                let Some((_, d)) = crate::engine::job::NOMINAL_SIZES.get(i) else { return };
+                scenario.update(|s| s.diameter = *d);
+                let u = choice.get_untracked().get(Dim::Length);
+                text_of(Field::Diameter).set(scenario::shown_text(scenario::spec(Field::Diameter), *d, u));
+            }>
+                <option value="" prop:selected=move || scenario.with(|s| crate::engine::job::NOMINAL_SIZES.iter().all(|(_, d)| (s.diameter - d).abs() >= 1e-9))>"Choose a size, or type D below"</option>
+                {opts}
+            </select>
+        </div>
+    }
+}
+
+/// Typical emissivities set ε (and the text shown in its field).
+pub fn emissivity_picker(
+    scenario: RwSignal<Scenario>,
+    choice: RwSignal<UnitChoice>,
+    text_of: impl Fn(Field) -> RwSignal<String> + Copy + Send + Sync + 'static,
+) -> impl IntoView {
+    let opts = crate::engine::job::EMISSIVITIES
+        .iter()
+        .enumerate()
+        .map(|(i, (name, e))| view! { <option value=i.to_string()>{format!("{name}: {e}")}</option> })
+        .collect_view();
+    view! {
+        <div class="field">
+            <label for="in-eps-pick">"Typical emissivities"<small>"common practice, rounded; a measured value is better"</small></label>
+            <select id="in-eps-pick" class="wide" data-choice="emissivity" on:change=move |ev| {
+                let Ok(i) = event_target_value(&ev).parse::<usize>() else { return };
+                let Some((_, e)) = crate::engine::job::EMISSIVITIES.get(i) else { return };
+                scenario.update(|s| s.emissivity = *e);
+                let u = choice.get_untracked().get(Dim::Ratio);
+                text_of(Field::Emissivity).set(scenario::shown_text(scenario::spec(Field::Emissivity), *e, u));
+            }>
+                <option value="" selected>"Choose a surface, or type ε above"</option>
+                {opts}
+            </select>
+        </div>
+    }
+}
+
+/// How many insulation layers: bare to three.
+pub fn layer_picker(scenario: RwSignal<Scenario>) -> impl IntoView {
+    let buttons = (0..=3usize)
+        .map(|n| {
+            view! {
+                <button type="button" data-layers=n.to_string()
+                    aria-pressed=move || scenario.with(|s| s.layer_count == n).to_string()
+                    on:click=move |_| scenario.update(|s| s.layer_count = n)>
+                    {match n { 0 => "Bare".to_string(), 1 => "1 layer".to_string(), k => format!("{k} layers") }}
+                </button>
+            }
+        })
+        .collect_view();
+    view! {
+        <div class:hidden=move || !scenario.with(|s| s.solved())>
+            <h3 class="sub">"Insulation"</h3>
+            <div class="toggle" role="group" aria-label="Insulation layers">{buttons}</div>
+        </div>
+    }
+}
