@@ -1,27 +1,43 @@
 //! The answer bar: the loss, the surface temperature and one badge per verdict, always in view
 //! (it sticks to the top of the window at every width). A badge takes the person to its card; the
-//! bar's last two buttons go to the inputs and to the results, one tap apart on a phone.
+//! bar's arrow goes to the results or back to the inputs, one tap apart on a phone.
 
 use leptos::prelude::*;
 
 use super::Shown;
 use crate::engine::units::{self, Dim, UnitChoice};
 
-/// The verdicts that earn a badge, in the order a technician asks about them, with short names.
+/// The verdicts that earn a badge, in the order a technician asks about them, with short names
+/// (the card's title is the long one).
 const BADGES: [(&str, &str); 6] = [
     ("touch", "Touch"),
-    ("dew", "Sweating"),
-    ("freeze", "Freezing"),
+    ("dew", "Sweat"),
+    ("freeze", "Freeze"),
     ("flow", "Outlet"),
-    ("loss", "Loss target"),
+    ("loss", "Target"),
     ("cooling", "Cooling"),
 ];
 
-/// Bring the element that `selector` finds into view below the bar.
+/// Bring the element that `selector` finds into view below the bar (the page's scroll padding
+/// keeps it clear of the bar).
 fn go_to(selector: &str) {
     if let Ok(Some(el)) = document().query_selector(selector) {
         el.scroll_into_view();
     }
+}
+
+/// Whether the results' heading is above the middle of the window: the person is reading the
+/// results, so the jump goes back to the inputs.
+fn reading_results() -> bool {
+    let mid = window()
+        .inner_height()
+        .ok()
+        .and_then(|h| h.as_f64())
+        .unwrap_or(0.0)
+        / 2.0;
+    document()
+        .get_element_by_id("results-title")
+        .is_some_and(|e| e.get_bounding_client_rect().top() < mid)
 }
 
 #[component]
@@ -70,6 +86,21 @@ pub fn AnswerBar(
                 .collect::<Vec<_>>()
         })
     };
+    // One jump, inputs to results or back, as the person's place on the page says.
+    let at_results = RwSignal::new(false);
+    let _ = window_event_listener(leptos::ev::scroll, move |_| {
+        let now = reading_results();
+        if now != at_results.get_untracked() {
+            at_results.set(now);
+        }
+    });
+    let jump = move |_| {
+        go_to(if at_results.get_untracked() {
+            "#body-title"
+        } else {
+            "#results-title"
+        })
+    };
     view! {
         <div class="answer-bar" class:stale=stale data-answer-bar role="region" aria-label="Answer">
             <div class="answer-figures">
@@ -80,12 +111,15 @@ pub fn AnswerBar(
                     }.into_any(),
                     None => view! { <p>"—"</p> }.into_any(),
                 }}
-                {move || stale.get().then(|| view! { <p class="answer-stale">"⏸ last good result"</p> })}
+                {move || stale.get().then(|| view! { <p class="answer-stale">"paused: last good result"</p> })}
             </div>
             <div class="answer-badges">
                 {badges}
-                <button type="button" class="badge jump" data-jump="inputs" on:click=move |_| go_to("#body-title")>"↑ Inputs"</button>
-                <button type="button" class="badge jump" data-jump="results" on:click=move |_| go_to("#results-title")>"↓ Results"</button>
+                <button type="button" class="jump" data-jump=move || if at_results.get() { "inputs" } else { "results" }
+                    aria-label=move || if at_results.get() { "Go to the inputs" } else { "Go to the results" }
+                    on:click=jump>
+                    {move || if at_results.get() { "↑" } else { "↓" }}
+                </button>
             </div>
         </div>
     }

@@ -488,12 +488,16 @@ pub fn App() -> impl IntoView {
                 <section aria-labelledby="surface-title">
                     <h2 id="surface-title">"3 · Surface"</h2>
                     {surface_toggle}
-                    {pickers::wall_select(scenario)}
+                    {pickers::wall_select(scenario, choice)}
                     {pickers::inside_select(scenario)}
                     {fields_of(Group::Surface)}
                     {pickers::emissivity_picker(scenario, choice, text_of)}
                     {pickers::layer_picker(scenario)}
                     {fields_of(Group::Layers)}
+                    <details class="fold" data-fold="k-curve" class:hidden=move || !scenario.with(|s| s.solved() && s.layer_count > 0)>
+                        <summary>"A third k point (optional: k curved in temperature)"</summary>
+                        {fields_of(Group::LayerCurve)}
+                    </details>
                 </section>
                 <section aria-labelledby="job-title">
                     <h2 id="job-title">"4 · The job"</h2>
@@ -503,7 +507,7 @@ pub fn App() -> impl IntoView {
             <section class="results" class:stale=stale aria-labelledby="results-title" aria-live="polite">
                 <h2 id="results-title">"Results"</h2>
                 <p class="stale-note" data-stale=move || stale().to_string()>
-                    {move || stale().then_some("⏸ Showing the last good result: fix the marked input to update.")}
+                    {move || stale().then_some("Paused: showing the last good result; fix the marked input to update.")}
                 </p>
                 {move || shown.with(|s| s.error.as_ref().filter(|_| s.error_at.is_none()).map(|e| view! { <p class="error" data-error>"⚠ "{scenario::error_message(e, &choice.get())}</p> }))}
                 <dl class="figures">
@@ -543,8 +547,11 @@ pub fn App() -> impl IntoView {
                         <li class="flag" data-flag=f.method>"⚠ "{f.message()}</li>
                     }).collect_view()))}
                 </ul>
-                {move || shown.with(|s| s.outcome.as_ref().map(|o| results::table(o, &choice.get())))}
-                <p class="rule">{move || scenario.with(|s| format!("How the recommendation is chosen: {}", s.shape.rule()))}</p>
+                <details class="fold" data-fold="correlations">
+                    <summary>"Every correlation side by side, and how the recommendation is chosen"</summary>
+                    {move || shown.with(|s| s.outcome.as_ref().map(|o| results::table(o, &choice.get())))}
+                    <p class="rule">{move || scenario.with(|s| format!("How the recommendation is chosen: {}", s.shape.rule()))}</p>
+                </details>
                 <details class="working">
                     <summary>"How this was worked out"</summary>
                     <ol>
@@ -557,10 +564,13 @@ pub fn App() -> impl IntoView {
             </section>
             {(!view_opts.embed).then(|| view! { <saved::SavedPanel scenario=scenario system=system name=item_name tag=tag place=place choice=choice on_open=open_saved/> })}
             <section class="plots" class:hidden=view_opts.embed aria-labelledby="plots-title">
-                <h2 id="plots-title">"Compare the correlations"</h2>
-                {move || shown.with(|s| s.outcome.as_ref().map(results::nu_re_plot))}
-                {move || shown.with(|s| s.outcome.as_ref().and_then(results::front_plot))}
+                <h2 id="plots-title">"Against thickness and wind"</h2>
                 {move || shown.with(|sh| sh.outcome.as_ref().map(|o| results::sweeps(o, &scenario.get(), &choice.get())))}
+                <details class="fold" data-fold="nu-re">
+                    <summary>"The Nusselt number against Reynolds for every correlation, and around the front of the body"</summary>
+                    {move || shown.with(|s| s.outcome.as_ref().map(results::nu_re_plot))}
+                    {move || shown.with(|s| s.outcome.as_ref().and_then(results::front_plot))}
+                </details>
             </section>
             {move || printing.get().then(|| shown.with(|sh| sh.outcome.as_ref().map(|o| results::report(o, &scenario.get(), &choice.get(), &item_name.get(), &tag.get(), &place.get()))))}
             <footer class="standing">

@@ -8,11 +8,21 @@ use crate::engine::scenario::{self, Field, InsideFilm, Scenario, Shape, WallMate
 use crate::engine::units::{Dim, UnitChoice};
 
 /// The wall's material (or the body's, for a cooling body).
-pub fn wall_select(scenario: RwSignal<Scenario>) -> impl IntoView {
-    let opts = WallMaterial::ALL
-        .into_iter()
-        .map(|m| view! { <option value=m.id() prop:selected=move || scenario.with(|s| s.wall == m)>{m.label()}</option> })
-        .collect_view();
+pub fn wall_select(scenario: RwSignal<Scenario>, choice: RwSignal<UnitChoice>) -> impl IntoView {
+    // Each material with its k in the unit the person reads.
+    let opts = move || {
+        let u = choice.get().get(Dim::ThermalConductivity);
+        WallMaterial::ALL
+            .into_iter()
+            .map(|m| {
+                let text = match m.properties() {
+                    Some((k, _, _)) => format!("{} (k {})", m.label(), crate::engine::units::show(k, u)),
+                    None => m.label().to_string(),
+                };
+                view! { <option value=m.id() prop:selected=move || scenario.with(|s| s.wall == m)>{text}</option> }
+            })
+            .collect_view()
+    };
     view! {
         <div class="field" class:hidden=move || !scenario.with(|s| s.solved() || s.cools())>
             <label for="in-wall">{move || if scenario.with(|s| s.solved()) { "Wall material" } else { "Material of the body" }}<small>"its k near room temperature, from Incropera & DeWitt Table A.1"</small></label>

@@ -12,6 +12,21 @@ fn with_unit(v: f64, d: Dim, c: &UnitChoice) -> String {
     crate::engine::units::show(v, c.get(d))
 }
 
+/// The plots' drawing width in SVG units: narrower on a phone, so that their 11–12 unit text
+/// stays at least 11 px on screen where the plot is about 300 px wide.
+fn plot_width() -> f64 {
+    let w = window()
+        .inner_width()
+        .ok()
+        .and_then(|v| v.as_f64())
+        .unwrap_or(1024.0);
+    if w < 560.0 {
+        320.0
+    } else {
+        480.0
+    }
+}
+
 /// Forced correlations side by side, natural convection and the blend below them.
 pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
     let a = &o.analysis;
@@ -73,7 +88,7 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
     view! {
         <div class="table-wrap" tabindex="0" role="region" aria-label="Correlations side by side (scrolls sideways)">
             <table class="corr" data-table="correlations">
-                <caption>"Every correlation for this shape, each at its own reference temperature"</caption>
+                <caption class="sr-only">"Every correlation for this shape, each at its own reference temperature"</caption>
                 <thead><tr>
                     <th scope="col">"Correlation"</th><th scope="col">"Properties at"</th>
                     <th scope="col">"Re"</th><th scope="col">"Nu"</th><th scope="col">"h"</th><th scope="col">"Range"</th>
@@ -87,7 +102,7 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
 
 /// The Nu–Re plot of every correlation for the shape, operating points marked.
 pub fn nu_re_plot(o: &Outcome) -> impl IntoView {
-    let (w, h) = (480.0, 300.0);
+    let (w, h) = (plot_width(), 300.0);
     let (frame, curves) = chart::nu_re(o.shape, &o.analysis, w, h);
     let (l, r, t, b) = frame.margin;
     let xt = frame
@@ -158,7 +173,11 @@ pub fn front_plot(o: &Outcome) -> Option<AnyView> {
     }
     let film = &o.analysis.film;
     let re = o.analysis.forced[0].groups.re;
-    let (w, h) = (480.0, 220.0);
+    // In still fluid there is no front stagnation flow to draw.
+    if re <= 0.0 {
+        return None;
+    }
+    let (w, h) = (plot_width(), 220.0);
     let (frame, path, sep) = chart::front_profile(re, film.pr, w, h);
     let (l, r, t, b) = frame.margin;
     let (angle, words) = local::separation(re);
@@ -198,7 +217,7 @@ pub fn front_plot(o: &Outcome) -> Option<AnyView> {
                     <text x="6" y="14" class="axis">"Nu_θ"</text>
                 </svg>
                 <figcaption>
-                    {format!("{}: Nu_θ = 1.14·Re^½·Pr^0.4·[1 − (θ/90°)³], valid 0–80°, film properties, Re = {}. Here: {}. ", local::FRONT, format_sig(re, 4), words)}
+                    {format!("{}: Nu_θ = 1.14·Re^½·Pr^0.4·[1 − (θ/90°)³], valid 0–80°, film properties, Re = {}. Here: {}. ", local::FRONT, format_sig(re, 3), words)}
                     {local::REAR_NOTE}
                 </figcaption>
                 {note}
@@ -285,7 +304,7 @@ fn sweep_plot(
     let yv: Vec<f64> = y.values.iter().map(|v| yu.from_si(*v)).collect();
     let tv: Vec<(&str, f64)> = targets.iter().map(|(l, v)| (*l, yu.from_si(*v))).collect();
     let also: Vec<f64> = tv.iter().map(|t| t.1).collect();
-    let (w, h) = (480.0, 240.0);
+    let (w, h) = (plot_width(), 240.0);
     let chart = chart::line_chart(&xv, &yv, &also, w, h);
     let f = &chart.frame;
     let (l, r, t, b) = f.margin;
@@ -392,10 +411,24 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
         );
     }
     let xs: Vec<f64> = o.wind_sweep.iter().map(|p| p.0).collect();
+    // The sweep's span in the speed unit the person reads.
+    let span = {
+        let u = c.get(Dim::Speed);
+        let (lo, hi) = (
+            xs.first().copied().unwrap_or(0.0),
+            xs.last().copied().unwrap_or(0.0),
+        );
+        format!(
+            "{}–{} {}",
+            crate::engine::units::format_value(u.from_si(lo), u),
+            crate::engine::units::format_value(u.from_si(hi), u),
+            u.symbol
+        )
+    };
     out.push(
         sweep_plot(
             "loss-wind",
-            "Heat loss against stream speed, 0–20 m/s.".into(),
+            format!("Heat loss against stream speed, {span}."),
             "stream speed",
             Dim::Speed,
             &xs,
@@ -414,7 +447,7 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
         out.push(
             sweep_plot(
                 "surface-wind",
-                "Surface temperature against stream speed, 0–20 m/s.".into(),
+                format!("Surface temperature against stream speed, {span}."),
                 "stream speed",
                 Dim::Speed,
                 &xs,
@@ -433,7 +466,7 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
         out.push(
             sweep_plot(
                 "h-wind",
-                "Convective coefficient against stream speed, 0–20 m/s.".into(),
+                format!("Convective coefficient against stream speed, {span}."),
                 "stream speed",
                 Dim::Speed,
                 &xs,
@@ -520,10 +553,19 @@ pub fn report(
         .as_string()
         .unwrap_or_default();
     let date = date.get(..16).unwrap_or(&date).replace('T', " ");
+    // The inputs the item uses; a third k point left at 0 (none) is not one of them.
+    use crate::engine::scenario::Group;
+    let curved = FIELDS.iter().any(|sp| {
+        sp.group == Group::LayerCurve
+            && sp.dim != Dim::Temperature
+            && s.uses(sp.field)
+            && s.get(sp.field) > 0.0
+    });
     let inputs = FIELDS
         .iter()
         .filter(|sp| s.uses(sp.field))
-        .map(|sp| view! { <tr><th scope="row">{sp.label}</th><td>{with_unit(s.get(sp.field), sp.dim, c)}</td></tr> })
+        .filter(|sp| sp.group != Group::LayerCurve || (curved && (sp.dim == Dim::Temperature || s.get(sp.field) > 0.0)))
+        .map(|sp| view! { <div><dt>{sp.label}</dt><dd>{with_unit(s.get(sp.field), sp.dim, c)}</dd></div> })
         .collect_view();
     let mut figures = vec![
         (
@@ -559,7 +601,7 @@ pub fn report(
     }
     let figures = figures
         .into_iter()
-        .map(|(k, v)| view! { <tr><th scope="row">{k}</th><td>{v}</td></tr> })
+        .map(|(k, v)| view! { <div><dt>{k}</dt><dd>{v}</dd></div> })
         .collect_view();
     let flags = o
         .flags
@@ -581,7 +623,7 @@ pub fn report(
     let steps = o
         .working
         .iter()
-        .filter(|st| !st.title.starts_with("Properties at") && st.title != "Why this correlation")
+        .filter(|st| st.is_key())
         .map(|st| view! { <li><strong>{st.title}</strong>": "{st.text.clone()}</li> })
         .collect_view();
     let sources = o
@@ -608,11 +650,11 @@ pub fn report(
             <h1>{if name.trim().is_empty() { "Leeward report".to_string() } else { format!("Leeward report: {}", name.trim()) }}</h1>
             <p class="meta">{format!("{date} UTC · item {} · {}", if tag.is_empty() { "—" } else { tag }, if place.is_empty() { "location not given" } else { place })}</p>
             <p class="meta">{format!("{}, {} in {}; recommended {} ({}).", o.shape.label(), o.analysis.mode(), o.fluid, o.method, o.regime)}</p>
-            <div class="cols">
-                <table><caption>"Inputs"</caption><tbody>{inputs}</tbody></table>
-                <table><caption>"Results"</caption><tbody>{figures}</tbody></table>
-            </div>
-            <h2>"Range notes"</h2><ul>{flags}</ul>
+            <h2>"Results"</h2><dl class="kv results">{figures}</dl>
+            <h2>"Inputs used"</h2><dl class="kv">{inputs}</dl>
+            <h2>"Range notes"</h2>
+            {if o.flags.is_empty() { Some(view! { <p class="meta">"None: every method used is inside its published range here."</p> }) } else { None }}
+            <ul>{flags}</ul>
             <h2>"Verdicts"</h2><ul>{verdicts}</ul>
             <h2>"Working (summary)"</h2><ol>{steps}</ol>
             <p class="meta">{format!("Property sources: {sources}. Correlations of this kind are good to about ±20–25 % (common practice).")}</p>
@@ -650,11 +692,11 @@ pub fn property_table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
             view! {
                 <tr data-prop-row=r.role>
                     <th scope="row">{r.role}<br/>{cell(p.t, Dim::Temperature)}</th>
-                    <td>{cell(p.rho, Dim::Density)}</td>
-                    <td>{cell(p.mu, Dim::DynamicViscosity)}</td>
-                    <td>{cell(p.k, Dim::ThermalConductivity)}</td>
-                    <td>{cell(p.cp, Dim::SpecificHeat)}</td>
-                    <td>{format_sig(p.pr, 4)}</td>
+                    <td data-label="ρ">{cell(p.rho, Dim::Density)}</td>
+                    <td data-label="μ">{cell(p.mu, Dim::DynamicViscosity)}</td>
+                    <td data-label="k">{cell(p.k, Dim::ThermalConductivity)}</td>
+                    <td data-label="cp">{cell(p.cp, Dim::SpecificHeat)}</td>
+                    <td data-label="Pr">{format_sig(p.pr, 3)}</td>
                 </tr>
             }
         })

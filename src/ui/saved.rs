@@ -429,18 +429,24 @@ pub fn SavedPanel(
                     }
                 };
                 let sub = [it.tag.as_str(), it.location.as_str()].iter().filter(|x| !x.is_empty()).cloned().collect::<Vec<_>>().join(" · ");
+                // One tap on the name opens the item; the other actions wait in a menu.
                 view! {
                     <tr data-saved=label.clone()>
-                        <th scope="row">{label.clone()}<small>{sub}</small></th>
-                        <td data-item-loss>{figs.0}</td>
-                        <td>{figs.1}</td>
-                        <td>{figs.2}</td>
-                        <td class="saved-actions">
-                            <button type="button" on:click=open>"Open"</button>
-                            <button type="button" on:click=update title="Store the inputs shown in this item">"Update"</button>
-                            <button type="button" on:click=rename title="Rename to the name typed above">"Rename"</button>
-                            <button type="button" on:click=dup>"Duplicate"</button>
-                            <button type="button" on:click=delete>"Delete"</button>
+                        <th scope="row"><button type="button" class="item-open" data-open on:click=open title="Open this item">{label.clone()}</button><small>{sub}</small></th>
+                        <td data-item-loss data-label="Heat loss">{figs.0}</td>
+                        <td data-label="Surface">{figs.1}</td>
+                        <td data-label="Range">{figs.2}</td>
+                        <td class="item-menu">
+                            <details class="menu">
+                                <summary aria-label=format!("Actions for {label}")>"Actions"</summary>
+                                <div class="saved-actions">
+                                    <button type="button" on:click=open>"Open"</button>
+                                    <button type="button" on:click=update title="Store the inputs shown in this item">"Update"</button>
+                                    <button type="button" on:click=rename title="Rename to the name typed above">"Rename"</button>
+                                    <button type="button" on:click=dup>"Duplicate"</button>
+                                    <button type="button" on:click=delete>"Delete"</button>
+                                </div>
+                            </details>
                         </td>
                     </tr>
                 }

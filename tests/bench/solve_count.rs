@@ -8,6 +8,7 @@
 //!     callgrind_annotate /tmp/cg.out | head -40
 //!
 //! The argument picks the work (`solve`, `inverse`, `demo`: the demo scenario's whole evaluation,
+//! `insulated`: an insulated line's whole evaluation with every limit card's thickness search,
 //! `water`: every cylinder correlation in water, `air` and `sphere`: every cylinder or sphere
 //! correlation in air) and the count.
 
@@ -16,6 +17,9 @@ mod field_job;
 
 use leeward::engine::heatloss;
 use std::hint::black_box;
+
+/// An insulated DN 50 steam line in a winter wind with a loss target and a freezing time.
+const INSULATED: &str = "v=1&s=cyl&ax=h&w=h&f=humid&pm=p&hm=rh&sm=x&nl=1&wm=cs&D=0.0603&L=12&U=8&Ta=263.15&Tr=263.15&p=101325&rh=0.8&Tp=423.15&t1=0.03&ka1=0.04&kb1=0.06&Tka=283.15&Tkb=373.15&qt=40&tft=28800&u=si";
 
 fn main() {
     let mut args = std::env::args().skip(1);
@@ -49,6 +53,13 @@ fn main() {
                     &leeward::engine::scenario::DEMO,
                 ))
                 .expect("the demo evaluates");
+                sum += o.q_total;
+            }
+            "insulated" => {
+                // A line with a touch limit, a loss target and a freezing time: every limit card
+                // searches for the thickness that meets it.
+                let (s, _) = leeward::engine::scenario::from_fragment(INSULATED).expect("reads");
+                let o = leeward::engine::scenario::evaluate(black_box(&s)).expect("evaluates");
                 sum += o.q_total;
             }
             "inverse" => {

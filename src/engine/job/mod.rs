@@ -40,10 +40,10 @@ impl WallMaterial {
     }
     pub fn label(&self) -> &'static str {
         match self {
-            WallMaterial::CarbonSteel => "Carbon steel (k 60.5)",
-            WallMaterial::Stainless => "Stainless steel, AISI 304 (k 14.9)",
-            WallMaterial::Copper => "Copper (k 401)",
-            WallMaterial::Aluminium => "Aluminium (k 237)",
+            WallMaterial::CarbonSteel => "Carbon steel",
+            WallMaterial::Stainless => "Stainless steel, AISI 304",
+            WallMaterial::Copper => "Copper",
+            WallMaterial::Aluminium => "Aluminium",
             WallMaterial::User => "Other: type its conductivity",
         }
     }
@@ -217,9 +217,17 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
         };
         let mut thickness = None;
         if insulated_layers > 0 && job.process_temp > t.touch_limit {
-            match heatloss::thickness_for(job, 0.5, t.touch_limit, |s| s.t_surface)? {
-                Some((th, _)) => thickness = Some(th),
-                None => summary
+            match heatloss::thickness_search(job, 0.5, t.touch_limit, |s| s.t_surface)? {
+                Some(heatloss::Search {
+                    found: Some((th, _)),
+                    ..
+                }) => thickness = Some(th),
+                // The layers inside the outer one meet it on their own.
+                Some(heatloss::Search { at_zero, .. }) if at_zero <= t.touch_limit => summary
+                    .push_str(
+                        " The layers inside the outer one keep it below the limit on their own.",
+                    ),
+                _ => summary
                     .push_str(" No outer-layer thickness up to 0.5 m brings it to the limit."),
             }
         } else if hot {
@@ -232,7 +240,9 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
             summary,
             figures,
             thickness,
-            caution: Some(TOUCH_CAUTION),
+            // The burn caution where the surface can burn; a cool jacket over a hot line only
+            // needs its thickness.
+            caution: hot.then_some(TOUCH_CAUTION),
         });
     }
     // Condensation (cold side).
@@ -252,9 +262,15 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
             };
             let mut thickness = None;
             if insulated_layers > 0 && job.process_temp < need {
-                match heatloss::thickness_for(job, 0.5, need, |s| s.t_surface)? {
-                    Some((th, _)) => thickness = Some(th),
-                    None => summary.push_str(
+                match heatloss::thickness_search(job, 0.5, need, |s| s.t_surface)? {
+                    Some(heatloss::Search {
+                        found: Some((th, _)),
+                        ..
+                    }) => thickness = Some(th),
+                    Some(heatloss::Search { at_zero, .. }) if at_zero >= need => summary.push_str(
+                        " The layers inside the outer one keep the surface above it on their own.",
+                    ),
+                    _ => summary.push_str(
                         " No outer-layer thickness up to 0.5 m keeps the surface above it.",
                     ),
                 }
@@ -318,10 +334,12 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
                     let (a, b) = times(s);
                     a + b
                 };
-                match heatloss::thickness_for(job, 0.5, t.freeze_target, total)? {
-                    Some((th, _)) => thickness = Some(th),
-                    None if !holds => summary.push_str(" No outer-layer thickness up to 0.5 m holds out that long: insulation only slows freezing, it cannot stop it. Heat tracing, a flow kept moving, or draining the line is the usual remedy (common practice)."),
-                    None => {}
+                match heatloss::thickness_search(job, 0.5, t.freeze_target, total)? {
+                    Some(heatloss::Search { found: Some((th, _)), .. }) => thickness = Some(th),
+                    Some(heatloss::Search { at_zero, .. }) if at_zero >= t.freeze_target => summary
+                        .push_str(" The layers inside the outer one hold out that long on their own."),
+                    _ if !holds => summary.push_str(" No outer-layer thickness up to 0.5 m holds out that long: insulation only slows freezing, it cannot stop it. Heat tracing, a flow kept moving, or draining the line is the usual remedy (common practice)."),
+                    _ => {}
                 }
             }
         }

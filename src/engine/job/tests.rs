@@ -245,3 +245,17 @@ fn flow_outlet_lies_between_inlet_and_air() {
     assert_eq!(f.figures[2].0, "rise");
     assert!(f.figures[2].1 > 0.0);
 }
+
+/// Two layers where the inner one alone keeps the surface below the touch limit: the card says
+/// so, and does not claim that no thickness brings it to the limit.
+#[test]
+fn inner_layers_that_meet_the_limit_alone_are_named() {
+    let mut j = job(0.12, 0.9);
+    let mut outer = j.construction.layers[1].clone();
+    outer.thickness = 0.02;
+    j.construction.layers.push(outer);
+    let r = evaluate(&j, &targets(), 2).unwrap();
+    let card = r.verdicts.iter().find(|v| v.id == "touch").unwrap();
+    assert!(card.ok && card.thickness.is_none(), "{card:?}");
+    assert!(card.summary.contains("on their own"), "{}", card.summary);
+}

@@ -10,6 +10,23 @@ pub struct Step {
     pub text: String,
 }
 
+/// The steps a one-page report keeps: the balance, the convection and radiation parts and the
+/// heat flow (the page shows every step).
+const KEY_STEPS: [&str; 5] = [
+    "Inside film (flow through the bore)",
+    "Surface temperature (energy balance)",
+    "Forced convection (recommended correlation)",
+    "Radiation",
+    "Heat flow",
+];
+
+impl Step {
+    /// Whether the report keeps this step.
+    pub fn is_key(&self) -> bool {
+        KEY_STEPS.contains(&self.title)
+    }
+}
+
 /// The properties used at one temperature, and why that temperature.
 #[derive(Debug, Clone, PartialEq)]
 pub struct PropertyRow {
@@ -366,13 +383,16 @@ pub fn cautions(s: &Scenario, o: &Outcome) -> Vec<&'static str> {
     if ts >= s.touch_limit {
         out.push("Hot surface: at this temperature bare skin can be burned on contact. Guard or insulate it and follow the personnel-protection rules of your local codes; verify with a contact thermometer before touching.");
     }
+    // Moisture leaves the stream only on a surface at or below its dew point (the frost point
+    // below 0 °C): as dew above freezing, as frost below. A surface merely below 0 °C but above
+    // the frost point stays dry; a line's water freezing inside is the freezing card's own
+    // caution (still water in frost only), never said of a hot or flowing line here.
     if o.dew_point.is_some_and(|td| ts <= td) {
-        out.push("The surface is at or below the stream's dew point: moisture will condense on it. Condensate wets insulation and corrodes steel; a vapour-tight design is a matter for a qualified designer and local codes.");
-    }
-    // Frost needs moisture in the stream; a line's water freezing inside is the freezing card's
-    // own caution (still water in frost only), never said of a hot or flowing line here.
-    if ts < 273.15 && matches!(s.fluid, FluidKind::HumidAir) {
-        out.push("The surface is below freezing: frost or ice can form on it and make it slippery or heavy. Follow local codes and licensed practice.");
+        if ts < 273.15 {
+            out.push("The surface is at or below the stream's frost point: frost or ice will form on it and make it slippery or heavy, and melt water wets insulation. Follow local codes and licensed practice.");
+        } else {
+            out.push("The surface is at or below the stream's dew point: moisture will condense on it. Condensate wets insulation and corrodes steel; a vapour-tight design is a matter for a qualified designer and local codes.");
+        }
     }
     out
 }

@@ -62,6 +62,8 @@ pub enum Group {
     Stream,
     Surface,
     Layers,
+    /// The optional third point of the layers' k(T): folded on the page.
+    LayerCurve,
     Job,
 }
 
@@ -245,14 +247,14 @@ pub const FIELDS: [FieldSpec; 47] = [
     f(Field::Layer3Kb, Group::Layers, "kb3", "Layer 3 k at mean temperature B", Dim::LayerConductivity, (0.0, true, 100.0), "the same as at A for a constant k", at!(layer_kb[2]), layer_3),
     f(Field::KTempA, Group::Layers, "Tka", "Mean temperature A", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's first k", at!(k_temp_a), layer_1),
     f(Field::KTempB, Group::Layers, "Tkb", "Mean temperature B", Dim::Temperature, (0.0, true, 3000.0), "of its second k", at!(k_temp_b), layer_1),
-    f(Field::Layer1Kc, Group::Layers, "kc1", "Layer 1 k at mean temperature C", Dim::LayerConductivity, (0.0, false, 100.0), "optional third point (0: k is linear through A and B)", at!(layer_kc[0]), layer_1),
-    f(Field::Layer2Kc, Group::Layers, "kc2", "Layer 2 k at mean temperature C", Dim::LayerConductivity, (0.0, false, 100.0), "optional third point (0: linear)", at!(layer_kc[1]), layer_2),
-    f(Field::Layer3Kc, Group::Layers, "kc3", "Layer 3 k at mean temperature C", Dim::LayerConductivity, (0.0, false, 100.0), "optional third point (0: linear)", at!(layer_kc[2]), layer_3),
-    f(Field::KTempC, Group::Layers, "Tkc", "Mean temperature C", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's third k, if given", at!(k_temp_c), layer_1),
+    f(Field::Layer1Kc, Group::LayerCurve, "kc1", "Layer 1 k at mean temperature C", Dim::LayerConductivity, (0.0, false, 100.0), "optional third point (0: k is linear through A and B)", at!(layer_kc[0]), layer_1),
+    f(Field::Layer2Kc, Group::LayerCurve, "kc2", "Layer 2 k at mean temperature C", Dim::LayerConductivity, (0.0, false, 100.0), "optional third point (0: linear)", at!(layer_kc[1]), layer_2),
+    f(Field::Layer3Kc, Group::LayerCurve, "kc3", "Layer 3 k at mean temperature C", Dim::LayerConductivity, (0.0, false, 100.0), "optional third point (0: linear)", at!(layer_kc[2]), layer_3),
+    f(Field::KTempC, Group::LayerCurve, "Tkc", "Mean temperature C", Dim::Temperature, (0.0, true, 3000.0), "of the data sheet's third k, if given", at!(k_temp_c), layer_1),
     f(Field::TouchLimit, Group::Job, "Tl", "Touch limit", Dim::Temperature, (0.0, true, 3000.0), "{T:333.15} is common practice; local codes govern", at!(touch_limit), always),
     f(Field::DewMargin, Group::Job, "dm", "Margin above the dew point", Dim::TemperatureDifference, (0.0, false, 50.0), "for cold surfaces in humid air", at!(dew_margin), always),
     f(Field::LossTarget, Group::Job, "qt", "Loss target", Dim::HeatFlowPerLength, (0.0, false, 1e6), "highest loss per length wanted; 0 for none", at!(loss_target), offers_film),
-    f(Field::FreezeTarget, Group::Job, "tft", "Hold out against freezing for", Dim::Duration, (0.0, false, 3.6e7), "still water in frost; 0 for none", at!(freeze_target), still_water),
+    f(Field::FreezeTarget, Group::Job, "tft", "Hold out against freezing for", Dim::Duration, (0.0, false, 3.6e7), "still water in frost; 0: no time set (the card warns wherever still water can freeze)", at!(freeze_target), still_water),
     f(Field::MassFlow, Group::Job, "mf", "Flow through the pipe", Dim::MassFlow, (0.0, false, 1e4), "0 for still water (then the freezing times)", at!(mass_flow), offers_film),
     f(Field::ProcessCp, Group::Job, "cpp", "Heat capacity of the process fluid", Dim::SpecificHeat, (0.0, true, 1e6), "about {cp:4180} for water", at!(process_cp), process_cp_typed),
     f(Field::Hours, Group::Job, "hy", "Operating hours", Dim::HoursPerYear, (0.0, false, 8784.0), "per year", at!(hours), always),
@@ -297,7 +299,11 @@ pub fn help_text(spec: &FieldSpec, c: &units::UnitChoice) -> String {
                 "cp" => Dim::SpecificHeat,
                 _ => return None,
             };
-            v.parse::<f64>().ok().map(|v| units::show(v, c.get(dim)))
+            // Written as a person would type it ("60 °C", not "60.0 °C").
+            let u = c.get(dim);
+            v.parse::<f64>()
+                .ok()
+                .map(|v| format!("{} {}", units::format_value(u.from_si(v), u), u.symbol))
         });
         out.push_str(&value.unwrap_or_else(|| rest[i..=i + j].to_string()));
         rest = &rest[i + j + 1..];

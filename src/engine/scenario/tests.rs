@@ -274,8 +274,10 @@ fn cautions_follow_the_surface_temperature() {
     let mut cold = DEMO;
     cold.surface_temp = 263.15;
     let o = evaluate(&cold).unwrap();
-    // Below the dew point and below freezing; not hot.
-    assert_eq!(cautions(&cold, &o).len(), 2);
+    // Below the frost point (below freezing): one caution, of frost; not hot.
+    let c = cautions(&cold, &o);
+    assert_eq!(c.len(), 1, "{c:?}");
+    assert!(c[0].contains("frost point"), "{c:?}");
     let mut mild = DEMO;
     mild.surface_temp = 300.0;
     assert!(cautions(&mild, &evaluate(&mild).unwrap()).is_empty());
@@ -547,7 +549,19 @@ fn cautions_apply_only_where_they_should() {
         o.verdicts.iter().all(|v| v.id != "freeze"),
         "no freezing card with flow"
     );
-    // A surface below 0 °C in humid air: frost, in dry air: nothing about frost.
+    // A hot line's jacket below 0 °C but above the air's frost point stays dry: no frost.
+    let mut jacket = hot;
+    jacket.layer_count = 3;
+    jacket.fluid = FluidKind::HumidAir;
+    let o = evaluate(&jacket).unwrap();
+    let td = o.dew_point.unwrap();
+    assert!(
+        o.surface_temp < 273.15 && o.surface_temp > td,
+        "{} {td}",
+        o.surface_temp
+    );
+    assert!(!cautions(&jacket, &o).iter().any(|c| c.contains("frost")));
+    // A surface below the frost point in humid air: frost, in dry air: nothing about frost.
     let mut cold = DEMO;
     cold.fluid_temp = 263.15;
     cold.t_surround = 263.15;
@@ -586,4 +600,21 @@ fn help_texts_are_in_the_units_chosen() {
             f.key
         );
     }
+}
+
+/// Every step the report keeps is a step the working writes (a renamed step would silently drop
+/// out of the report): a solved job with a flow writes all five.
+#[test]
+fn the_reports_key_steps_are_written() {
+    let mut s = DEMO;
+    s.surface_mode = SurfaceMode::Solved;
+    s.inside = InsideFilm::Water;
+    s.mass_flow = 1.0;
+    let o = evaluate(&s).unwrap();
+    assert_eq!(
+        o.working.iter().filter(|st| st.is_key()).count(),
+        5,
+        "{:?}",
+        o.working.iter().map(|s| s.title).collect::<Vec<_>>()
+    );
 }

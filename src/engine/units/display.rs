@@ -150,14 +150,32 @@ pub fn fitting_duration(seconds: f64) -> &'static Unit {
 }
 
 /// A result in SI, in the chosen unit (a time span in the unit that fits it), at the display
-/// resolution: the number and the unit's symbol.
+/// resolution: the number and the unit's symbol. A quantity shown to a fixed step keeps its
+/// last decimal in a result ("−7.0 °C" beside "149.4 °C"); a typed text drops it ("20").
 pub fn shown(si: f64, u: &'static Unit) -> (String, &'static str) {
     let u = if u.dim == Dim::Duration {
         fitting_duration(si)
     } else {
         u
     };
-    (format_value(u.from_si(si), u), u.symbol)
+    let v = u.from_si(si);
+    let r = resolution(u);
+    let text = match (r.sig, r.decimals) {
+        (None, Some(d)) if v.is_finite() && d > 0 => {
+            let t = format!("{:.*}", d as usize, v);
+            // "-0.0" is zero.
+            if t.trim_start_matches('-')
+                .chars()
+                .all(|c| c == '0' || c == '.')
+            {
+                t.trim_start_matches('-').to_string()
+            } else {
+                t
+            }
+        }
+        _ => format_value(v, u),
+    };
+    (text, u.symbol)
 }
 
 /// [`shown`] as one text, "149.4 °C".
@@ -243,5 +261,10 @@ mod tests {
         assert_eq!(show(5.5 * 3600.0, h), "5.5 h");
         assert_eq!(show(3.0 * 86400.0, h), "3 d");
         assert_eq!(show(f64::NAN, h), "—");
+        // A result to a fixed step keeps its decimal; a zero carries no sign.
+        let c = unit("C").unwrap();
+        assert_eq!(show(266.15, c), "-7.0 °C");
+        assert_eq!(show(273.15 - 0.00698, c), "0.0 °C");
+        assert_eq!(format_value(-7.0, c), "-7");
     }
 }

@@ -17,12 +17,7 @@ fn every_kind_of_bad_input_gets_a_message_and_loses_nothing() {
         js(&c, "localStorage.clear(); return true;").await;
         c.refresh().await.unwrap();
         wait_rendered(&c).await;
-        c.find(Locator::Css("[data-action=save]"))
-            .await
-            .unwrap()
-            .click()
-            .await
-            .unwrap();
+        tap(&c, "[data-action=save]").await;
         let stored = js(&c, "return localStorage.getItem('leeward.saved');").await;
         let mut classes = 0;
 
@@ -75,27 +70,13 @@ fn every_kind_of_bad_input_gets_a_message_and_loses_nothing() {
         classes += 1;
         type_into(&c, "xg", "30").await;
         pick(&c, "#in-fluid", "humid").await;
-        c.find(Locator::Css(
-            "[data-toggle=surface-mode] button:nth-child(2)",
-        ))
-        .await
-        .unwrap()
-        .click()
-        .await
-        .unwrap();
+        tap(&c, "[data-toggle=surface-mode] button:nth-child(2)").await;
         paste_into(&c, "tw", "40").await;
         assert!(text_of(&c, "[data-msg-for=tw]").await.contains("thick"));
         assert_no_nan_shown(&c).await;
         classes += 1;
         type_into(&c, "tw", "3.91").await;
-        c.find(Locator::Css(
-            "[data-toggle=surface-mode] button:nth-child(1)",
-        ))
-        .await
-        .unwrap()
-        .click()
-        .await
-        .unwrap();
+        tap(&c, "[data-toggle=surface-mode] button:nth-child(1)").await;
 
         // 3. Links.
         let root = base.split('#').next().unwrap().to_string();
@@ -195,14 +176,7 @@ fn every_kind_of_bad_input_gets_a_message_and_loses_nothing() {
         )
         .await;
         if rows.as_array().unwrap().len() > 1 {
-            c.find(Locator::Css(
-                "[data-saved='x'] .saved-actions button:nth-child(5)",
-            ))
-            .await
-            .unwrap()
-            .click()
-            .await
-            .unwrap();
+            tap(&c, "[data-saved='x'] .saved-actions button:nth-child(5)").await;
         }
 
         // 5. Corrupt storage (restored afterwards).

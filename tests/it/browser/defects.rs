@@ -149,12 +149,7 @@ fn defect_1_storage_near_its_quota_loses_nothing() {
         js(&c, "localStorage.clear(); return true;").await;
         c.refresh().await.unwrap();
         wait_rendered(&c).await;
-        c.find(Locator::Css("[data-action=save]"))
-            .await
-            .unwrap()
-            .click()
-            .await
-            .unwrap();
+        tap(&c, "[data-action=save]").await;
         wait_for(
             &c,
             "document.querySelectorAll('[data-saved]').length === 1",
@@ -165,12 +160,7 @@ fn defect_1_storage_near_its_quota_loses_nothing() {
         let stored = js(&c, "return localStorage.getItem('leeward.saved');").await;
         // Fill the rest of the quota with another key, as another page of the origin might.
         js(&c, "let n = 1 << 22, i = 0; while (n >= 1) { try { localStorage.setItem('f' + i++, 'x'.repeat(n)); } catch (e) { n >>= 1; } } return true;").await;
-        c.find(Locator::Css("[data-action=save]"))
-            .await
-            .unwrap()
-            .click()
-            .await
-            .unwrap();
+        tap(&c, "[data-action=save]").await;
         let note = text_of(&c, "[data-saved-note]").await;
         assert!(note.contains("Not saved"), "{note}");
         assert_eq!(
@@ -213,12 +203,7 @@ fn defect_1_storage_near_its_quota_loses_nothing() {
                 .await
                     == json!(true)
             );
-            c.find(Locator::Css("[data-action=save]"))
-                .await
-                .unwrap()
-                .click()
-                .await
-                .unwrap();
+            tap(&c, "[data-action=save]").await;
             assert!(text_of(&c, "[data-saved-note]").await.contains("Not saved"));
             assert_eq!(
                 js(&c, "return localStorage.getItem('leeward.saved');").await,
@@ -331,12 +316,7 @@ fn defect_11_the_first_result_does_not_wait_for_the_survey() {
 }
 
 async fn click(c: &Client, css: &str) {
-    c.find(Locator::Css(css))
-        .await
-        .unwrap()
-        .click()
-        .await
-        .unwrap();
+    tap(c, css).await;
 }
 
 async fn names(c: &Client) -> Vec<String> {

@@ -152,9 +152,30 @@ async fn si(c: &Client, quantity: &str) -> f64 {
         .unwrap_or_else(|_| panic!("{quantity}: data-si = {v}"))
 }
 
+/// Tap an element as a person would: brought to the middle of the window first (a person scrolls
+/// it clear of the answer bar stuck to the top; WebDriver would click it where it lies, under the
+/// bar), then a real click.
+async fn tap(c: &Client, css: &str) {
+    let el = c.find(Locator::Css(css)).await.unwrap();
+    c.execute(
+        // A button in a closed menu: the menu is opened first, as a person taps it open.
+        "const d = arguments[0].closest('details'); if (d && !d.open) d.open = true; arguments[0].scrollIntoView({block: 'center'}); return true;",
+        vec![serde_json::to_value(&el).unwrap()],
+    )
+    .await
+    .unwrap();
+    el.click().await.unwrap();
+}
+
 /// Replace a field's text as a user would: clear it, then type key by key.
 async fn type_into(c: &Client, key: &str, text: &str) {
     let el = c.find(Locator::Css(&format!("#in-{key}"))).await.unwrap();
+    c.execute(
+        "arguments[0].scrollIntoView({block: 'center'}); return true;",
+        vec![serde_json::to_value(&el).unwrap()],
+    )
+    .await
+    .unwrap();
     el.clear().await.unwrap();
     el.send_keys(text).await.unwrap();
 }
@@ -246,5 +267,6 @@ fn run(f: impl std::future::Future<Output = ()>) {
 
 mod bad_input;
 mod defects;
+mod field;
 mod forms;
 mod saved;

@@ -92,14 +92,7 @@ fn saved_work_survives_travels_and_prints() {
         wait_rendered(&c).await;
         let click = |css: &'static str| {
             let c = c.clone();
-            async move {
-                c.find(Locator::Css(css))
-                    .await
-                    .unwrap()
-                    .click()
-                    .await
-                    .unwrap()
-            }
+            async move { tap(&c, css).await }
         };
         // Save two, reload: both still there.
         click("[data-action=save]").await;
@@ -222,7 +215,10 @@ fn saved_work_survives_travels_and_prints() {
         let tank = leeward::engine::survey::evaluate_item(&DEMO).unwrap();
         let shown = text_of(&c, "[data-saved=\"Tank T-4\"] [data-item-loss]").await;
         assert!(
-            shown.contains(&leeward::engine::units::format_sig(tank.q_total, 4)),
+            shown.contains(&leeward::engine::units::show(
+                tank.q_total,
+                leeward::engine::units::unit("W").unwrap()
+            )),
             "{shown}"
         );
 
@@ -285,6 +281,19 @@ fn saved_work_survives_travels_and_prints() {
 
         // The report: one page on A4 and on US Letter.
         use fantoccini::wd::{PrintConfiguration, PrintSize};
+        // The longest report: a three-layer job on a cold night, with long names, in US units.
+        c.goto("about:blank").await.unwrap();
+        c.goto(&format!("{base}#v=1&s=cyl&ax=h&w=h&f=humid&pm=p&hm=rh&sm=x&nl=3&wm=cs&D=0.1683&L=40&U=6&Ta=258.15&Tr=258.15&p=101325&rh=0.8&Tp=453.15&t1=0.05&t2=0.04&t3=0.03&qt=60&tft=28800&u=us"))
+            .await
+            .unwrap();
+        wait_rendered(&c).await;
+        for (key, text) in [
+            ("save-name", "Boiler house to tank farm, north rack, steam supply header after the pressure-reducing station"),
+            ("save-tag", "LP-STM-0042-N-RACK-SECTION-B"),
+            ("save-place", "North pipe rack, between column lines C7 and C12, elevation 6 m above grade"),
+        ] {
+            type_into(&c, key, text).await;
+        }
         // The page builds its report on the browser's beforeprint event (WebDriver's print does
         // not send one, so the test does).
         js(
@@ -303,6 +312,12 @@ fn saved_work_survives_travels_and_prints() {
             assert!(t0.elapsed() < Duration::from_secs(5), "no report built");
             tokio::time::sleep(Duration::from_millis(20)).await;
         }
+        // What it says (read before printing: the print may end with afterprint, which takes
+        // the report away).
+        let report = text_of(&c, "[data-report]").await;
+        for want in ["Boiler house to tank farm", "LP-STM-0042", "needs ≥", "°F"] {
+            assert!(report.contains(want), "the report lacks “{want}”: {report}");
+        }
         for size in [PrintSize::A4, PrintSize::US_LETTER] {
             let pdf = c
                 .print(PrintConfiguration::builder().size(size).build().unwrap())
@@ -310,6 +325,7 @@ fn saved_work_survives_travels_and_prints() {
                 .unwrap();
             assert_eq!(pdf_pages(&pdf), 1, "the report is not one page");
         }
+
         js(&c, "localStorage.clear(); return true;").await;
 
         // The embed view for a wiki page: no header, no plots, inputs locked, same numbers; the
