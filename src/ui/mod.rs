@@ -31,6 +31,14 @@ pub(crate) struct Shown {
     error_at: Option<Field>,
 }
 
+/// Whether the `<details>` a toggle event came from is now open.
+fn is_open(ev: &leptos::ev::Event) -> bool {
+    use wasm_bindgen::JsCast;
+    ev.target()
+        .and_then(|t| t.dyn_into::<web_sys::HtmlDetailsElement>().ok())
+        .is_some_and(|d| d.open())
+}
+
 #[component]
 pub fn App() -> impl IntoView {
     let (start, start_system, link_message) = initial();
@@ -396,6 +404,11 @@ pub fn App() -> impl IntoView {
         })
     };
 
+    // Folded views are built only while open: a keystroke does not redraw what nobody sees.
+    let open_working = RwSignal::new(false);
+    let open_table = RwSignal::new(false);
+    let open_plots = RwSignal::new(false);
+
     // The report is built only for printing (it is a large view): the browser's beforeprint and
     // afterprint events, or the panel's print button, switch it on and off.
     let printing = RwSignal::new(false);
@@ -547,29 +560,35 @@ pub fn App() -> impl IntoView {
                         <li class="flag" data-flag=f.method>"⚠ "{f.message()}</li>
                     }).collect_view()))}
                 </ul>
-                <details class="fold" data-fold="correlations">
+                <details class="fold" data-fold="correlations" on:toggle=move |ev| open_table.set(is_open(&ev))>
                     <summary>"Every correlation side by side, and how the recommendation is chosen"</summary>
-                    {move || shown.with(|s| s.outcome.as_ref().map(|o| results::table(o, &choice.get())))}
-                    <p class="rule">{move || scenario.with(|s| format!("How the recommendation is chosen: {}", s.shape.rule()))}</p>
+                    {move || open_table.get().then(|| view! {
+                        {move || shown.with(|s| s.outcome.as_ref().map(|o| results::table(o, &choice.get())))}
+                        <p class="rule">{move || scenario.with(|s| format!("How the recommendation is chosen: {}", s.shape.rule()))}</p>
+                    })}
                 </details>
-                <details class="working">
+                <details class="working" on:toggle=move |ev| open_working.set(is_open(&ev))>
                     <summary>"How this was worked out"</summary>
-                    <ol>
-                        {move || shown.with(|s| s.outcome.as_ref().map(|o| o.working.iter().map(|st| view! {
-                            <li><strong>{st.title}</strong><br/>{st.text.clone()}</li>
-                        }).collect_view()))}
-                    </ol>
-                    {move || shown.with(|s| s.outcome.as_ref().map(|o| results::property_table(o, &choice.get())))}
+                    {move || open_working.get().then(|| view! {
+                        <ol>
+                            {move || shown.with(|s| s.outcome.as_ref().map(|o| o.working.iter().map(|st| view! {
+                                <li><strong>{st.title}</strong><br/>{st.text.clone()}</li>
+                            }).collect_view()))}
+                        </ol>
+                        {move || shown.with(|s| s.outcome.as_ref().map(|o| results::property_table(o, &choice.get())))}
+                    })}
                 </details>
             </section>
             {(!view_opts.embed).then(|| view! { <saved::SavedPanel scenario=scenario system=system name=item_name tag=tag place=place choice=choice on_open=open_saved/> })}
             <section class="plots" class:hidden=view_opts.embed aria-labelledby="plots-title">
                 <h2 id="plots-title">"Against thickness and wind"</h2>
                 {move || shown.with(|sh| sh.outcome.as_ref().map(|o| results::sweeps(o, &scenario.get(), &choice.get())))}
-                <details class="fold" data-fold="nu-re">
+                <details class="fold" data-fold="nu-re" on:toggle=move |ev| open_plots.set(is_open(&ev))>
                     <summary>"The Nusselt number against Reynolds for every correlation, and around the front of the body"</summary>
-                    {move || shown.with(|s| s.outcome.as_ref().map(results::nu_re_plot))}
-                    {move || shown.with(|s| s.outcome.as_ref().and_then(results::front_plot))}
+                    {move || open_plots.get().then(|| view! {
+                        {move || shown.with(|s| s.outcome.as_ref().map(results::nu_re_plot))}
+                        {move || shown.with(|s| s.outcome.as_ref().and_then(results::front_plot))}
+                    })}
                 </details>
             </section>
             {move || printing.get().then(|| shown.with(|sh| sh.outcome.as_ref().map(|o| results::report(o, &scenario.get(), &choice.get(), &item_name.get(), &tag.get(), &place.get()))))}

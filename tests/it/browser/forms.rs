@@ -6,6 +6,7 @@ use super::*;
 async fn exercise(c: &Client, base: &str) {
     c.goto(base).await.unwrap();
     wait_rendered(c).await;
+    open_folds(c).await;
     assert!(
         close(si(c, "h").await, expect(&DEMO).h),
         "demo h differs from the engine"

@@ -167,6 +167,26 @@ async fn tap(c: &Client, css: &str) {
     el.click().await.unwrap();
 }
 
+/// Open every fold (the working, the correlations, the Nu–Re plots), as a person taps each one:
+/// their content is built only while open.
+async fn open_folds(c: &Client) {
+    js(c, "document.querySelectorAll('details.fold, details.working').forEach(d => d.open = true); return true;").await;
+    let t0 = Instant::now();
+    while js(
+        c,
+        "return document.querySelectorAll('[data-table=correlations]').length;",
+    )
+    .await
+        == json!(0)
+    {
+        assert!(
+            t0.elapsed() < Duration::from_secs(5),
+            "the folds did not open"
+        );
+        tokio::time::sleep(Duration::from_millis(20)).await;
+    }
+}
+
 /// Replace a field's text as a user would: clear it, then type key by key.
 async fn type_into(c: &Client, key: &str, text: &str) {
     let el = c.find(Locator::Css(&format!("#in-{key}"))).await.unwrap();
