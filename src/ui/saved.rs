@@ -360,9 +360,13 @@ pub fn SavedPanel(
         }
     };
 
-    let rows = move || {
-        let c = choice.get();
-        let f = move |v: f64, d: Dim| crate::engine::units::show(v, c.get(d));
+    // Rows act on their item by name (names are unique in the store): the list shown may be a
+    // moment behind the store while new figures are computed.
+    let find =
+        move |name: &str| saved.with_untracked(|s| s.items.iter().position(|i| i.name == name));
+    // The list in the order shown; each row is keyed by what it shows, so a change redraws only
+    // the rows it changed (a unit switch updates the figures in place).
+    let sorted = move || {
         let mut shown = list.get();
         if by_loss.get() {
             let loss = |r: &survey::Figure| {
@@ -372,86 +376,115 @@ pub fn SavedPanel(
             };
             shown.sort_by(|a, b| loss(&b.1).total_cmp(&loss(&a.1)));
         }
-        // Rows act on their item by name (names are unique in the store): the list shown may be
-        // a moment behind the store while new figures are computed.
-        let find =
-            move |name: &str| saved.with_untracked(|s| s.items.iter().position(|i| i.name == name));
         shown
-            .into_iter()
-            .map(|(it, res)| {
-                let label = it.name.clone();
-                let figs = match &res {
-                    Ok(r) => (f(r.q_total, Dim::HeatFlow), f(r.surface_temp, Dim::Temperature), if r.flags == 0 { "✓".to_string() } else { format!("⚠ {}", r.flags) }),
-                    Err(e) => (format!("⚠ {e}"), "—".into(), "—".into()),
-                };
-                let key = StoredValue::new(it.name.clone());
-                let open = move |_| {
-                    let item = key.with_value(|k| find(k)).and_then(|i| saved.with_untracked(|s| s.items.get(i).cloned()));
-                    if let Some(it) = item {
-                        if let Ok((sc, sys)) = it.scenario() {
-                            name.set(it.name.clone());
-                            tag.set(it.tag.clone());
-                            place.set(it.location.clone());
-                            on_open(sc, sys);
-                        }
-                    }
-                };
-                let update = move |_| {
-                    let mut next = saved.get_untracked();
-                    if let Some(c) = key.with_value(|k| find(k)).and_then(|i| next.items.get_mut(i)) {
-                        let n = c.name.clone();
-                        *c = Saved::new(&n, &tag.get_untracked(), &place.get_untracked(), &scenario.get_untracked(), system.get_untracked());
-                        commit(next, format!("“{n}” now holds the inputs shown."));
-                    }
-                };
-                let dup = move |_| {
-                    let mut next = saved.get_untracked();
-                    if let Some(mut c) = key.with_value(|k| find(k)).and_then(|i| next.items.get(i).cloned()) {
-                        c.name = store::free_name(&next, &c.name);
-                        let n = c.name.clone();
-                        next.items.push(c);
-                        commit(next, format!("Duplicated as “{n}”."));
-                    }
-                };
-                let rename = move |_| {
-                    let mut next = saved.get_untracked();
-                    let new = store::free_name(&next, &name.get_untracked());
-                    if let Some(c) = key.with_value(|k| find(k)).and_then(|i| next.items.get_mut(i)) {
-                        c.name = new.clone();
-                        commit(next, format!("Renamed to “{new}”."));
-                    }
-                };
-                let delete = move |_| {
-                    let mut next = saved.get_untracked();
-                    if let Some(i) = key.with_value(|k| find(k)) {
-                        let gone = next.items.remove(i).name;
-                        commit(next, format!("Deleted “{gone}”."));
-                    }
-                };
-                let sub = [it.tag.as_str(), it.location.as_str()].iter().filter(|x| !x.is_empty()).cloned().collect::<Vec<_>>().join(" · ");
-                // One tap on the name opens the item; the other actions wait in a menu.
-                view! {
-                    <tr data-saved=label.clone()>
-                        <th scope="row"><button type="button" class="item-open" data-open on:click=open title="Open this item">{label.clone()}</button><small>{sub}</small></th>
-                        <td data-item-loss data-label="Heat loss">{figs.0}</td>
-                        <td data-label="Surface">{figs.1}</td>
-                        <td data-label="Range">{figs.2}</td>
-                        <td class="item-menu">
-                            <details class="menu">
-                                <summary aria-label=format!("Actions for {label}")>"Actions"</summary>
-                                <div class="saved-actions">
-                                    <button type="button" on:click=open>"Open"</button>
-                                    <button type="button" on:click=update title="Store the inputs shown in this item">"Update"</button>
-                                    <button type="button" on:click=rename title="Rename to the name typed above">"Rename"</button>
-                                    <button type="button" on:click=dup>"Duplicate"</button>
-                                    <button type="button" on:click=delete>"Delete"</button>
-                                </div>
-                            </details>
-                        </td>
-                    </tr>
+    };
+    let row = move |(it, res): (Saved, survey::Figure)| {
+        let label = it.name.clone();
+        let figs = move || {
+            let c = choice.get();
+            let f = move |v: f64, d: Dim| crate::engine::units::show(v, c.get(d));
+            match &res {
+                Ok(r) => (
+                    f(r.q_total, Dim::HeatFlow),
+                    f(r.surface_temp, Dim::Temperature),
+                    if r.flags == 0 {
+                        "✓".to_string()
+                    } else {
+                        format!("⚠ {}", r.flags)
+                    },
+                ),
+                Err(e) => (format!("⚠ {e}"), "—".into(), "—".into()),
+            }
+        };
+        let figs = Memo::new(move |_| figs());
+        let key = StoredValue::new(it.name.clone());
+        let open = move |_| {
+            let item = key
+                .with_value(|k| find(k))
+                .and_then(|i| saved.with_untracked(|s| s.items.get(i).cloned()));
+            if let Some(it) = item {
+                if let Ok((sc, sys)) = it.scenario() {
+                    name.set(it.name.clone());
+                    tag.set(it.tag.clone());
+                    place.set(it.location.clone());
+                    on_open(sc, sys);
                 }
-            })
-            .collect_view()
+            }
+        };
+        let update = move |_| {
+            let mut next = saved.get_untracked();
+            if let Some(c) = key
+                .with_value(|k| find(k))
+                .and_then(|i| next.items.get_mut(i))
+            {
+                let n = c.name.clone();
+                *c = Saved::new(
+                    &n,
+                    &tag.get_untracked(),
+                    &place.get_untracked(),
+                    &scenario.get_untracked(),
+                    system.get_untracked(),
+                );
+                commit(next, format!("“{n}” now holds the inputs shown."));
+            }
+        };
+        let dup = move |_| {
+            let mut next = saved.get_untracked();
+            if let Some(mut c) = key
+                .with_value(|k| find(k))
+                .and_then(|i| next.items.get(i).cloned())
+            {
+                c.name = store::free_name(&next, &c.name);
+                let n = c.name.clone();
+                next.items.push(c);
+                commit(next, format!("Duplicated as “{n}”."));
+            }
+        };
+        let rename = move |_| {
+            let mut next = saved.get_untracked();
+            let new = store::free_name(&next, &name.get_untracked());
+            if let Some(c) = key
+                .with_value(|k| find(k))
+                .and_then(|i| next.items.get_mut(i))
+            {
+                c.name = new.clone();
+                commit(next, format!("Renamed to “{new}”."));
+            }
+        };
+        let delete = move |_| {
+            let mut next = saved.get_untracked();
+            if let Some(i) = key.with_value(|k| find(k)) {
+                let gone = next.items.remove(i).name;
+                commit(next, format!("Deleted “{gone}”."));
+            }
+        };
+        let sub = [it.tag.as_str(), it.location.as_str()]
+            .iter()
+            .filter(|x| !x.is_empty())
+            .cloned()
+            .collect::<Vec<_>>()
+            .join(" · ");
+        // One tap on the name opens the item; the other actions wait in a menu.
+        view! {
+            <tr data-saved=label.clone()>
+                <th scope="row"><button type="button" class="item-open" data-open on:click=open title="Open this item">{label.clone()}</button><small>{sub}</small></th>
+                <td data-item-loss data-label="Heat loss">{move || figs.get().0}</td>
+                <td data-label="Surface">{move || figs.get().1}</td>
+                <td data-label="Range">{move || figs.get().2}</td>
+                <td class="item-menu">
+                    <details class="menu">
+                        <summary aria-label=format!("Actions for {label}")>"Actions"</summary>
+                        <div class="saved-actions">
+                            <button type="button" on:click=open>"Open"</button>
+                            <button type="button" on:click=update title="Store the inputs shown in this item">"Update"</button>
+                            <button type="button" on:click=rename title="Rename to the name typed above">"Rename"</button>
+                            <button type="button" on:click=dup>"Duplicate"</button>
+                            <button type="button" on:click=delete>"Delete"</button>
+                        </div>
+                    </details>
+                </td>
+            </tr>
+        }
     };
     let totals = move || {
         let c = choice.get();
@@ -539,7 +572,7 @@ pub fn SavedPanel(
                 <table class="saved-list" data-saved-list>
                     <caption>"Survey list: every saved item with its results"</caption>
                     <thead><tr><th scope="col">"Item"</th><th scope="col">"Heat loss"</th><th scope="col">"Surface"</th><th scope="col">"Range"</th><th scope="col">"Actions"</th></tr></thead>
-                    <tbody>{rows}</tbody>
+                    <tbody><For each=sorted key=|(it, _)| (it.name.clone(), it.tag.clone(), it.location.clone(), it.link.clone()) children=row/></tbody>
                     <tfoot>{totals}</tfoot>
                 </table>
             </div>
