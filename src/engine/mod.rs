@@ -13,6 +13,7 @@ pub mod error;
 pub mod heatloss;
 pub mod job;
 pub mod layers;
+pub mod outdoors;
 pub mod pick;
 pub mod props;
 pub mod scenario;
