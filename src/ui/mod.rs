@@ -105,13 +105,14 @@ pub fn App() -> impl IntoView {
         let t = text_of(spec.field);
         move || scenario::read_field(spec, &t.get(), choice.get().get(spec.dim)).err()
     };
-    let any_field_error = move || {
+    // Read once per change, not once per reader (the stale mark, its note and the answer bar).
+    let any_field_error = Memo::new(move |_| {
         let s = scenario.get();
         FIELDS
             .iter()
             .filter(|spec| s.uses(spec.field))
             .any(|spec| field_error(spec)().is_some())
-    };
+    });
 
     let shown = Memo::new(move |prev: Option<&Shown>| {
         let s = scenario.get();
@@ -139,7 +140,7 @@ pub fn App() -> impl IntoView {
         }
         has
     });
-    let stale = move || any_field_error() || shown.with(|s| s.error.is_some());
+    let stale = move || any_field_error.get() || shown.with(|s| s.error.is_some());
     let stale_signal = Signal::derive(stale);
 
     // The outside world: keep the link in the address bar in step with the scenario.
@@ -155,13 +156,45 @@ pub fn App() -> impl IntoView {
         if prev.is_none() && refused_link {
             return;
         }
+        // `history.replaceState`, not `location.replace`: the same address without a navigation
+        // (the latter cost as much per keystroke as redrawing every plot).
         let loc = window().location();
         if loc.hash().unwrap_or_default().trim_start_matches('#') != frag {
-            let _ = loc.replace(&format!("#{frag}"));
+            if let Ok(h) = window().history() {
+                let _ = h.replace_state_with_url(
+                    &wasm_bindgen::JsValue::NULL,
+                    "",
+                    Some(&format!("#{frag}")),
+                );
+            }
         }
     });
 
+    // Which fields a scenario uses, and the notes beside them, worked out once per change: a
+    // memo tells its readers only when its value changes, so a keystroke that shows or hides no
+    // field re-runs none of the fields' own closures.
+    let used = Memo::new(move |_| {
+        scenario.with(|s| {
+            FIELDS
+                .iter()
+                .map(|sp| s.uses(sp.field))
+                .collect::<Vec<bool>>()
+        })
+    });
+    let notes = Memo::new(move |_| {
+        scenario.with(|s| {
+            FIELDS
+                .iter()
+                .map(|sp| scenario::field_note(s, sp.field))
+                .collect::<Vec<_>>()
+        })
+    });
+
     let field_view = move |spec: &'static FieldSpec| {
+        let i = FIELDS
+            .iter()
+            .position(|sp| sp.field == spec.field)
+            .unwrap_or(0);
         let t = text_of(spec.field);
         let err = field_error(spec);
         let err2 = field_error(spec);
@@ -196,7 +229,7 @@ pub fn App() -> impl IntoView {
             <div
                 class="field"
                 class:invalid=move || err2().is_some()
-                class:hidden=move || !scenario.with(|s| s.uses(spec.field))
+                class:hidden=move || !used.with(|u| u[i])
                 data-field-box=spec.key
             >
                 <label for=input_id.clone()>{spec.label}<small>{move || scenario::help_text(spec, &choice.get())}</small></label>
@@ -217,7 +250,7 @@ pub fn App() -> impl IntoView {
                 <p class="field-msg" id=msg_id role="status" data-msg-for=spec.key>
                     {move || err().or_else(extra).map(|m| format!("⚠ {m}"))}
                 </p>
-                {move || scenario.with(|s| scenario::field_note(s, spec.field)).map(|n| view! { <p class="field-note" data-note-for=spec.key>{n}</p> })}
+                {move || notes.with(|n| n[i].clone()).map(|n| view! { <p class="field-note" data-note-for=spec.key>{n}</p> })}
             </div>
         }
     };
@@ -369,13 +402,19 @@ pub fn App() -> impl IntoView {
         },
         |s| matches!(s.shape, Shape::Cylinder | Shape::Sphere),
     );
-    let out = move |quantity: &'static str, get: fn(&Outcome) -> Option<f64>, dim: Option<Dim>| {
+    // An output: `data-si` carries the value as computed (signed, full precision); the text
+    // shows it at its unit's resolution, as a magnitude where the label names the direction.
+    let out_as = move |quantity: &'static str,
+                       get: fn(&Outcome) -> Option<f64>,
+                       dim: Option<Dim>,
+                       magnitude: bool| {
+        let get_shown = move |o: &Outcome| get(o).map(|v| if magnitude { v.abs() } else { v });
         view! {
             <output data-quantity=quantity data-si=move || {
                 shown.with(|s| s.outcome.as_ref().and_then(get).map(|v| format!("{v}")).unwrap_or_default())
             }>
                 {move || {
-                    shown.with(|s| match (s.outcome.as_ref().and_then(get), dim) {
+                    shown.with(|s| match (s.outcome.as_ref().and_then(get_shown), dim) {
                         (Some(v), Some(d)) => units::shown(v, choice.get().get(d)).0,
                         (Some(v), None) => format_sig(v, 3),
                         (None, _) => "—".to_string(),
@@ -388,6 +427,11 @@ pub fn App() -> impl IntoView {
             }}</span>
         }
     };
+    let out = move |quantity: &'static str, get: fn(&Outcome) -> Option<f64>, dim: Option<Dim>| {
+        out_as(quantity, get, dim, false)
+    };
+    // A cold body gains heat: its flows are named as a gain and shown as magnitudes.
+    let gains = move || shown.with(|s| s.outcome.as_ref().is_some_and(|o| o.q_total < 0.0));
 
     // The run length every total is over, said beside each total (the demo's 12 m once drove
     // totals without a word).
@@ -524,10 +568,13 @@ pub fn App() -> impl IntoView {
                 </p>
                 {move || shown.with(|s| s.error.as_ref().filter(|_| s.error_at.is_none()).map(|e| view! { <p class="error" data-error>"⚠ "{scenario::error_message(e, &choice.get())}</p> }))}
                 <dl class="figures">
-                    <div class="main" class:hidden=move || shown.with(|s| s.outcome.as_ref().is_some_and(|o| o.q_per_length.is_none()))><dt>"Heat loss per length"</dt><dd>{out("q_per_length", |o| o.q_per_length, Some(Dim::HeatFlowPerLength))}{flag_mark}</dd></div>
-                    <div class="main"><dt>{move || scenario.with(|s| if s.shape == Shape::Sphere { "Heat loss from the body".to_string() } else {
-                        format!("Heat loss over the length L = {}", units::show(s.length, choice.get().get(Dim::RunLength)))
-                    })}</dt><dd>{out("q_total", |o| Some(o.q_total), Some(Dim::HeatFlow))}{flag_mark}</dd></div>
+                    <div class="main" class:hidden=move || shown.with(|s| s.outcome.as_ref().is_some_and(|o| o.q_per_length.is_none()))><dt>{move || if gains() { "Heat gain per length" } else { "Heat loss per length" }}</dt><dd>{out_as("q_per_length", |o| o.q_per_length, Some(Dim::HeatFlowPerLength), true)}{flag_mark}</dd></div>
+                    <div class="main"><dt>{move || {
+                        let what = if gains() { "Heat gain" } else { "Heat loss" };
+                        scenario.with(|s| if s.shape == Shape::Sphere { format!("{what} of the body") } else {
+                            format!("{what} over the length L = {}", units::show(s.length, choice.get().get(Dim::RunLength)))
+                        })
+                    }}</dt><dd>{out_as("q_total", |o| Some(o.q_total), Some(Dim::HeatFlow), true)}{flag_mark}</dd></div>
                     <div class="main"><dt>"Surface temperature"</dt><dd>{out("surface_temperature", |o| Some(o.surface_temp), Some(Dim::Temperature))}</dd></div>
                 </dl>
                 <div class="verdicts" data-verdicts>

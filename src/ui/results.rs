@@ -4,7 +4,6 @@
 use leptos::prelude::*;
 
 use crate::engine::chart;
-use crate::engine::correlations::local;
 use crate::engine::scenario::{Outcome, Shape};
 use crate::engine::units::{format_sig, Dim, UnitChoice};
 
@@ -100,70 +99,11 @@ pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
     }
 }
 
-/// The Nu–Re plot of every correlation for the shape, operating points marked.
+/// The Nu–Re plot of every correlation for the shape, operating points marked (markup written by
+/// the engine's `chart::svg`, set in one step).
 pub fn nu_re_plot(o: &Outcome) -> impl IntoView {
-    let (w, h) = (plot_width(), 300.0);
-    let (frame, curves) = chart::nu_re(o.shape, &o.analysis, w, h);
-    let (l, r, t, b) = frame.margin;
-    let xt = frame
-        .x_ticks(1.0)
-        .into_iter()
-        .map(|(x, s)| {
-            view! {
-                <line x1=x y1=t x2=x y2={h - b} class="grid"/>
-                <text x=x y={h - b + 16.0} class="tick" text-anchor="middle">{s}</text>
-            }
-        })
-        .collect_view();
-    let yt = frame
-        .y_ticks(1.0)
-        .into_iter()
-        .map(|(y, s)| {
-            view! {
-                <line x1=l y1=y x2={w - r} y2=y class="grid"/>
-                <text x={l - 4.0} y={y + 4.0} class="tick" text-anchor="end">{s}</text>
-            }
-        })
-        .collect_view();
-    let lines = curves
-        .iter()
-        .enumerate()
-        .map(|(i, cv)| {
-            let segs = cv
-                .segments
-                .iter()
-                .map(|sg| view! { <path d=sg.path.clone() class={if sg.inside { "in" } else { "out" }}/> })
-                .collect_view();
-            view! {
-                <g class=format!("curve c{i}") class:rec=cv.recommended data-curve=cv.id>
-                    {segs}
-                    <circle cx=cv.point.0 cy=cv.point.1 r={if cv.recommended { "5" } else { "3.5" }} class="op"/>
-                </g>
-            }
-        })
-        .collect_view();
-    let legend = curves
-        .iter()
-        .enumerate()
-        .map(|(i, cv)| view! {
-            <li class=format!("c{i}")><span class="swatch"></span>{cv.name}{cv.recommended.then_some(" ★")}</li>
-        })
-        .collect_view();
-    view! {
-        <figure class="plot" data-plot="nu-re">
-            <svg viewBox=format!("0 0 {w} {h}") role="img" aria-label="Nusselt number against Reynolds number for each correlation, log–log">
-                {xt}{yt}
-                <rect x=l y=t width={w - l - r} height={h - t - b} class="frame"/>
-                {lines}
-                <text x={(l + w - r) / 2.0} y={h - 2.0} class="axis" text-anchor="middle">"Re"</text>
-                <text x="6" y="14" class="axis">"Nu"</text>
-            </svg>
-            <figcaption>
-                <ul class="legend">{legend}</ul>
-                "Solid: inside the correlation's published range; dashed: outside it. Dots: this operating point (each at its own reference temperature)."
-            </figcaption>
-        </figure>
-    }
+    let m = chart::svg::nu_re_figure(o.shape, &o.analysis, plot_width());
+    view! { <figure class="plot" data-plot="nu-re" inner_html=m></figure> }
 }
 
 /// Local Nu over the front of a cylinder with the separation point marked.
@@ -171,60 +111,12 @@ pub fn front_plot(o: &Outcome) -> Option<AnyView> {
     if o.shape != Shape::Cylinder {
         return None;
     }
-    let film = &o.analysis.film;
-    let re = o.analysis.forced[0].groups.re;
-    // In still fluid there is no front stagnation flow to draw.
-    if re <= 0.0 {
-        return None;
-    }
-    let (w, h) = (plot_width(), 220.0);
-    let (frame, path, sep) = chart::front_profile(re, film.pr, w, h);
-    let (l, r, t, b) = frame.margin;
-    let (angle, words) = local::separation(re);
-    let xt = frame
-        .x_ticks(30.0)
-        .into_iter()
-        .map(|(x, s)| view! { <text x=x y={h - b + 16.0} class="tick" text-anchor="middle">{format!("{s}°")}</text> })
-        .collect_view();
-    let step = chart::nice_ceiling(frame.y.1) / 4.0;
-    let yt = frame
-        .y_ticks(step)
-        .into_iter()
-        .map(|(y, s)| {
-            view! {
-                <line x1=l y1=y x2={w - r} y2=y class="grid"/>
-                <text x={l - 4.0} y={y + 4.0} class="tick" text-anchor="end">{s}</text>
-            }
-        })
-        .collect_view();
-    let rear_x = frame.to_svg(angle, 0.0).0;
-    let flags = local::front(0.0, re, film.pr).flags;
-    let note = flags
-        .first()
-        .map(|f| view! { <p class="flag">"⚠ "{f.message()}</p> });
-    Some(
-        view! {
-            <figure class="plot" data-plot="front">
-                <svg viewBox=format!("0 0 {w} {h}") role="img" aria-label="Local Nusselt number over the front of the cylinder">
-                    {xt}{yt}
-                    <rect x=l y=t width={w - l - r} height={h - t - b} class="frame"/>
-                    <rect x=rear_x y=t width={w - r - rear_x} height={h - t - b} class="rear"/>
-                    <text x={(rear_x + w - r) / 2.0} y={t + 40.0} class="tick" text-anchor="middle">"wake: not drawn"</text>
-                    <path d=path class="in local"/>
-                    <line x1=sep y1=t x2=sep y2={h - b} class="sep" data-separation=format!("{angle}")/>
-                    <text x={sep + 3.0} y={t + 14.0} class="tick">{format!("separation ≈ {angle}°")}</text>
-                    <text x={(l + w - r) / 2.0} y={h - 2.0} class="axis" text-anchor="middle">"θ from the front stagnation point"</text>
-                    <text x="6" y="14" class="axis">"Nu_θ"</text>
-                </svg>
-                <figcaption>
-                    {format!("{}: Nu_θ = 1.14·Re^½·Pr^0.4·[1 − (θ/90°)³], valid 0–80°, film properties, Re = {}. Here: {}. ", local::FRONT, format_sig(re, 3), words)}
-                    {local::REAR_NOTE}
-                </figcaption>
-                {note}
-            </figure>
-        }
-        .into_any(),
-    )
+    let m = chart::svg::front_figure(
+        o.analysis.forced[0].groups.re,
+        o.analysis.film.pr,
+        plot_width(),
+    )?;
+    Some(view! { <figure class="plot" data-plot="front" inner_html=m></figure> }.into_any())
 }
 
 /// The verdict cards: touch, condensation, freezing, the run, insulated against bare.
@@ -286,7 +178,7 @@ struct Series {
 }
 
 /// A line plot of one series against a swept input, with the operating point, target lines and
-/// the numbers as a table for screen readers.
+/// the numbers as a table for screen readers (markup written by the engine's `chart::svg`).
 #[allow(clippy::too_many_arguments)]
 fn sweep_plot(
     id: &'static str,
@@ -299,72 +191,20 @@ fn sweep_plot(
     targets: Vec<(&'static str, f64)>,
     c: &UnitChoice,
 ) -> impl IntoView {
-    let (xu, yu) = (c.get(x_dim), c.get(y.dim));
-    let xv: Vec<f64> = xs.iter().map(|v| xu.from_si(*v)).collect();
-    let yv: Vec<f64> = y.values.iter().map(|v| yu.from_si(*v)).collect();
-    let tv: Vec<(&str, f64)> = targets.iter().map(|(l, v)| (*l, yu.from_si(*v))).collect();
-    let also: Vec<f64> = tv.iter().map(|t| t.1).collect();
-    let (w, h) = (plot_width(), 240.0);
-    let chart = chart::line_chart(&xv, &yv, &also, w, h);
-    let f = &chart.frame;
-    let (l, r, t, b) = f.margin;
-    let xt = f
-        .x_ticks(chart.x_step)
-        .into_iter()
-        .map(|(x, s)| {
-            view! {
-                <line x1=x y1=t x2=x y2={h - b} class="grid"/>
-                <text x=x y={h - b + 16.0} class="tick" text-anchor="middle">{s}</text>
-            }
-        })
-        .collect_view();
-    let yt = f
-        .y_ticks(chart.y_step)
-        .into_iter()
-        .map(|(yy, s)| {
-            view! {
-                <line x1=l y1=yy x2={w - r} y2=yy class="grid"/>
-                <text x={l - 4.0} y={yy + 4.0} class="tick" text-anchor="end">{s}</text>
-            }
-        })
-        .collect_view();
-    let lines = tv
-        .iter()
-        .map(|(label, v)| {
-            let (_, yy) = f.to_svg(f.x.0, *v);
-            view! {
-                <line x1=l y1=yy x2={w - r} y2=yy class="target"/>
-                <text x={w - r - 4.0} y={yy - 4.0} class="tick" text-anchor="end">{label.to_string()}</text>
-            }
-        })
-        .collect_view();
-    let dot = point.map(|(px, py)| {
-        let (sx, sy) = f.to_svg(xu.from_si(px), yu.from_si(py));
-        view! { <circle cx=sx cy=sy r="5" class="op here" data-point=id/> }
+    let m = chart::svg::sweep_figure(&chart::svg::Sweep {
+        id,
+        title: &title,
+        x_label,
+        x_unit: c.get(x_dim),
+        y_label: y.label,
+        y_unit: c.get(y.dim),
+        xs,
+        ys: &y.values,
+        point,
+        targets: &targets,
+        width: plot_width(),
     });
-    let rows = xs
-        .iter()
-        .zip(&y.values)
-        .map(|(x, v)| view! { <tr><td>{format_sig(xu.from_si(*x), 4)}</td><td>{format_sig(yu.from_si(*v), 4)}</td></tr> })
-        .collect_view();
-    view! {
-        <figure class="plot" data-plot=id>
-            <svg viewBox=format!("0 0 {w} {h}") role="img" aria-label=title.clone()>
-                {xt}{yt}{lines}
-                <rect x=l y=t width={w - l - r} height={h - t - b} class="frame"/>
-                <path d=chart.path class="in sweep"/>
-                {dot}
-                <text x={(l + w - r) / 2.0} y={h - 2.0} class="axis" text-anchor="middle">{format!("{x_label} ({})", xu.symbol)}</text>
-                <text x="6" y="14" class="axis">{format!("{} ({})", y.label, yu.symbol)}</text>
-            </svg>
-            <figcaption>{title.clone()}" The dot is this operating point."</figcaption>
-            <div class="sr-only"><table>
-                <caption>{title}</caption>
-                <thead><tr><th scope="col">{format!("{x_label} ({})", xu.symbol)}</th><th scope="col">{format!("{} ({})", y.label, yu.symbol)}</th></tr></thead>
-                <tbody>{rows}</tbody>
-            </table></div>
-        </figure>
-    }
+    view! { <figure class="plot" data-plot=id inner_html=m></figure> }
 }
 
 /// The plots against thickness (solved, with layers) and against stream speed.
@@ -489,52 +329,18 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
 /// wall stays visible), with the temperature at each face.
 fn cross_section(j: &crate::engine::scenario::JobResult, c: &UnitChoice) -> impl IntoView {
     let sol = &j.solution;
-    let r_out = sol.outer_d / 2.0;
-    let n = sol.interfaces.len();
     // Radii of every face from the bore out, in metres.
-    let r_bore = j.r_in;
-    let mut faces = vec![r_bore];
-    let mut r = r_bore;
+    let mut faces = vec![j.r_in];
+    let mut r = j.r_in;
     for t in &j.thicknesses {
         r += t;
         faces.push(r);
     }
-    let scale = 70.0 / r_out.max(1e-9);
-    let mut px: Vec<f64> = faces.iter().map(|r| r * scale).collect();
-    for i in 1..px.len() {
-        if px[i] - px[i - 1] < 3.0 {
-            px[i] = px[i - 1] + 3.0;
-        }
-    }
-    let rings = (0..n)
-        .rev()
-        .map(|i| {
-            let class = if i == 0 { "ring wall" } else { "ring ins" };
-            view! { <circle cx="80" cy="90" r=px[i + 1] class=class/> }
-        })
-        .collect_view();
-    let temps = std::iter::once(sol.t_bore)
+    let temps: Vec<f64> = std::iter::once(sol.t_bore)
         .chain(sol.interfaces.iter().copied())
-        .enumerate()
-        .map(|(i, t)| {
-            let y = 20.0 + 18.0 * i as f64;
-            // Short names here (the list below the drawing gives them in full).
-            let name = match i {
-                0 => "bore".to_string(),
-                k if k == n => "surface".to_string(),
-                1 => "wall".to_string(),
-                k => format!("layer {}", k - 1),
-            };
-            view! { <text x="165" y=y class="tick">{format!("{name}: {}", with_unit(t, Dim::Temperature, c))}</text> }
-        })
-        .collect_view();
-    view! {
-        <svg viewBox="0 0 360 180" class="section" role="img" aria-label="Cross-section of the wall and insulation with the temperature at each face">
-            {rings}
-            <circle cx="80" cy="90" r=px[0] class="ring bore"/>
-            {temps}
-        </svg>
-    }
+        .collect();
+    let m = chart::svg::section_svg(&faces, &temps, c.get(Dim::Temperature));
+    view! { <div class="section-box" inner_html=m></div> }
 }
 
 /// The one-page report, shown only when printing: inputs in use, results, flags, verdicts, the
@@ -626,18 +432,7 @@ pub fn report(
         .filter(|st| st.is_key())
         .map(|st| view! { <li><strong>{st.title}</strong>": "{st.text.clone()}</li> })
         .collect_view();
-    let sources = o
-        .properties
-        .first()
-        .map(|r| {
-            r.props
-                .sources
-                .iter()
-                .map(|(q, src)| format!("{q}: {src}"))
-                .collect::<Vec<_>>()
-                .join(" · ")
-        })
-        .unwrap_or_default();
+    let sources = o.property_sources();
     let cautions = crate::engine::scenario::cautions(s, o)
         .into_iter()
         .chain(o.verdicts.iter().filter_map(|v| v.caution))
@@ -701,18 +496,7 @@ pub fn property_table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
             }
         })
         .collect_view();
-    let sources = o
-        .properties
-        .first()
-        .map(|r| {
-            r.props
-                .sources
-                .iter()
-                .map(|(q, src)| format!("{q}: {src}"))
-                .collect::<Vec<_>>()
-                .join(" · ")
-        })
-        .unwrap_or_default();
+    let sources = o.property_sources();
     view! {
         <table class="props" data-props>
             <caption>{format!("Properties of {} used", o.fluid)}</caption>

@@ -20,6 +20,24 @@ const KEY_STEPS: [&str; 5] = [
     "Heat flow",
 ];
 
+impl Outcome {
+    /// Where the stream's properties come from, one "quantity: source" a method, for the working
+    /// and the report.
+    pub fn property_sources(&self) -> String {
+        self.properties
+            .first()
+            .map(|r| {
+                r.props
+                    .sources
+                    .iter()
+                    .map(|(q, src)| format!("{q}: {src}"))
+                    .collect::<Vec<_>>()
+                    .join(" · ")
+            })
+            .unwrap_or_default()
+    }
+}
+
 impl Step {
     /// Whether the report keeps this step.
     pub fn is_key(&self) -> bool {

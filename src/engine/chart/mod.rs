@@ -1,6 +1,8 @@
 //! Plot data: curves of each correlation over a Reynolds range and the mapping of log–log and
 //! linear axes to SVG coordinates. Pure numbers and path strings; the page only draws them.
 
+pub mod svg;
+
 use crate::engine::body::{Analysis, Shape};
 use crate::engine::correlations::{local, Groups};
 use crate::engine::validity::FlagKind;
