@@ -1,5 +1,6 @@
-//! Lists a person picks from instead of typing: typical surface emissivities and nominal pipe
-//! sizes (re-exported by `job`), and the insulation thicknesses commonly stocked.
+//! Lists a person picks from instead of typing: typical surface emissivities and solar
+//! absorptances, nominal pipe sizes (re-exported by `job`), and the insulation thicknesses
+//! commonly stocked.
 
 use crate::engine::units::{self, Unit};
 
@@ -15,6 +16,21 @@ pub const EMISSIVITIES: [(&str, f64); 9] = [
     ("Stainless steel jacket", 0.2),
     ("Oxidised aluminium jacket", 0.15),
     ("Bright aluminium jacket", 0.05),
+];
+
+/// Typical solar absorptances of outer surfaces, for a body outdoors in the sun (common practice,
+/// from memory: rounded values of the kind building and solar guides list; paint ages, dust and
+/// weathering raise them, and a measured or data-sheet value is always better).
+pub const SOLAR_ABSORPTANCES: [(&str, f64); 9] = [
+    ("Black paint or jacket", 0.95),
+    ("Dark paint, rusted or oxidised steel", 0.9),
+    ("Weathered galvanised steel", 0.9),
+    ("Mid-grey paint", 0.75),
+    ("New galvanised steel", 0.65),
+    ("Aluminium paint", 0.5),
+    ("Stainless steel jacket", 0.45),
+    ("White paint", 0.25),
+    ("Bright aluminium jacket", 0.15),
 ];
 
 /// Nominal pipe sizes and their outside diameters, m: ASME B36.10M (from memory; the ODs are the

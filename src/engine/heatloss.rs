@@ -27,6 +27,9 @@ pub struct Job {
     pub emissivity: f64,
     /// Temperature of the surroundings the surface radiates to, K.
     pub t_surround: f64,
+    /// Solar heat absorbed per m² of the outer surface, W/m² (0: none, indoors or at night): a
+    /// gain in the surface balance, conduction out = convection + radiation − solar.
+    pub solar: f64,
 }
 
 impl Job {
@@ -296,7 +299,7 @@ fn solve_as(job: &Job, full: bool) -> Result<Solution, EngineError> {
     });
     Ok(Solution {
         q: core.q,
-        residual: loss.q_conv + loss.q_rad - core.q,
+        residual: loss.q_conv + loss.q_rad - job.solar * outer_area(s.shape, d) - core.q,
         loss,
         t_surface: core.t_surface,
         t_bore: core.t_bore,
@@ -321,7 +324,7 @@ fn solve_fixed(job: &Job, fixed: Option<Pick>, free: &Properties) -> Result<Core
     let s = &job.stream;
     let (tp, tinf, tsur) = (job.process_temp, s.t_inf, job.t_surround);
     let t_lo = tp.min(tinf).min(tsur);
-    let t_hi = tp.max(tinf).max(tsur);
+    let t_hi = tp.max(tinf).max(tsur).max(sunlit_bound(job, free, fixed)?);
     job.construction.check(t_lo, t_hi)?;
     if !(0.0..=1.0).contains(&job.emissivity) {
         return Err(EngineError::Undefined {
@@ -335,6 +338,7 @@ fn solve_fixed(job: &Job, fixed: Option<Pick>, free: &Properties) -> Result<Core
     let g = job.geometry();
     let outer_d = 2.0 * job.construction.r_out();
     let a_in = g.area(job.construction.r_in);
+    let q_sun = job.solar * outer_area(s.shape, outer_d);
     let surface_of = |q: f64| -> (f64, Vec<f64>) {
         let t_bore = match job.h_inside {
             Some(hi) => (tp - q / (hi * a_in)).clamp(t_lo, t_hi),
@@ -348,7 +352,7 @@ fn solve_fixed(job: &Job, fixed: Option<Pick>, free: &Properties) -> Result<Core
         let (t_bore, t) = surface_of(q);
         let ts = t.last().copied().unwrap_or(t_bore);
         match surface_lean(s, outer_d, ts, job.emissivity, tsur, fixed, free) {
-            Ok(l) => l.q_conv + l.q_rad - q,
+            Ok(l) => l.q_conv + l.q_rad - q_sun - q,
             Err(e) => {
                 failure.get_or_insert(e);
                 f64::NAN
@@ -421,6 +425,45 @@ fn solve_fixed(job: &Job, fixed: Option<Pick>, free: &Properties) -> Result<Core
         t_bore,
         interfaces,
         iterations: root.iterations,
+    })
+}
+
+/// The hottest the surface can be in the sun, K: the temperature at which it loses all the solar
+/// heat it absorbs with no heat conducted to it (0 K without sun, leaving the job's span as it
+/// was). The solved surface lies between the process temperature and this one (the net loss
+/// rises with Ts and the conducted heat pulls Ts towards the process), so the span the trial
+/// temperatures are clamped to must reach it, or a sunlit surface hotter than the process, air
+/// and surroundings could not be found and the bracket would close on a clamp.
+///
+/// Radiation alone bounds it where the surface emits (ε·σ·(T⁴ − Tsur⁴) ≥ solar above the
+/// stream's and surroundings' temperatures, convection only adds); an emissivity of 0 leaves
+/// convection, found by doubling the excess over the air until the lean loss covers the sun.
+fn sunlit_bound(job: &Job, free: &Properties, fixed: Option<Pick>) -> Result<f64, EngineError> {
+    if job.solar <= 0.0 {
+        return Ok(0.0);
+    }
+    let s = &job.stream;
+    let floor = s.t_inf.max(job.t_surround);
+    if job.emissivity > 0.0 {
+        let t4 = job.t_surround.powi(4) + job.solar / (job.emissivity * SIGMA);
+        return finite_result(
+            "surface temperature in the sun",
+            t4.sqrt().sqrt().max(floor),
+        );
+    }
+    let d = 2.0 * job.construction.r_out();
+    let q_sun = job.solar * outer_area(s.shape, d);
+    let mut dt = 10.0;
+    while dt < 1e4 {
+        let t = floor + dt;
+        let l = surface_lean(s, d, t, 0.0, job.t_surround, fixed, free)?;
+        if l.q_conv >= q_sun {
+            return Ok(t);
+        }
+        dt *= 2.0;
+    }
+    Err(EngineError::NonFiniteResult {
+        quantity: "surface temperature in the sun (no loss covers the solar gain)",
     })
 }
 
@@ -523,6 +566,7 @@ pub(crate) mod tests_support {
                 t_s: 0.0,
                 p: 101_325.0,
                 fluid: Fluid::DryAir,
+                yaw: 1.0,
             },
             process_temp: 453.15,
             h_inside: None,
@@ -546,118 +590,11 @@ pub(crate) mod tests_support {
             },
             emissivity,
             t_surround: 268.15,
+            solar: 0.0,
         }
     }
 }
 
 #[cfg(test)]
-mod tests {
-    use super::tests_support::job;
-    use super::*;
-
-    #[test]
-    fn energy_balance_closes() {
-        for (ins, eps) in [(0.0, 0.9), (0.05, 0.1), (0.2, 0.9), (0.0, 0.0)] {
-            let s = solve(&job(ins, eps)).unwrap();
-            let out = s.loss.q_conv + s.loss.q_rad;
-            assert!(
-                (out - s.q).abs() <= 1e-9 * s.q.abs(),
-                "{ins} {eps}: {out} vs {}",
-                s.q
-            );
-            // Between the coldest and the hottest temperature of the job (the 268 K sky can pull
-            // a well-insulated surface below the air temperature).
-            assert!(
-                s.t_surface > 268.15 && s.t_surface < 453.15,
-                "{}",
-                s.t_surface
-            );
-        }
-    }
-
-    /// The lean solve gives the same numbers as the full one, bit for bit; only the analysis is
-    /// left out.
-    #[test]
-    fn lean_solve_equals_the_full_one() {
-        for (ins, eps) in [(0.0, 0.9), (0.05, 0.1), (0.2, 0.9), (0.0, 0.0)] {
-            for speed in [0.0, 0.3, 4.0, 30.0] {
-                let mut j = job(ins, eps);
-                j.stream.speed = speed;
-                let full = solve(&j).unwrap();
-                let lean = solve_lean(&j).unwrap();
-                assert!(full.loss.analysis.is_some() && lean.loss.analysis.is_none());
-                let mut stripped = full.clone();
-                stripped.loss.analysis = None;
-                assert_eq!(stripped, lean, "{ins} {eps} {speed}");
-            }
-        }
-    }
-
-    /// The sweeps' lean surface loss equals the full one at every speed and surface temperature.
-    #[test]
-    fn lean_surface_loss_equals_the_full_one() {
-        let j = job(0.0, 0.9);
-        for speed in [0.0, 0.2, 2.0, 15.0, 60.0] {
-            for ts in [250.0, 290.0, 350.0, 700.0] {
-                let mut b = j.stream;
-                b.speed = speed;
-                let full = surface_loss(&b, 0.1143, ts, 0.9, 268.15).unwrap();
-                let lean = surface_loss_lean(&b, 0.1143, ts, 0.9, 268.15).unwrap();
-                assert!(full.analysis.is_some() && lean.analysis.is_none());
-                let mut stripped = full.clone();
-                stripped.analysis = None;
-                assert_eq!(stripped, lean, "{speed} {ts}");
-            }
-        }
-    }
-
-    #[test]
-    fn limits() {
-        // No insulation is the bare pipe; emissivity 0 is convection only.
-        let bare = solve(&job(0.0, 0.9)).unwrap();
-        assert!((bare.outer_d - 0.1143).abs() < 1e-12);
-        let none = solve(&job(0.0, 0.0)).unwrap();
-        assert_eq!(none.loss.q_rad, 0.0);
-        assert!(none.q < bare.q);
-        // More insulation: less loss and a cooler surface (well past the critical radius).
-        let mut last = bare.clone();
-        for t in [0.02, 0.05, 0.1, 0.2] {
-            let s = solve(&job(t, 0.9)).unwrap();
-            assert!(s.q < last.q && s.t_surface < last.t_surface, "{t}");
-            last = s;
-        }
-    }
-
-    /// Very thick insulation: the loss tends to conduction alone between the process and the air
-    /// temperature (the outside resistance becomes negligible beside the layer's).
-    #[test]
-    fn thick_insulation_tends_to_conduction_only() {
-        let mut j = job(2.0, 0.9);
-        j.t_surround = j.stream.t_inf;
-        let s = solve(&j).unwrap();
-        let c = &j.construction;
-        let r = c.radii();
-        let k = c.layers[1].k.mean(s.interfaces[0], 278.15);
-        let cond_only =
-            2.0 * std::f64::consts::PI * k * (s.interfaces[0] - 278.15) / (r[1] / r[0]).ln();
-        assert!(
-            (s.q / cond_only - 1.0).abs() < 0.01,
-            "{} vs {cond_only}",
-            s.q
-        );
-    }
-
-    #[test]
-    fn thickness_for_a_touch_limit() {
-        let j = job(0.05, 0.9);
-        let (t, s) = thickness_for(&j, 0.5, 323.15, |s| s.t_surface)
-            .unwrap()
-            .unwrap();
-        assert!((s.t_surface - 323.15).abs() < 1e-6, "{}", s.t_surface);
-        assert!(t > 0.0 && t < 0.5);
-        // A limit below the air temperature cannot be met by any thickness.
-        assert!(thickness_for(&j, 0.5, 270.0, |s| s.t_surface)
-            .unwrap()
-            .is_none());
-    }
-}
+#[path = "heatloss_tests.rs"]
+mod tests;

@@ -23,12 +23,14 @@ pub fn job() -> Job {
             t_s: 0.0,
             p: s.pressure,
             fluid: Fluid::DryAir,
+            yaw: 1.0,
         },
         process_temp: 453.15,
         h_inside: None,
         construction: s.construction(),
         emissivity: 0.9,
         t_surround: 268.15,
+        solar: 0.0,
     }
 }
 
@@ -45,5 +47,6 @@ pub fn body(shape: Shape, fluid: Fluid) -> Body {
         t_s: 338.15,
         p: 101_325.0,
         fluid,
+        yaw: 1.0,
     }
 }

@@ -131,6 +131,7 @@ fn body() -> impl Strategy<Value = leeward::engine::body::Body> {
                     t_s,
                     p: 101_325.0,
                     fluid,
+                    yaw: 1.0,
                 })
             },
         )
@@ -255,6 +256,69 @@ proptest! {
     }
 }
 
+/// A field job outdoors (issue #19): the cases above in humid air under any sky and sun, at any
+/// wind angle and rack height over any terrain.
+fn outdoor_job() -> impl Strategy<Value = leeward::engine::scenario::Scenario> {
+    use leeward::engine::scenario::{FluidKind, Setting, Terrain};
+    (
+        field_job(),
+        (0.0..=8.0f64, 0.0..1100.0f64, 0.0..400.0f64, 0.0..1.0f64),
+        (0.0..=1.0f64, 0.0..=90.0f64, 1.0..50.0f64, 0usize..5),
+    )
+        .prop_map(
+            |(mut s, (cloud, gb, gd, gg_share), (alpha, yaw, z, terrain))| {
+                s.fluid = FluidKind::HumidAir;
+                s.setting = Setting::Outdoors;
+                s.terrain = Terrain::ALL[terrain];
+                s.cloud = cloud;
+                s.t_ground = s.fluid_temp;
+                s.beam_normal = gb;
+                s.diffuse = gd;
+                s.global = gd + gg_share * gb;
+                s.absorptance = alpha;
+                s.yaw = yaw;
+                s.body_height = z;
+                s
+            },
+        )
+}
+
+proptest! {
+    #![proptest_config(ProptestConfig::with_cases(2_000))]
+
+    /// Outdoors, with the sun a gain that can turn the net flow inward: the solve still converges
+    /// within its bound and closes conduction = convection + radiation − sun to 1e-9, with only
+    /// finite numbers.
+    #[test]
+    fn the_energy_balance_closes_outdoors_in_the_sun(s in outdoor_job()) {
+        if (s.process_temp - s.fluid_temp).abs() < 1.0 {
+            return Ok(());
+        }
+        let o = match leeward::engine::scenario::evaluate(&s) {
+            Ok(o) => o,
+            Err(e) => return Err(TestCaseError::fail(format!("{e} for {s:?}"))),
+        };
+        let sol = &o.job.as_ref().unwrap().solution;
+        prop_assert!(sol.iterations <= leeward::engine::solve::MAX_ITER);
+        let area = if s.shape == leeward::engine::scenario::Shape::Sphere {
+            std::f64::consts::PI * sol.outer_d * sol.outer_d
+        } else {
+            std::f64::consts::PI * sol.outer_d
+        };
+        let floor = 100.0 * f64::EPSILON * o.surface_temp * (sol.loss.h_conv + sol.loss.h_rad) * area;
+        let sun = o.solar_total.unwrap() / if s.shape == leeward::engine::scenario::Shape::Sphere { 1.0 } else { s.length };
+        prop_assert!(
+            sol.residual.abs() <= (1e-9 * sol.q.abs().max(sun)).max(floor),
+            "residual {} of {} (sun {sun}, floor {floor})", sol.residual, sol.q
+        );
+        for v in [o.h, o.q_total, o.surface_temp, o.sky_temp.unwrap(), o.radiant_temp.unwrap(), o.wind_at_body.unwrap()] {
+            prop_assert!(v.is_finite());
+        }
+        let lo = s.process_temp.min(s.fluid_temp).min(o.radiant_temp.unwrap());
+        prop_assert!(o.surface_temp >= lo - 1e-9);
+    }
+}
+
 /// Cases for the whole-scenario fuzz: 2,000 in the test command, `LEEWARD_FUZZ_CASES` for the long
 /// run (README: `LEEWARD_FUZZ_CASES=1000000 cargo test --release --test it fuzz`).
 fn fuzz_cases() -> u32 {
@@ -268,8 +332,8 @@ fn fuzz_cases() -> u32 {
 /// limits on both sides (zero, negatives, huge and tiny values).
 fn any_scenario() -> impl Strategy<Value = leeward::engine::scenario::Scenario> {
     use leeward::engine::scenario::{
-        Axis, FluidKind, HumidityInput, InsideFilm, PressureInput, Shape, SurfaceMode,
-        WallMaterial, Wind, DEMO, FIELDS,
+        Axis, FluidKind, HumidityInput, InsideFilm, PressureInput, Setting, Shape, SurfaceMode,
+        Terrain, WallMaterial, Wind, DEMO, FIELDS,
     };
     use leeward::engine::units::Dim;
     // Per input: 0–2 keep the demo's value, 3–5 scale it by 0.2–5 (temperatures: 150–1500 K),
@@ -297,13 +361,13 @@ fn any_scenario() -> impl Strategy<Value = leeward::engine::scenario::Scenario> 
         0..7usize,
         0..7usize,
         0..16u32,
-        0..4usize,
+        (0..4usize, 0..5usize),
         0..5usize,
         any::<bool>(),
         0..4usize,
     )
         .prop_map(
-            |(vals, shape, fluid, bits, layers, wall, wild_ok, inside)| {
+            |(vals, shape, fluid, bits, (layers, outside), wall, wild_ok, inside)| {
                 let mut s = DEMO;
                 s.shape = Shape::ALL[shape];
                 s.fluid = FluidKind::ALL[fluid];
@@ -329,6 +393,14 @@ fn any_scenario() -> impl Strategy<Value = leeward::engine::scenario::Scenario> 
                     SurfaceMode::Solved
                 };
                 s.layer_count = layers;
+                // Outdoors in three cases of five, over a terrain drawn from all five (the
+                // wall's draw reused: independent enough for a fuzz).
+                s.setting = if outside < 3 {
+                    Setting::Outdoors
+                } else {
+                    Setting::Indoors
+                };
+                s.terrain = Terrain::ALL[wall % 5];
                 s.wall = WallMaterial::ALL[wall];
                 s.inside = InsideFilm::ALL[inside];
                 for (spec, (how, factor, wild)) in FIELDS.iter().zip(vals) {
@@ -378,6 +450,7 @@ proptest! {
                 o.outer_d, o.annual_energy, o.annual_cost, o.nusselt, o.reynolds, o.prandtl, o.film_temp, o.pressure];
             nums.extend(o.q_per_length);
             nums.extend(o.dew_point);
+            nums.extend([o.sky_temp, o.radiant_temp, o.solar_total, o.solar_per_length, o.wind_at_body, o.yaw_factor].into_iter().flatten());
             for e in &o.analysis.forced { nums.extend([e.nu, e.h, e.groups.re, e.groups.pr]); }
             for v in &o.verdicts { nums.extend(v.figures.iter().map(|f| f.1)); }
             for (a, b, c) in &o.thickness_sweep { nums.extend([*a, *b, *c]); }

@@ -17,6 +17,7 @@ fn body(shape: Shape, fluid: Fluid, d: f64, speed: f64, t_inf: f64, t_s: f64) ->
         t_s,
         p: 101_325.0,
         fluid,
+        yaw: 1.0,
     }
 }
 

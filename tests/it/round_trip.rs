@@ -1,5 +1,5 @@
 //! Every input field survives the three ways a scenario travels — the link, the saved-work file
-//! and the survey CSV (in SI and in US units) — at full precision. Four scenarios together use
+//! and the survey CSV (in SI and in US units) — at full precision. Five scenarios together use
 //! every row of `FIELDS` (the test checks that they do), each value is nudged off round numbers,
 //! and what comes back must be the same number: bit for bit through the link and the file (they
 //! carry the SI value), within 1e-12 relative through the CSV in US units (a unit conversion and
@@ -8,7 +8,7 @@
 use leeward::engine::body::{Shape, Wind};
 use leeward::engine::scenario::{
     self, check_field, spec, FluidKind, HumidityInput, InsideFilm, PressureInput, Scenario,
-    SurfaceMode, DEMO, FIELDS,
+    Setting, SurfaceMode, Terrain, DEMO, FIELDS,
 };
 use leeward::engine::store::{self, Saved, Store};
 use leeward::engine::survey;
@@ -41,7 +41,22 @@ fn scenarios() -> Vec<Scenario> {
     d.fluid_temp = 283.15;
     d.surface_temp = 303.15;
     d.t_surround = 283.15;
-    vec![a, b, c, d]
+
+    // Outdoors (issue #19): every sky, sun and wind input off its default, the wind at an angle.
+    let mut e = a;
+    e.setting = Setting::Outdoors;
+    e.terrain = Terrain::Suburban;
+    e.cloud = 3.0;
+    e.t_ground = 275.0;
+    e.sky_view = 0.6;
+    e.beam_normal = 700.0;
+    e.diffuse = 110.0;
+    e.global = 500.0;
+    e.absorptance = 0.7;
+    e.albedo = 0.25;
+    e.body_height = 4.5;
+    e.yaw = 40.0;
+    vec![a, b, c, d, e]
 }
 
 /// A value off round numbers, still inside the field's hard limits.
@@ -86,6 +101,9 @@ fn every_field_round_trips_through_link_file_and_csv() {
             ));
             assert!(errors.is_empty(), "{system:?}: {errors:?}");
             let (from_csv, _) = rows[0].scenario().expect("the CSV row reads");
+            for got in [&back, &from_file, &from_csv] {
+                assert_eq!((got.setting, got.terrain), (s.setting, s.terrain));
+            }
             for sp in &used {
                 let want = s.get(sp.field);
                 assert_eq!(
@@ -139,5 +157,29 @@ fn the_scenario_and_view_options_round_trip_through_serde() {
         let back: scenario::ViewOptions =
             serde_json::from_str(&serde_json::to_string(&v).unwrap()).unwrap();
         assert_eq!(back, v);
+    }
+}
+
+/// Outdoors and its terrain travel in the CSV's own choice columns too (`env`, `tc`): a list
+/// whose link column is gone still reads them; indoors leaves both cells blank.
+#[test]
+fn outdoors_and_its_terrain_travel_in_the_csv_columns() {
+    let outdoor = scenarios().pop().expect("the outdoor scenario");
+    assert_eq!(outdoor.setting, Setting::Outdoors);
+    for s in [outdoor, DEMO] {
+        let item = Saved::new("Rack", "T-2", "Yard", &s, System::Si);
+        let text = survey::to_csv(&[item], System::Si, &survey::Figures::default());
+        let lines: Vec<&str> = text.lines().collect();
+        let head: Vec<&str> = lines[0].split(',').collect();
+        assert!(head.contains(&"env") && head.contains(&"tc"));
+        // Every line without its last cell, the link.
+        let cut: String = lines
+            .iter()
+            .map(|l| l.rsplit_once(',').map_or(*l, |(a, _)| a).to_string() + "\n")
+            .collect();
+        let (rows, errors) = survey::from_csv(&cut);
+        assert!(errors.is_empty(), "{errors:?}");
+        let (back, _) = rows[0].scenario().expect("the row reads");
+        assert_eq!((back.setting, back.terrain), (s.setting, s.terrain));
     }
 }

@@ -92,6 +92,7 @@ fn time_for_still_water_to_reach_freezing() {
             t_s: 0.0,
             p: 101_325.0,
             fluid: Fluid::DryAir,
+            yaw: 1.0,
         },
         process_temp: t_water,
         h_inside: None,
@@ -111,6 +112,7 @@ fn time_for_still_water_to_reach_freezing() {
         },
         emissivity: 0.0,
         t_surround: t_air,
+        solar: 0.0,
     };
     let targets = Targets {
         touch_limit: 333.15,

@@ -291,6 +291,7 @@ mod tests {
             t_s: 333.15,
             p: 101_325.0,
             fluid: Fluid::DryAir,
+            yaw: 1.0,
         })
         .unwrap()
     }

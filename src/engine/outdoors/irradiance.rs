@@ -120,13 +120,21 @@ impl Irradiance {
         diffuse_horizontal: f64,
         global_horizontal: f64,
     ) -> Result<Irradiance, EngineError> {
-        for (what, v) in [
-            ("beam irradiance", beam_normal),
-            ("diffuse irradiance", diffuse_horizontal),
-            ("global irradiance", global_horizontal),
+        for (key, what, v) in [
+            (keys::IRRADIANCE, "beam irradiance", beam_normal),
+            (
+                keys::IRRADIANCE_DIFFUSE,
+                "diffuse irradiance",
+                diffuse_horizontal,
+            ),
+            (
+                keys::IRRADIANCE_GLOBAL,
+                "global irradiance",
+                global_horizontal,
+            ),
         ] {
             within(
-                keys::IRRADIANCE,
+                key,
                 what,
                 v,
                 0.0,

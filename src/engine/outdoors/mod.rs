@@ -65,15 +65,18 @@ pub mod keys {
     pub const ABSORPTANCE: &str = "as";
     /// Ground albedo.
     pub const ALBEDO: &str = "alb";
-    /// Irradiance components, W/m².
-    pub const IRRADIANCE: &str = "G";
+    /// Irradiance components, W/m²: beam normal, diffuse horizontal, global horizontal.
+    pub const IRRADIANCE: &str = "Gb";
+    pub const IRRADIANCE_DIFFUSE: &str = "Gd";
+    pub const IRRADIANCE_GLOBAL: &str = "Gg";
     /// Outside size D, existing field.
     pub const DIAMETER: &str = "D";
     /// The axis's direction (azimuth and tilt), degrees.
     pub const AXIS_AZIMUTH: &str = "axa";
     pub const AXIS_TILT: &str = "axt";
-    /// The wind reading, m/s, and the height it was measured at, m.
-    pub const WIND_READING: &str = "Uw";
+    /// The wind reading, m/s (outdoors the stream-speed field is the reading), and the height it
+    /// was measured at, m (10 m for now: no field yet).
+    pub const WIND_READING: &str = "U";
     pub const STATION_HEIGHT: &str = "zw";
     /// The body's height above ground, m.
     pub const BODY_HEIGHT: &str = "zb";

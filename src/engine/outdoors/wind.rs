@@ -15,7 +15,7 @@ use crate::engine::validity::{Flagged, Range};
 pub const EN_1991_1_4: &str = "EN 1991-1-4 §4.3.2";
 
 /// The terrain categories of EN 1991-1-4:2005, Table 4.1.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum Terrain {
     /// 0: sea or coastal area exposed to the open sea.
     Sea,

@@ -1,7 +1,56 @@
-//! The user's choices that are not numbers: the stream's fluid, how pressure and humidity are
-//! given, the inside film, and whether the surface is typed or worked out.
+//! The user's choices that are not numbers: indoors or outdoors (and the terrain outdoors), the
+//! stream's fluid, how pressure and humidity are given, the inside film, and whether the surface
+//! is typed or worked out.
 
 use super::*;
+pub use crate::engine::outdoors::wind::Terrain;
+
+/// Where the body is: indoors it radiates to one typed surroundings temperature and the typed
+/// speed is the stream at the body, square to it (the behaviour before issue #19, the default);
+/// outdoors it radiates to the sky and the ground, absorbs the sun, and the typed speed is a
+/// weather report's wind carried to the body's height, terrain and angle.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
+pub enum Setting {
+    Indoors,
+    Outdoors,
+}
+
+impl Setting {
+    pub const ALL: [Setting; 2] = [Setting::Indoors, Setting::Outdoors];
+    /// Stable id in links (`env=…`, written only outdoors).
+    pub fn id(&self) -> &'static str {
+        match self {
+            Setting::Indoors => "in",
+            Setting::Outdoors => "out",
+        }
+    }
+    pub fn label(&self) -> &'static str {
+        match self {
+            Setting::Indoors => "Indoors (one surroundings temperature)",
+            Setting::Outdoors => "Outdoors (sky, ground, sun and wind)",
+        }
+    }
+    pub fn from_id(id: &str) -> Option<Self> {
+        Self::ALL.into_iter().find(|m| m.id() == id)
+    }
+}
+
+/// A terrain category by its number in EN 1991-1-4 ("0", "I", "II", "III", "IV"), as links
+/// write it (`tc=…`, outdoors only).
+pub fn terrain_from_id(id: &str) -> Option<Terrain> {
+    Terrain::ALL.into_iter().find(|t| t.category() == id)
+}
+
+/// A terrain category as the page names it (own wording after EN 1991-1-4 Table 4.1).
+pub fn terrain_label(t: Terrain) -> &'static str {
+    match t {
+        Terrain::Sea => "0 — open sea or coast",
+        Terrain::Flat => "I — lakes, flat country without obstacles",
+        Terrain::Open => "II — open ground, grass, isolated obstacles (weather stations)",
+        Terrain::Suburban => "III — villages, woods, a plant among tanks and racks",
+        Terrain::Urban => "IV — city, tall buildings close together",
+    }
+}
 
 /// The fluid of the stream.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]

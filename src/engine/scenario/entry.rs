@@ -23,9 +23,9 @@ pub fn shown_text(spec: &FieldSpec, si: f64, unit: &Unit) -> String {
 /// A person typed `text` with `unit` shown: the scenario takes the value when it reads, otherwise
 /// keeps its last good value and the message is returned for the page to show beside the field.
 ///
-/// The surroundings' temperature follows the stream's while the two are equal (a person who has
-/// not set them apart means "the same"); the fields that followed are returned, for the page to
-/// rewrite their texts.
+/// The surroundings' temperature, and outdoors the ground's, follow the stream's while each is
+/// equal to it (a person who has not set them apart means "the same"); the fields that followed
+/// are returned, for the page to rewrite their texts.
 pub fn type_text(
     s: &mut Scenario,
     spec: &FieldSpec,
@@ -33,13 +33,20 @@ pub fn type_text(
     unit: &Unit,
 ) -> Result<Vec<Field>, String> {
     let si = read_field(spec, text, unit)?;
-    let follows = spec.field == Field::FluidTemp && s.t_surround == s.fluid_temp;
+    let stream = spec.field == Field::FluidTemp;
+    let follows = stream && s.t_surround == s.fluid_temp;
+    let ground = stream && s.t_ground == s.fluid_temp;
     s.set(spec.field, si);
+    let mut moved = Vec::new();
     if follows {
         s.t_surround = si;
-        return Ok(vec![Field::Surround]);
+        moved.push(Field::Surround);
     }
-    Ok(Vec::new())
+    if ground {
+        s.t_ground = si;
+        moved.push(Field::GroundTemp);
+    }
+    Ok(moved)
 }
 
 /// A note under a field, where the page should say something about its value (not an error).
@@ -47,6 +54,9 @@ pub fn field_note(s: &Scenario, f: Field) -> Option<&'static str> {
     match f {
         Field::Surround if s.uses(f) && s.t_surround != s.fluid_temp => Some(
             "Set apart from the stream's temperature: the surface exchanges radiation with surroundings at this temperature.",
+        ),
+        Field::GroundTemp if s.uses(f) && s.t_ground != s.fluid_temp => Some(
+            "Set apart from the air's temperature: the lower half of the view radiates at this temperature.",
         ),
         _ => None,
     }

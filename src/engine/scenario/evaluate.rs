@@ -69,8 +69,8 @@ pub struct Outcome {
     pub nusselt: f64,
     /// The answer: mean convective heat-transfer coefficient, W/(m²·K).
     pub h: f64,
-    /// Heat flow per metre of length, convection plus radiation, W/m (positive from the surface
-    /// outward); none for a sphere.
+    /// Heat flow per metre of length, convection plus radiation less any absorbed sun, W/m
+    /// (positive from the surface outward); none for a sphere.
     pub q_per_length: Option<f64>,
     /// Heat flow from the whole body (over the length L for a prism), W.
     pub q_total: f64,
@@ -79,6 +79,21 @@ pub struct Outcome {
     pub q_rad_total: f64,
     /// Linearised radiation coefficient εσ(Ts² + Tsur²)(Ts + Tsur), W/(m²·K).
     pub h_rad: f64,
+    /// Outdoors (none indoors): the effective sky temperature, K (Berdahl & Martin with Clark &
+    /// Allen's clouds).
+    pub sky_temp: Option<f64>,
+    /// Outdoors: the one temperature the surface radiates to, the sky and the ground by view
+    /// factor, K (it stands where the typed surroundings stand indoors).
+    pub radiant_temp: Option<f64>,
+    /// Outdoors: the solar heat absorbed over the whole body (the length L for a prism), W, and
+    /// per metre, W/m (none for a sphere). A gain: `q_total` = convection + radiation − this.
+    pub solar_total: Option<f64>,
+    pub solar_per_length: Option<f64>,
+    /// Outdoors: the typed wind carried to the body's height and terrain, m/s.
+    pub wind_at_body: Option<f64>,
+    /// Outdoors, for a level cylinder or bar in a level wind: the factor on forced convection
+    /// for the wind's angle to the axis (Morgan's).
+    pub yaw_factor: Option<f64>,
     /// Surface temperature: as typed, or solved from the process inside.
     pub surface_temp: f64,
     /// Outer diameter the stream sees (over the insulation when solved), m.
@@ -128,6 +143,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         inside,
         targets,
         job,
+        env,
         mut flags,
     } = s.case()?;
     let (a, ts, outer_d, job_result) = match job {
@@ -158,7 +174,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
                 .filter_map(|x| {
                     let mut t = *s;
                     t.layer_t[i] = x;
-                    let o = quick(&t, p, fluid, &inside).ok()?;
+                    let o = quick(&t, p, fluid, &inside, &env).ok()?;
                     (o.0.is_finite() && o.1.is_finite()).then_some((x, o.0, o.1))
                 })
                 .collect()
@@ -174,7 +190,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
     .filter_map(|u| {
         let mut t = *s;
         t.speed = u;
-        let o = quick(&t, p, fluid, &inside).ok()?;
+        let o = quick(&t, p, fluid, &inside, &env).ok()?;
         (o.0.is_finite() && o.1.is_finite() && o.2.is_finite()).then_some((u, o.2, o.0, o.1))
     })
     .collect();
@@ -182,13 +198,15 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
     let rec = a.recommended().clone();
     let h = a.h;
     let dt = ts - s.fluid_temp;
-    let h_rad = crate::engine::heatloss::radiation_coefficient(s.emissivity, ts, s.t_surround);
-    let rad_flux = crate::engine::heatloss::radiated_flux(s.emissivity, ts, s.t_surround);
+    let h_rad = crate::engine::heatloss::radiation_coefficient(s.emissivity, ts, env.t_radiant);
+    let rad_flux = crate::engine::heatloss::radiated_flux(s.emissivity, ts, env.t_radiant);
     let area_unit = crate::engine::heatloss::outer_area(s.shape, outer_d);
     let run = if s.shape.is_sphere() { 1.0 } else { s.length };
     let q_conv_unit = finite_result("convective heat flow", h * area_unit * dt)?;
     let q_rad_unit = finite_result("radiative heat flow", area_unit * rad_flux)?;
-    let q_unit = q_conv_unit + q_rad_unit;
+    let q_solar_unit = finite_result("absorbed solar heat", env.solar * area_unit)?;
+    // Indoors the solar term is 0.0 exactly: the sum is today's, bit for bit.
+    let q_unit = q_conv_unit + q_rad_unit - q_solar_unit;
     let q_per_length = s.shape.perimeter_over_d().map(|_| q_unit);
     let q_total = finite_result("heat flow", q_unit * run)?;
     let annual_energy = finite_result(
@@ -242,10 +260,12 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         outer_d,
         q_conv_unit,
         q_rad_unit,
+        q_solar_unit,
         h_rad,
         q_total,
         job: job_result.as_ref(),
         inside: &inside,
+        env: &env,
     };
     let working = if sweeps {
         working(s, &a, &w)
@@ -288,6 +308,18 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         q_conv_total: q_conv_unit * run,
         q_rad_total: q_rad_unit * run,
         h_rad,
+        sky_temp: env.outdoor.as_ref().map(|o| o.sky.temperature),
+        radiant_temp: env.outdoor.as_ref().map(|_| env.t_radiant),
+        solar_total: env.outdoor.as_ref().map(|_| q_solar_unit * run),
+        solar_per_length: env
+            .outdoor
+            .as_ref()
+            .and_then(|_| s.shape.perimeter_over_d().map(|_| q_solar_unit)),
+        wind_at_body: env.outdoor.as_ref().map(|o| o.wind_at_body),
+        yaw_factor: env
+            .outdoor
+            .as_ref()
+            .and_then(|o| o.yawed.then_some(env.yaw)),
         surface_temp: ts,
         outer_d,
         job: job_result,
@@ -334,15 +366,16 @@ pub(crate) fn quick(
     p: f64,
     fluid: Fluid,
     inside: &Inside,
+    env: &Surroundings,
 ) -> Result<(f64, f64, f64), EngineError> {
-    let stream = s.stream(p, fluid);
+    let stream = s.stream(p, fluid, env);
     let run = if s.shape == Shape::Sphere {
         1.0
     } else {
         s.length
     };
     if s.solved() {
-        let job = s.job_with(stream, inside);
+        let job = s.job_with(stream, inside, env);
         let sol = crate::engine::heatloss::solve_lean(&job)?;
         Ok((sol.q * run, sol.t_surface, sol.loss.h_conv))
     } else {
@@ -351,9 +384,10 @@ pub(crate) fn quick(
             s.diameter,
             s.surface_temp,
             s.emissivity,
-            s.t_surround,
+            env.t_radiant,
         )?;
-        Ok(((l.q_conv + l.q_rad) * run, s.surface_temp, l.h_conv))
+        let sun = env.solar * crate::engine::heatloss::outer_area(s.shape, s.diameter);
+        Ok(((l.q_conv + l.q_rad - sun) * run, s.surface_temp, l.h_conv))
     }
 }
 

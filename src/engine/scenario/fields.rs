@@ -53,6 +53,16 @@ pub enum Field {
     Price,
     Efficiency,
     CoolTarget,
+    Cloud,
+    GroundTemp,
+    SkyView,
+    BeamNormal,
+    DiffuseHorizontal,
+    GlobalHorizontal,
+    Absorptance,
+    Albedo,
+    BodyHeight,
+    Yaw,
 }
 
 /// The group a field is shown in.
@@ -65,6 +75,8 @@ pub enum Group {
     /// The optional third point of the layers' k(T): folded on the page.
     LayerCurve,
     Job,
+    /// Sky, sun and wind at the body: outdoors only.
+    Outdoors,
 }
 
 /// One input, the single source of truth for it: identity, group, link key, label and help as
@@ -211,12 +223,21 @@ fn process_cp_typed(s: &Scenario) -> bool {
 fn cools(s: &Scenario) -> bool {
     s.cools()
 }
+fn indoors(s: &Scenario) -> bool {
+    !s.outdoors()
+}
+fn outdoors(s: &Scenario) -> bool {
+    s.outdoors()
+}
+fn yawed(s: &Scenario) -> bool {
+    s.outdoors() && s.yaw_applies()
+}
 
 #[rustfmt::skip]
-pub const FIELDS: [FieldSpec; 47] = [
+pub const FIELDS: [FieldSpec; 57] = [
     f(Field::Diameter, Group::Body, "D", "Size D", Dim::Length, (0.0, true, 100.0), "as drawn: the width across the stream (bare outside diameter of a pipe)", at!(diameter), always),
     f(Field::Length, Group::Body, "L", "Length", Dim::RunLength, (0.0, true, 10_000.0), "along the axis; the height when upright", at!(length), not_sphere),
-    f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air", at!(speed), always),
+    f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air; outdoors, the wind a weather report gives (10 m over open ground)", at!(speed), always),
     f(Field::FluidTemp, Group::Stream, "Ta", "Stream temperature", Dim::Temperature, (0.0, true, 3000.0), "of the approaching fluid", at!(fluid_temp), always),
     f(Field::Pressure, Group::Stream, "p", "Pressure", Dim::Pressure, (0.0, true, 100e6), "absolute, at the site", at!(pressure), pressure_typed),
     f(Field::Elevation, Group::Stream, "z", "Site elevation", Dim::Elevation, (-500.0, false, 11_000.0), "above sea level; standard atmosphere", at!(elevation), elevation_typed),
@@ -235,7 +256,7 @@ pub const FIELDS: [FieldSpec; 47] = [
     f(Field::WallThickness, Group::Surface, "tw", "Wall thickness", Dim::Length, (0.0, false, 1.0), "of the pipe or vessel", at!(wall_thickness), solved),
     f(Field::WallK, Group::Surface, "kw", "Wall conductivity", Dim::ThermalConductivity, (0.0, true, 1e4), "of your wall material", at!(wall_k), wall_typed),
     f(Field::Emissivity, Group::Surface, "e", "Emissivity", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 painted or oxidised, 0.1 bright aluminium (common practice)", at!(emissivity), always),
-    f(Field::Surround, Group::Surface, "Tr", "Surroundings temperature", Dim::Temperature, (0.0, true, 3000.0), "what the surface sees (sky, walls); the stream's if unsure", at!(t_surround), always),
+    f(Field::Surround, Group::Surface, "Tr", "Surroundings temperature", Dim::Temperature, (0.0, true, 3000.0), "what the surface sees (walls, roof); the stream's if unsure", at!(t_surround), indoors),
     f(Field::Layer1T, Group::Layers, "t1", "Layer 1 thickness", Dim::Length, (0.0, false, 2.0), "innermost insulation", at!(layer_t[0]), layer_1),
     f(Field::Layer1Ka, Group::Layers, "ka1", "Layer 1 k at mean temperature A", Dim::LayerConductivity, (0.0, true, 100.0), "from the data sheet", at!(layer_ka[0]), layer_1),
     f(Field::Layer1Kb, Group::Layers, "kb1", "Layer 1 k at mean temperature B", Dim::LayerConductivity, (0.0, true, 100.0), "the same as at A for a constant k", at!(layer_kb[0]), layer_1),
@@ -261,6 +282,16 @@ pub const FIELDS: [FieldSpec; 47] = [
     f(Field::Price, Group::Job, "pe", "Energy price", Dim::EnergyPrice, (0.0, false, 1e-4), "of the fuel or power that makes up the loss", at!(price), always),
     f(Field::Efficiency, Group::Job, "ef", "Heater or boiler efficiency", Dim::Fraction, (0.01, false, 1.0), "share of that energy that becomes heat", at!(efficiency), always),
     f(Field::CoolTarget, Group::Job, "T1", "Cool or warm a solid body to", Dim::Temperature, (0.0, true, 3000.0), "its cooling time in this stream (material above)", at!(cool_target), cools),
+    f(Field::Cloud, Group::Outdoors, "cc", "Cloud cover", Dim::Oktas, (0.0, false, 8.0), "0 clear (the coldest sky: the worst case for freezing and sweating) to 8 overcast", at!(cloud), outdoors),
+    f(Field::GroundTemp, Group::Outdoors, "Tg", "Ground temperature", Dim::Temperature, (0.0, true, 3000.0), "what the lower half sees; the air's if unsure", at!(t_ground), outdoors),
+    f(Field::SkyView, Group::Outdoors, "fs", "Share of the view that is sky", Dim::Ratio, (0.0, false, 1.0), "0.5 in the open; less under a canopy or beside a wall", at!(sky_view), outdoors),
+    f(Field::BeamNormal, Group::Outdoors, "Gb", "Direct sunlight", Dim::HeatFlux, (0.0, false, 1500.0), "beam irradiance facing the sun; 0 at night, about 900 at a clear noon (common practice)", at!(beam_normal), outdoors),
+    f(Field::DiffuseHorizontal, Group::Outdoors, "Gd", "Diffuse sunlight", Dim::HeatFlux, (0.0, false, 1500.0), "from the sky on level ground; about 100 clear, more under thin cloud (common practice)", at!(diffuse), outdoors),
+    f(Field::GlobalHorizontal, Group::Outdoors, "Gg", "Global sunlight on level ground", Dim::HeatFlux, (0.0, false, 1500.0), "direct plus diffuse on the ground: what the ground reflects", at!(global), outdoors),
+    f(Field::Absorptance, Group::Outdoors, "as", "Solar absorptance", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 dark paint, 0.3 white paint, 0.15 bright aluminium (common practice)", at!(absorptance), outdoors),
+    f(Field::Albedo, Group::Outdoors, "alb", "Ground reflectance", Dim::Ratio, (0.0, false, 1.0), "about 0.2 grass or soil, 0.3 concrete, 0.8 fresh snow (common practice)", at!(albedo), outdoors),
+    f(Field::BodyHeight, Group::Outdoors, "zb", "Height above ground", Dim::RunLength, (0.0, true, 1000.0), "of the body: the wind there is less than the report's at 10 m", at!(body_height), outdoors),
+    f(Field::Yaw, Group::Outdoors, "yaw", "Wind angle to the axis", Dim::Angle, (0.0, false, 90.0), "90° square across (the most cooling), 0° along it", at!(yaw), yawed),
 ];
 
 /// The row of a field: `FIELDS` is in `Field`'s order (a test holds it so).

@@ -51,6 +51,14 @@ pub fn to_fragment(s: &Scenario, system: System) -> String {
             HumidityInput::DewPoint => "&hm=td",
         });
     }
+    // Outdoors only: an indoor link reads as it always has.
+    if s.outdoors() {
+        out.push_str(&format!(
+            "&env={}&tc={}",
+            s.setting.id(),
+            s.terrain.category()
+        ));
+    }
     for spec in FIELDS.iter().filter(|sp| s.uses(sp.field)) {
         out.push_str(&format!("&{}={}", spec.key, s.get(spec.field)));
     }
@@ -175,6 +183,15 @@ pub fn from_fragment(fragment: &str) -> Result<(Scenario, System), String> {
                     "z" => PressureInput::Elevation,
                     _ => return Err("the link names an unknown way to give pressure".into()),
                 }
+            }
+            "env" => {
+                s.setting = Setting::from_id(value).ok_or_else(|| {
+                    "the link names an unknown setting (indoors or outdoors)".to_string()
+                })?
+            }
+            "tc" => {
+                s.terrain = terrain_from_id(value)
+                    .ok_or_else(|| "the link names an unknown terrain category".to_string())?
             }
             "hm" => {
                 s.humidity_input = match value {

@@ -111,8 +111,10 @@ impl Scenario {
         }
     }
 
-    /// The body in its stream at pressure `p`, as the correlations see it (surface as typed).
-    pub fn stream(&self, p: f64, fluid: Fluid) -> Body {
+    /// The body in its stream at pressure `p`, as the correlations see it (surface as typed):
+    /// the typed speed times the surroundings' wind ratio, with their yaw factor (both 1
+    /// indoors).
+    pub fn stream(&self, p: f64, fluid: Fluid, env: &Surroundings) -> Body {
         Body {
             shape: self.shape,
             axis: self.axis,
@@ -123,30 +125,33 @@ impl Scenario {
             },
             d: self.diameter,
             length: self.length,
-            speed: self.speed,
+            speed: self.speed * env.wind_ratio,
             t_inf: self.fluid_temp,
             t_s: self.surface_temp,
             p,
             fluid,
+            yaw: env.yaw,
         }
     }
 
-    /// The field job: this scenario's process, construction and radiation around `stream`.
-    pub fn job(&self, stream: Body) -> Job {
+    /// The field job: this scenario's process, construction and radiation around `stream`, the
+    /// surface radiating to the surroundings' temperature and absorbing their sun.
+    pub fn job(&self, stream: Body, env: &Surroundings) -> Job {
         Job {
             stream,
             process_temp: self.process_temp,
             h_inside: (self.h_inside > 0.0).then_some(self.h_inside),
             construction: self.construction(),
             emissivity: self.emissivity,
-            t_surround: self.t_surround,
+            t_surround: env.t_radiant,
+            solar: env.solar,
         }
     }
 
     /// As [`Scenario::job`], with the inside film of [`Scenario::inside_flow`] in place of the
     /// typed one when a process fluid is chosen.
-    pub fn job_with(&self, stream: Body, inside: &Inside) -> Job {
-        let mut j = self.job(stream);
+    pub fn job_with(&self, stream: Body, inside: &Inside, env: &Surroundings) -> Job {
+        let mut j = self.job(stream, env);
         match inside {
             Inside::Typed => {}
             Inside::Still(_) => j.h_inside = None,
@@ -208,7 +213,9 @@ pub(crate) struct Case {
     pub inside: Inside,
     pub targets: Targets,
     pub job: Option<Job>,
-    /// Flags found while lowering (the standard atmosphere's range).
+    /// What the surroundings bring: radiant temperature, sun, wind ratio and yaw.
+    pub env: Surroundings,
+    /// Flags found while lowering (the standard atmosphere's range, the sky and wind models).
     pub flags: Vec<Flag>,
 }
 
@@ -248,7 +255,11 @@ impl Scenario {
             }
             _ => None,
         };
-        let stream = self.stream(p, fluid);
+        let env = self.surroundings(dew_point, p)?;
+        if let Some(o) = &env.outdoor {
+            flags.extend(o.flags.iter().cloned());
+        }
+        let stream = self.stream(p, fluid, &env);
         let inside = self.inside_flow()?;
         let targets = Targets {
             touch_limit: self.touch_limit,
@@ -301,7 +312,7 @@ impl Scenario {
                     "the third data-sheet point needs its own mean temperature, apart from A and B",
             });
             }
-            Some(self.job_with(stream, &inside))
+            Some(self.job_with(stream, &inside, &env))
         } else {
             None
         };
@@ -313,6 +324,7 @@ impl Scenario {
             inside,
             targets,
             job,
+            env,
             flags,
         })
     }

@@ -23,6 +23,10 @@ mod evaluate;
 mod fields;
 mod link;
 mod lower;
+mod outdoor;
+#[cfg(test)]
+mod outdoor_tests;
+mod outdoor_working;
 #[cfg(test)]
 mod tests;
 mod working;
@@ -33,6 +37,7 @@ pub use evaluate::*;
 pub use fields::*;
 pub use link::*;
 pub(crate) use lower::Case;
+pub use outdoor::*;
 pub(crate) use working::*;
 
 /// The inputs, SI: lengths m, speed m/s, temperatures K, pressure Pa, elevation m, fractions 0–1,
@@ -99,6 +104,28 @@ pub struct Scenario {
     pub loss_target: f64,
     /// Time still water must hold out before it has frozen through, s (0: none).
     pub freeze_target: f64,
+    /// Indoors (today's single surroundings temperature) or outdoors (issue #19).
+    pub setting: Setting,
+    /// Outdoors: the terrain around the body (EN 1991-1-4 category).
+    pub terrain: Terrain,
+    /// Outdoors: cloud cover, oktas (0 clear – 8 overcast).
+    pub cloud: f64,
+    /// Outdoors: the ground's temperature, K (follows the stream's until set apart).
+    pub t_ground: f64,
+    /// Outdoors: the share of the surface's view that is sky, 0–1.
+    pub sky_view: f64,
+    /// Outdoors: beam irradiance normal to the sun, diffuse and global on the horizontal, W/m².
+    pub beam_normal: f64,
+    pub diffuse: f64,
+    pub global: f64,
+    /// Outdoors: solar absorptance of the outer surface, 0–1.
+    pub absorptance: f64,
+    /// Outdoors: the ground's solar reflectance, 0–1.
+    pub albedo: f64,
+    /// Outdoors: the body's height above the ground, m.
+    pub body_height: f64,
+    /// Outdoors: the wind's angle to the axis, degrees (90: square to it).
+    pub yaw: f64,
 }
 
 /// The demo that opens by default (invented): a bare 2-inch line (60.3 mm outside diameter), a
@@ -160,6 +187,23 @@ pub const DEMO: Scenario = Scenario {
     cool_target: 313.15,
     loss_target: 0.0,
     freeze_target: 0.0,
+    setting: Setting::Indoors,
+    terrain: Terrain::Open,
+    // Clear: the coldest sky, the worst case for freezing and sweating.
+    cloud: 0.0,
+    t_ground: 278.15,
+    sky_view: 0.5,
+    // Night: no sun.
+    beam_normal: 0.0,
+    diffuse: 0.0,
+    global: 0.0,
+    // Dark paint or weathered steel (common practice).
+    absorptance: 0.9,
+    // Grass and soil (common practice).
+    albedo: 0.2,
+    // A low pipe rack (invented round value).
+    body_height: 3.0,
+    yaw: 90.0,
 };
 
 pub const DEMO_TITLE: &str = "Demo: a bare 2-inch line on a windy roof";

@@ -11,10 +11,13 @@ pub(crate) struct WorkingInputs<'a> {
     pub(crate) outer_d: f64,
     pub(crate) q_conv_unit: f64,
     pub(crate) q_rad_unit: f64,
+    /// Absorbed sun per metre (W/m) or for a sphere (W); 0 indoors.
+    pub(crate) q_solar_unit: f64,
     pub(crate) h_rad: f64,
     pub(crate) q_total: f64,
     pub(crate) job: Option<&'a JobResult>,
     pub(crate) inside: &'a Inside,
+    pub(crate) env: &'a Surroundings,
 }
 
 /// One property set in words for the working: "`fluid` `at` T K, p Pa: ρ = …".
@@ -90,9 +93,10 @@ pub(crate) fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step
         out.push(Step {
             title: "Surface temperature (energy balance)",
             text: format!(
-                "Process {} K inside; conduction through the wall and {} insulation layer(s) (integral-mean k) equals convection plus radiation outside. Solved for the heat flow by bracketed regula falsi (Anderson–Björck) in {} iterations, residual {} W/m (or W); outer diameter {} m. Bore {} K, then {}.",
+                "Process {} K inside; conduction through the wall and {} insulation layer(s) (integral-mean k) equals convection plus radiation outside{}. Solved for the heat flow by bracketed regula falsi (Anderson–Björck) in {} iterations, residual {} W/m (or W); outer diameter {} m. Bore {} K, then {}.",
                 g(s.process_temp),
                 s.layer_count,
+                if w.env.outdoor.is_some() { " less the absorbed sun" } else { "" },
                 sol.iterations,
                 format_sig(sol.residual, 2),
                 g(sol.outer_d),
@@ -148,7 +152,7 @@ pub(crate) fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step
         title: "Reynolds and Prandtl numbers",
         text: format!(
             "Re = U·D/ν = {} m/s × {} m / {} m²/s = {}; Pr = {} (at {})",
-            g(s.speed),
+            g(s.speed * w.env.wind_ratio),
             g(w.outer_d),
             g(at.nu),
             g(rec.groups.re),
@@ -231,13 +235,13 @@ pub(crate) fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step
         text: format!(
             "q_rad = ε·σ·(Ts⁴ − Tsur⁴) per m² with ε = {}, σ = 5.670374419×10⁻⁸ W/(m²·K⁴), Tsur = {} K; linearised h_rad = εσ(Ts² + Tsur²)(Ts + Tsur) = {} W/(m²·K)",
             g(s.emissivity),
-            g(s.t_surround),
+            g(w.env.t_radiant),
             g(w.h_rad)
         ),
     });
     let dt = w.ts - s.fluid_temp;
-    let text = match s.shape.perimeter_over_d() {
-        Some(k) => format!(
+    let text = match (s.shape.perimeter_over_d(), w.env.outdoor.is_some()) {
+        (Some(k), false) => format!(
             "q′ = h·P·(Ts − T∞) + q′_rad = {} × {} m × {} K + {} W/m = {} W/m, P = {}·D; over L = {} m: Q = {} W",
             g(a.h),
             g(k * w.outer_d),
@@ -248,7 +252,19 @@ pub(crate) fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step
             g(s.length),
             g(w.q_total)
         ),
-        None => format!(
+        (Some(k), true) => format!(
+            "q′ = h·P·(Ts − T∞) + q′_rad − q′_sun = {} × {} m × {} K + {} W/m − {} W/m = {} W/m, P = {}·D (the sun a gain); over L = {} m: Q = {} W",
+            g(a.h),
+            g(k * w.outer_d),
+            g(dt),
+            g(w.q_rad_unit),
+            g(w.q_solar_unit),
+            g(w.q_conv_unit + w.q_rad_unit - w.q_solar_unit),
+            g(k),
+            g(s.length),
+            g(w.q_total)
+        ),
+        (None, false) => format!(
             "Q = h·π·D²·(Ts − T∞) + Q_rad = {} × π × ({} m)² × {} K + {} W = {} W",
             g(a.h),
             g(w.outer_d),
@@ -256,10 +272,27 @@ pub(crate) fn working(s: &Scenario, a: &Analysis, w: &WorkingInputs) -> Vec<Step
             g(w.q_rad_unit),
             g(w.q_total)
         ),
+        (None, true) => format!(
+            "Q = h·π·D²·(Ts − T∞) + Q_rad − Q_sun = {} × π × ({} m)² × {} K + {} W − {} W = {} W (the sun a gain)",
+            g(a.h),
+            g(w.outer_d),
+            g(dt),
+            g(w.q_rad_unit),
+            g(w.q_solar_unit),
+            g(w.q_total)
+        ),
     };
     out.push(Step {
         title: "Heat flow",
         text,
     });
+    if let Some(o) = &w.env.outdoor {
+        let at = out
+            .iter()
+            .position(|st| st.title == "Temperatures")
+            .unwrap_or(out.len());
+        let steps = super::outdoor_working::steps(s, o, w);
+        out.splice(at..at, steps);
+    }
     out
 }

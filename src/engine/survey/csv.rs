@@ -2,7 +2,7 @@
 //! header row, in the unit system chosen.
 //!
 //! Columns: `name`, `tag`, `location`; the choice keys of the link (`s`, `ax`, `w`, `f`, `pm`, `hm`,
-//! `sm`, `wm`, `nl`; blank where the link leaves them out); then every numeric input as
+//! `sm`, `wm`, `nl`, `hf`, `env`, `tc`; blank where the link leaves them out); then every numeric input as
 //! `label (key) [unit id]`, e.g. `Size D (D) [mm]`, `Stream temperature (Ta) [C]` (files with the
 //! bare `key [unit id]` of earlier versions still read), blank where the item does not use it;
 //! then the results (`Result: …`) and verdicts (`Verdict: …`), which the import ignores; last
@@ -16,8 +16,11 @@ use crate::engine::units::{self, Dim, System, UnitChoice};
 use super::{evaluate_item, Figure, Figures};
 
 /// The link keys of the choices, one CSV column each (`hf`, the inside film, was missing: a CSV
-/// round trip lost a worked-out inside film and its glycol content).
-pub const CHOICE_KEYS: [&str; 10] = ["s", "ax", "w", "f", "pm", "hm", "sm", "wm", "nl", "hf"];
+/// round trip lost a worked-out inside film and its glycol content; `env` and `tc`, outdoors and
+/// its terrain category, are blank indoors).
+pub const CHOICE_KEYS: [&str; 12] = [
+    "s", "ax", "w", "f", "pm", "hm", "sm", "wm", "nl", "hf", "env", "tc",
+];
 
 /// The verdict columns of the CSV: the card's id and the column's heading.
 const VERDICT_COLUMNS: [(&str, &str); 6] = [

@@ -97,6 +97,8 @@ pub fn resolution(u: &Unit) -> Resolution {
         (Dim::Pressure | Dim::Density | Dim::SpecificHeat, _) => sig(4),
         (Dim::KinematicViscosity | Dim::DynamicViscosity, _) => sig(4),
         (Dim::Ratio, _) => sig_at_least(2, 2),
+        (Dim::Angle, _) => step(0),
+        (Dim::Oktas, _) => step(1),
         _ => sig(3),
     }
 }

@@ -45,10 +45,16 @@ pub enum Dim {
     /// An insulation's conductivity: the same quantity as `ThermalConductivity`, in the units of
     /// insulation data sheets (Btu·in/(h·ft²·°F) in US units).
     LayerConductivity,
+    /// An angle, degrees (the wind's angle to an axis).
+    Angle,
+    /// A heat flux or an irradiance, W/m².
+    HeatFlux,
+    /// Cloud cover in oktas (eighths of the sky), 0–8.
+    Oktas,
 }
 
 /// Every dimension, in the order the page lists them.
-pub const ALL_DIMS: [Dim; 25] = [
+pub const ALL_DIMS: [Dim; 28] = [
     Dim::Temperature,
     Dim::Length,
     Dim::Speed,
@@ -74,6 +80,9 @@ pub const ALL_DIMS: [Dim; 25] = [
     Dim::MoneyPerYear,
     Dim::MassFlow,
     Dim::LayerConductivity,
+    Dim::Angle,
+    Dim::HeatFlux,
+    Dim::Oktas,
 ];
 
 /// A unit system for the global switch.
@@ -233,6 +242,16 @@ pub const UNITS: &[Unit] = &[
     u("kg/s", "kg/s", Dim::MassFlow, 1.0, 0.0),
     u("kg/h", "kg/h", Dim::MassFlow, 1.0 / HOUR, 0.0),
     u("lb/h", "lb/h", Dim::MassFlow, LB / HOUR, 0.0),
+    u("deg", "°", Dim::Angle, 1.0, 0.0),
+    u("W/m2", "W/m²", Dim::HeatFlux, 1.0, 0.0),
+    u(
+        "Btu/hft2",
+        "Btu/(h·ft²)",
+        Dim::HeatFlux,
+        BTU_IT / HOUR / (FT * FT),
+        0.0,
+    ),
+    u("okta", "oktas", Dim::Oktas, 1.0, 0.0),
 ];
 
 impl Unit {
@@ -311,6 +330,10 @@ pub fn default_unit(dim: Dim, system: System) -> &'static Unit {
         (Dim::MassFlow, System::Us) => "lb/h",
         (Dim::LayerConductivity, System::Si) => "W/mK-ins",
         (Dim::LayerConductivity, System::Us) => "Btuin/hft2F",
+        (Dim::Angle, _) => "deg",
+        (Dim::HeatFlux, System::Si) => "W/m2",
+        (Dim::HeatFlux, System::Us) => "Btu/hft2",
+        (Dim::Oktas, _) => "okta",
     };
     unit(id).expect("every default unit is in UNITS")
 }
