@@ -18,6 +18,28 @@ const BADGES: [(&str, &str); 6] = [
     ("cooling", "Cooling"),
 ];
 
+/// A survey item's checks in a few words: the verdicts that need attention by their badge names
+/// ("⚠ Touch, Freeze"), "✓" when every one that applies is fine, "—" when none applies.
+pub(super) fn failing(verdicts: &[(&'static str, bool)]) -> String {
+    let named: Vec<(&str, bool)> = verdicts
+        .iter()
+        .filter_map(|(id, ok)| BADGES.iter().find(|(b, _)| b == id).map(|(_, n)| (*n, *ok)))
+        .collect();
+    if named.is_empty() {
+        return "—".into();
+    }
+    let bad: Vec<&str> = named
+        .iter()
+        .filter(|(_, ok)| !ok)
+        .map(|(n, _)| *n)
+        .collect();
+    if bad.is_empty() {
+        "✓".into()
+    } else {
+        format!("⚠ {}", bad.join(", "))
+    }
+}
+
 /// Bring the element that `selector` finds into view below the bar (the page's scroll padding
 /// keeps it clear of the bar).
 fn go_to(selector: &str) {

@@ -11,9 +11,7 @@ fn with_unit(v: f64, d: Dim, c: &UnitChoice) -> String {
     crate::engine::units::show(v, c.get(d))
 }
 
-/// The plots' drawing width in SVG units: narrower on a phone, so that their 11–12 unit text
-/// stays at least 11 px on screen where the plot is about 300 px wide.
-fn plot_width() -> f64 {
+fn width_class() -> f64 {
     let w = window()
         .inner_width()
         .ok()
@@ -24,6 +22,30 @@ fn plot_width() -> f64 {
     } else {
         480.0
     }
+}
+
+thread_local! {
+    static PLOT_WIDTH: std::cell::OnceCell<RwSignal<f64>> = const { std::cell::OnceCell::new() };
+}
+
+/// The plots' drawing width in SVG units: narrower on a phone, so that their 11–12 unit text
+/// stays at least 11 px on screen where the plot is about 300 px wide. Reactive: a turn of the
+/// phone or a resized window that crosses the width redraws the plots (and only then).
+fn plot_width() -> f64 {
+    PLOT_WIDTH
+        .with(|c| {
+            *c.get_or_init(|| {
+                let sig = RwSignal::new(width_class());
+                let _ = window_event_listener(leptos::ev::resize, move |_| {
+                    let w = width_class();
+                    if sig.get_untracked() != w {
+                        sig.set(w);
+                    }
+                });
+                sig
+            })
+        })
+        .get()
 }
 
 /// Forced correlations side by side, natural convection and the blend below them.

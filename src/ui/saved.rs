@@ -392,8 +392,9 @@ pub fn SavedPanel(
                     } else {
                         format!("⚠ {}", r.flags)
                     },
+                    super::answer::failing(&r.verdicts),
                 ),
-                Err(e) => (format!("⚠ {e}"), "—".into(), "—".into()),
+                Err(e) => (format!("⚠ {e}"), "—".into(), "—".into(), "—".into()),
             }
         };
         let figs = Memo::new(move |_| figs());
@@ -470,6 +471,7 @@ pub fn SavedPanel(
                 <th scope="row"><button type="button" class="item-open" data-open on:click=open title="Open this item">{label.clone()}</button><small>{sub}</small></th>
                 <td data-item-loss data-label="Heat loss">{move || figs.get().0}</td>
                 <td data-label="Surface">{move || figs.get().1}</td>
+                <td data-label="Checks" data-item-checks>{move || figs.get().3}</td>
                 <td data-label="Range">{move || figs.get().2}</td>
                 <td class="item-menu">
                     <details class="menu">
@@ -504,7 +506,7 @@ pub fn SavedPanel(
             <tr class="totals" data-totals>
                 <th scope="row">{format!("Total of {n} item(s)")}</th>
                 <td data-total-loss>{u(q, Dim::HeatFlow)}</td>
-                <td colspan="3">{format!("{} · {}", u(e, Dim::EnergyPerYear), u(m, Dim::MoneyPerYear))}</td>
+                <td colspan="4">{format!("{} · {}", u(e, Dim::EnergyPerYear), u(m, Dim::MoneyPerYear))}</td>
             </tr>
         }
     };
@@ -571,7 +573,7 @@ pub fn SavedPanel(
                         <div class="table-wrap" tabindex="0" role="region" aria-label="Survey list (scrolls sideways)">
                 <table class="saved-list" data-saved-list>
                     <caption>"Survey list: every saved item with its results"</caption>
-                    <thead><tr><th scope="col">"Item"</th><th scope="col">"Heat loss"</th><th scope="col">"Surface"</th><th scope="col">"Range"</th><th scope="col">"Actions"</th></tr></thead>
+                    <thead><tr><th scope="col">"Item"</th><th scope="col">"Heat loss"</th><th scope="col">"Surface"</th><th scope="col">"Checks"</th><th scope="col">"Range"</th><th scope="col">"Actions"</th></tr></thead>
                     <tbody><For each=sorted key=|(it, _)| (it.name.clone(), it.tag.clone(), it.location.clone(), it.link.clone()) children=row/></tbody>
                     <tfoot>{totals}</tfoot>
                 </table>

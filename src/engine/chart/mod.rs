@@ -384,12 +384,23 @@ pub fn nice_step(span: f64) -> f64 {
     }
     let raw = span / 5.0;
     let e = 10f64.powf(raw.log10().floor());
+    // A span converted between units carries rounding noise (0.1 m is 100.00000000000001 mm):
+    // it must not push the step to the next size.
     for m in [1.0, 2.0, 5.0] {
-        if m * e >= raw {
+        if m * e >= raw * (1.0 - 1e-9) {
             return m * e;
         }
     }
     10.0 * e
+}
+
+/// `v` rounded down (up) to a multiple of `step`, a value within rounding noise of a multiple
+/// taken as that multiple (so the axis ends at the data, not a step beyond it).
+fn snap_down(v: f64, step: f64) -> f64 {
+    (v / step + 1e-9).floor() * step
+}
+fn snap_up(v: f64, step: f64) -> f64 {
+    (v / step - 1e-9).ceil() * step
 }
 
 /// Frame `xs`, `ys` (already in the units shown) with bounds rounded to ticks; `also` are y values
@@ -431,14 +442,8 @@ pub fn line_chart(xs: &[f64], ys: &[f64], also: &[f64], width: f64, height: f64)
         width,
         height,
         margin: (52.0, 12.0, 22.0, 34.0),
-        x: (
-            (x0 / x_step).floor() * x_step,
-            (x1 / x_step).ceil() * x_step,
-        ),
-        y: (
-            (y0 / y_step).floor() * y_step,
-            (y1 / y_step).ceil() * y_step,
-        ),
+        x: (snap_down(x0, x_step), snap_up(x1, x_step)),
+        y: (snap_down(y0, y_step), snap_up(y1, y_step)),
         log_x: false,
         log_y: false,
     };
@@ -472,5 +477,16 @@ mod line_tests {
         assert_eq!(c.x_step, 0.02);
         assert!(c.path.starts_with('M') && !c.path.contains("NaN"));
         assert_eq!(nice_step(0.0), 1.0);
+    }
+
+    /// Regression: a 0–0.1 m sweep shown in mm (0.1 / 0.001 = 100.00000000000001) drew its
+    /// axis to 150 mm, a third of the plot empty.
+    #[test]
+    fn an_axis_ends_at_its_data_despite_conversion_noise() {
+        let to_mm = |v: f64| v / 0.001;
+        let xs = [to_mm(0.0), to_mm(0.05), to_mm(0.1)];
+        let c = line_chart(&xs, &[3.0, 2.0, 1.0], &[], 480.0, 240.0);
+        assert_eq!(c.x_step, 20.0);
+        assert_eq!(c.frame.x, (0.0, 100.0));
     }
 }

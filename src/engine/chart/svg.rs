@@ -156,10 +156,34 @@ pub fn sweep_figure(s: &Sweep) -> String {
     let (l, r, _, _) = f.margin;
     let mut g = Svg::new(w, h, "", s.title);
     g.frame(f, &f.x_ticks(chart.x_step), &f.y_ticks(chart.y_step), true);
+    // A limit line's words go at the end of the line away from where the curve crosses it (a
+    // surface falling with thickness crosses a high limit near the left, a low one near the
+    // right), and below the line when it runs along the frame's top.
+    let top = f.margin.2;
     for (label, v) in &tv {
         let (_, y) = f.to_svg(f.x.0, *v);
         g.line((l, y), (w - r, y), "target");
-        g.text((w - r - 4.0, y - 4.0), "tick", "end", label);
+        let pts: Vec<(f64, f64)> = xv
+            .iter()
+            .zip(&yv)
+            .filter(|(x, y)| x.is_finite() && y.is_finite())
+            .map(|(x, y)| (*x, *y))
+            .collect();
+        let crossing = pts
+            .windows(2)
+            .find(|p| (p[0].1 - v) * (p[1].1 - v) <= 0.0)
+            .map(|p| p[0].0);
+        let left = match (crossing, pts.first(), pts.last()) {
+            (Some(xc), _, _) => xc > (f.x.0 + f.x.1) / 2.0,
+            (None, Some(a), Some(b)) => (a.1 - v).abs() > (b.1 - v).abs(),
+            _ => false,
+        };
+        let ty = if y - 16.0 < top { y + 14.0 } else { y - 4.0 };
+        if left {
+            g.text((l + 4.0, ty), "tick", "start", label);
+        } else {
+            g.text((w - r - 4.0, ty), "tick", "end", label);
+        }
     }
     g.path(&chart.path, "in sweep");
     if let Some((px, py)) = s.point {
@@ -319,21 +343,17 @@ pub fn section_svg(faces: &[f64], temps: &[f64], t_unit: &'static Unit) -> Strin
     if let Some(p0) = px.first() {
         g.circle((80.0, 90.0), (p0 * 10.0).round() / 10.0, "ring bore", "");
     }
+    // Each face's temperature to the right, tied to its ring by a leader line from the ring's
+    // right-hand edge; the list beside the drawing names each face in full.
+    let rows = temps.len().max(1) as f64;
     for (i, t) in temps.iter().enumerate() {
-        // Short names here (the list below the drawing gives them in full).
-        let name = match i {
-            0 => "bore".to_string(),
-            k if k == n => "surface".to_string(),
-            1 => "wall".to_string(),
-            k => format!("layer {}", k - 1),
-        };
-        g.text(
-            (165.0, 20.0 + 18.0 * i as f64),
-            "tick",
-            "start",
-            &format!("{name}: {}", show(*t, t_unit)),
-        );
+        let y = 90.0 + (i as f64 - (rows - 1.0) / 2.0) * 30.0;
+        let x_ring = 80.0 + px.get(i).copied().unwrap_or(0.0);
+        g.line((x_ring, 90.0), (200.0, y - 7.0), "lead");
+        g.circle((x_ring, 90.0), 2.5, "dot", "");
+        g.text((204.0, y), "tick", "start", &show(*t, t_unit));
     }
+    let _ = n;
     g.finish()
 }
 
@@ -387,8 +407,9 @@ mod tests {
             &[423.15, 423.0, 300.0],
             unit("F").unwrap(),
         );
-        assert!(m.contains("bore: 302.0 °F"), "{m}");
-        assert!(m.contains("surface: "));
-        assert_eq!(m.matches("<circle").count(), 3);
+        assert!(m.contains(">302.0 °F<"), "{m}");
+        // two rings, the bore, and a dot where each of the three faces' leader starts
+        assert_eq!(m.matches("<circle").count(), 6);
+        assert_eq!(m.matches(r#"class="lead""#).count(), 3);
     }
 }
