@@ -4,6 +4,7 @@
 use leptos::prelude::*;
 
 mod answer;
+mod markup;
 mod pickers;
 mod results;
 mod saved;
@@ -577,9 +578,7 @@ pub fn App() -> impl IntoView {
                     }}</dt><dd>{out_as("q_total", |o| Some(o.q_total), Some(Dim::HeatFlow), true)}{flag_mark}</dd></div>
                     <div class="main"><dt>"Surface temperature"</dt><dd>{out("surface_temperature", |o| Some(o.surface_temp), Some(Dim::Temperature))}</dd></div>
                 </dl>
-                <div class="verdicts" data-verdicts>
-                    {move || shown.with(|s| s.outcome.as_ref().map(|o| results::verdicts(o, &choice.get())))}
-                </div>
+                <div class="verdicts" data-verdicts inner_html=move || shown.with(|s| s.outcome.as_ref().map(|o| results::verdicts(o, &choice.get())).unwrap_or_default())></div>
                 <ul class="cautions" data-cautions>
                     {move || shown.with(|s| s.outcome.as_ref().map(|o| scenario::cautions(&scenario.get(), o).into_iter().map(|c| view! { <li class="caution">"⚠ "{c}</li> }).collect_view()))}
                 </ul>

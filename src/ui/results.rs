@@ -7,10 +7,6 @@ use crate::engine::chart;
 use crate::engine::scenario::{Outcome, Shape};
 use crate::engine::units::{format_sig, Dim, UnitChoice};
 
-fn with_unit(v: f64, d: Dim, c: &UnitChoice) -> String {
-    crate::engine::units::show(v, c.get(d))
-}
-
 fn width_class() -> f64 {
     let w = window()
         .inner_width()
@@ -48,77 +44,10 @@ fn plot_width() -> f64 {
         .get()
 }
 
-/// Forced correlations side by side, natural convection and the blend below them.
+/// Forced correlations side by side, natural convection and the blend below them (markup from
+/// `markup::correlation_table`).
 pub fn table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
-    let a = &o.analysis;
-    let rows = a
-        .forced
-        .iter()
-        .enumerate()
-        .map(|(i, e)| {
-            let rec = i == a.recommended;
-            let share = a.pick.weights.get(i).copied().unwrap_or(0.0);
-            let note = (share > 0.0 && share < 1.0).then(|| format!("{} % of the recommended value (handover)", format_sig(100.0 * share, 2)));
-            let flags = e.flags.iter().map(|f| view! { <li>{f.message()}</li> }).collect_view();
-            let status = if !e.valid() {
-                "outside its range"
-            } else if e.flags.is_empty() {
-                "in range"
-            } else {
-                "near a band edge"
-            };
-            view! {
-                <tr class:recommended=rec data-correlation=e.id data-h=format!("{}", e.h) data-valid=e.valid().to_string()>
-                    <th scope="row">{e.name}{rec.then_some(view! { <span class="rec-mark">" ★ recommended"</span> })}{note.map(|t| view! { <small class="detail">{t}</small> })}
-                        {e.detail().map(|d| view! { <small class="detail">{d}</small> })}</th>
-                    <td data-label="Properties at">{e.reference.short()}</td>
-                    <td data-label="Re">{format_sig(e.groups.re, 3)}</td>
-                    <td data-label="Nu">{format_sig(e.nu, 3)}</td>
-                    <td data-label="h">{with_unit(e.h, Dim::HeatTransferCoefficient, c)}</td>
-                    <td data-label="Range" class:warn=!e.valid()>{if e.valid() { "✓ " } else { "⚠ " }}{status}<ul class="row-flags">{flags}</ul></td>
-                </tr>
-            }
-        })
-        .collect_view();
-    let natural = a.natural.as_ref().map(|n| {
-        let flags = n.flags.iter().map(|f| view! { <li>{f.message()}</li> }).collect_view();
-        let ok = n.flags.is_empty();
-        view! {
-            <tr data-correlation=n.id data-h=format!("{}", n.h)>
-                <th scope="row">{n.name}" (still fluid)"</th>
-                <td data-label="Properties at">"Tf"</td>
-                <td data-label="Ra">{format_sig(n.ra, 3)}</td>
-                <td data-label="Nu">{format_sig(n.nu, 3)}</td>
-                <td data-label="h">{with_unit(n.h, Dim::HeatTransferCoefficient, c)}</td>
-                <td data-label="Range" class:warn=!ok>{if ok { "✓ in range" } else { "⚠ see note" }}<ul class="row-flags">{flags}</ul></td>
-            </tr>
-        }
-    });
-    let blend = a.natural.as_ref().map(|_| {
-        view! {
-            <tr class="answer" data-correlation="mixed">
-                <th scope="row">{format!("Blend of ★ and natural, n = {}", format_sig(a.exponent, 2))}</th>
-                <td class="empty">"—"</td>
-                <td class="empty">"—"</td>
-                <td data-label="Nu">{format_sig(o.nusselt, 3)}</td>
-                <td data-label="h">{with_unit(a.h, Dim::HeatTransferCoefficient, c)}</td>
-                <td data-label="Flow">{a.direction.describe()}</td>
-            </tr>
-        }
-    });
-    view! {
-        <div class="table-wrap" tabindex="0" role="region" aria-label="Correlations side by side (scrolls sideways)">
-            <table class="corr" data-table="correlations">
-                <caption class="sr-only">"Every correlation for this shape, each at its own reference temperature"</caption>
-                <thead><tr>
-                    <th scope="col">"Correlation"</th><th scope="col">"Properties at"</th>
-                    <th scope="col">"Re"</th><th scope="col">"Nu"</th><th scope="col">"h"</th><th scope="col">"Range"</th>
-                </tr></thead>
-                <tbody>{rows}</tbody>
-                <tbody class="extra">{natural}{blend}</tbody>
-            </table>
-        </div>
-    }
+    view! { <div inner_html=super::markup::correlation_table(o, c)></div> }
 }
 
 /// The Nu–Re plot of every correlation for the shape, operating points marked (markup written by
@@ -141,55 +70,11 @@ pub fn front_plot(o: &Outcome) -> Option<AnyView> {
     Some(view! { <figure class="plot" data-plot="front" inner_html=m></figure> }.into_any())
 }
 
-/// The verdict cards: touch, condensation, freezing, the run, insulated against bare.
-pub fn verdicts(o: &Outcome, c: &UnitChoice) -> impl IntoView {
-    let cards = o
-        .verdicts
-        .iter()
-        .map(|v| {
-            let figs = v
-                .figures
-                .iter()
-                .map(|(label, value, dim)| view! { <li><span>{*label}": "</span><strong>{with_unit(*value, *dim, c)}</strong></li> })
-                .collect_view();
-            view! {
-                <article class="verdict" class:warn=!v.ok data-verdict=v.id data-ok=v.ok.to_string()>
-                    <h3>{if v.ok { "✓ " } else { "⚠ " }}{v.title}</h3>
-                    <p>{v.summary.clone()}</p>
-                    {v.thickness.map(|th| view! { <p class="order" data-order>"The outer layer "<strong>{crate::engine::catalogue::order_text(th, c.get(Dim::Length))}</strong>"."</p> })}
-                    <ul>{figs}</ul>
-                    {v.caution.map(|t| view! { <p class="caution-note">{t}</p> })}
-                </article>
-            }
-        })
-        .collect_view();
-    let layers = o.job.as_ref().map(|j| {
-        let temps = j
-            .solution
-            .interfaces
-            .iter()
-            .enumerate()
-            .map(|(i, t)| {
-                let name = if i == 0 { "outside of the wall".to_string() } else { format!("outside of layer {i}") };
-                view! { <li>{name}": "{with_unit(*t, Dim::Temperature, c)}</li> }
-            })
-            .collect_view();
-        let notes = j.notes.iter().map(|n| view! { <p class="flag">"⚠ "{n.clone()}</p> }).collect_view();
-        let section = cross_section(j, c);
-        view! {
-            <article class="verdict" data-verdict="layers">
-                <h3>"Through the layers"</h3>
-                {section}
-                <ul>
-                    <li>"bore: "{with_unit(j.solution.t_bore, Dim::Temperature, c)}</li>
-                    {temps}
-                    <li>{format!("outer diameter: {}", with_unit(j.solution.outer_d, Dim::Length, c))}</li>
-                </ul>
-                {notes}
-            </article>
-        }
-    });
-    view! { {cards}{layers} }
+/// The verdict cards' markup: touch, condensation, freezing, the run, insulated against bare,
+/// and the card through the layers with its cross-section.
+pub fn verdicts(o: &Outcome, c: &UnitChoice) -> String {
+    let section = o.job.as_ref().map(|j| cross_section(j, c));
+    super::markup::verdict_cards(o, c, section.as_deref())
 }
 
 /// One swept series: label, dimension, values (SI).
@@ -348,8 +233,8 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
 }
 
 /// A cross-section of the wall and its layers, drawn to scale (each ring at least 3 px so a thin
-/// wall stays visible), with the temperature at each face.
-fn cross_section(j: &crate::engine::scenario::JobResult, c: &UnitChoice) -> impl IntoView {
+/// wall stays visible), with the temperature at each face: the SVG's markup.
+fn cross_section(j: &crate::engine::scenario::JobResult, c: &UnitChoice) -> String {
     let sol = &j.solution;
     // Radii of every face from the bore out, in metres.
     let mut faces = vec![j.r_in];
@@ -361,12 +246,12 @@ fn cross_section(j: &crate::engine::scenario::JobResult, c: &UnitChoice) -> impl
     let temps: Vec<f64> = std::iter::once(sol.t_bore)
         .chain(sol.interfaces.iter().copied())
         .collect();
-    let m = chart::svg::section_svg(&faces, &temps, c.get(Dim::Temperature));
-    view! { <div class="section-box" inner_html=m></div> }
+    chart::svg::section_svg(&faces, &temps, c.get(Dim::Temperature))
 }
 
 /// The one-page report, shown only when printing: inputs in use, results, flags, verdicts, the
-/// working's key steps, sources, cautions, the date, the item tag and location.
+/// working's key steps, sources, cautions, the date, the item tag and location (markup from
+/// `markup::report`; the person's name, tag and location are escaped there).
 pub fn report(
     o: &Outcome,
     s: &crate::engine::scenario::Scenario,
@@ -375,110 +260,23 @@ pub fn report(
     tag: &str,
     place: &str,
 ) -> impl IntoView {
-    use crate::engine::scenario::FIELDS;
     let date = js_sys::Date::new_0()
         .to_iso_string()
         .as_string()
         .unwrap_or_default();
     let date = date.get(..16).unwrap_or(&date).replace('T', " ");
-    // The inputs the item uses; a third k point left at 0 (none) is not one of them.
-    use crate::engine::scenario::Group;
-    let curved = FIELDS.iter().any(|sp| {
-        sp.group == Group::LayerCurve
-            && sp.dim != Dim::Temperature
-            && s.uses(sp.field)
-            && s.get(sp.field) > 0.0
-    });
-    let inputs = FIELDS
-        .iter()
-        .filter(|sp| s.uses(sp.field))
-        .filter(|sp| sp.group != Group::LayerCurve || (curved && (sp.dim == Dim::Temperature || s.get(sp.field) > 0.0)))
-        .map(|sp| view! { <div><dt>{sp.label}</dt><dd>{with_unit(s.get(sp.field), sp.dim, c)}</dd></div> })
-        .collect_view();
-    let mut figures = vec![
-        (
-            "Heat loss over the length or body",
-            with_unit(o.q_total, Dim::HeatFlow, c),
-        ),
-        (
-            "Surface temperature",
-            with_unit(o.surface_temp, Dim::Temperature, c),
-        ),
-        (
-            "Heat-transfer coefficient (convection)",
-            with_unit(o.h, Dim::HeatTransferCoefficient, c),
-        ),
-        ("Radiation part", with_unit(o.q_rad_total, Dim::HeatFlow, c)),
-        (
-            "Energy per year",
-            with_unit(o.annual_energy, Dim::EnergyPerYear, c),
-        ),
-        (
-            "Cost per year",
-            with_unit(o.annual_cost, Dim::MoneyPerYear, c),
-        ),
-    ];
-    if let Some(q) = o.q_per_length {
-        figures.insert(
-            0,
-            (
-                "Heat loss per length",
-                with_unit(q, Dim::HeatFlowPerLength, c),
-            ),
-        );
-    }
-    let figures = figures
-        .into_iter()
-        .map(|(k, v)| view! { <div><dt>{k}</dt><dd>{v}</dd></div> })
-        .collect_view();
-    let flags = o
-        .flags
-        .iter()
-        .map(|f| view! { <li>{f.message()}</li> })
-        .collect_view();
-    let verdicts = o
-        .verdicts
-        .iter()
-        .map(|v| {
-            let mut figs = v.figures.iter().map(|(l, x, d)| format!("{l}: {}", with_unit(*x, *d, c))).collect::<Vec<_>>();
-            if let Some(th) = v.thickness {
-                figs.push(format!("outer layer {}", crate::engine::catalogue::order_text(th, c.get(Dim::Length))));
-            }
-            let figs = figs.join("; ");
-            view! { <li><strong>{if v.ok { "✓ " } else { "⚠ " }}{v.title}</strong>": "{v.summary.clone()}" "{figs}</li> }
-        })
-        .collect_view();
-    let steps = o
-        .working
-        .iter()
-        .filter(|st| st.is_key())
-        .map(|st| view! { <li><strong>{st.title}</strong>": "{st.text.clone()}</li> })
-        .collect_view();
-    let sources = o.property_sources();
-    let cautions = crate::engine::scenario::cautions(s, o)
-        .into_iter()
-        .chain(o.verdicts.iter().filter_map(|v| v.caution))
-        .collect::<std::collections::BTreeSet<_>>()
-        .into_iter()
-        .map(|t| view! { <li>{t}</li> })
-        .collect_view();
-    view! {
-        <article class="report" data-report>
-            <h1>{if name.trim().is_empty() { "Leeward report".to_string() } else { format!("Leeward report: {}", name.trim()) }}</h1>
-            <p class="meta">{format!("{date} UTC · item {} · {}", if tag.is_empty() { "—" } else { tag }, if place.is_empty() { "location not given" } else { place })}</p>
-            <p class="meta">{format!("{}, {} in {}; recommended {} ({}).", o.shape.label(), o.analysis.mode(), o.fluid, o.method, o.regime)}</p>
-            <h2>"Results"</h2><dl class="kv results">{figures}</dl>
-            <h2>"Inputs used"</h2><dl class="kv">{inputs}</dl>
-            <h2>"Range notes"</h2>
-            {if o.flags.is_empty() { Some(view! { <p class="meta">"None: every method used is inside its published range here."</p> }) } else { None }}
-            <ul>{flags}</ul>
-            <h2>"Verdicts"</h2><ul>{verdicts}</ul>
-            <h2>"Working (summary)"</h2><ol>{steps}</ol>
-            <p class="meta">{format!("Property sources: {sources}. Correlations of this kind are good to about ±20–25 % (common practice).")}</p>
-            <h2>"Cautions"</h2><ul>{cautions}</ul>
-            <p class="meta">"Engineering estimates from published correlations. Local codes and licensed practice govern any decision about safety."</p>
-        </article>
-    }
+    let m = super::markup::report(
+        o,
+        s,
+        c,
+        &super::markup::Item {
+            name,
+            tag,
+            place,
+            date: &date,
+        },
+    );
+    view! { <article class="report" data-report inner_html=m></article> }
 }
 
 /// The spread of the correlations inside their ranges and the usual uncertainty, in words.
@@ -500,31 +298,5 @@ pub fn spread_text(o: &Outcome, c: &UnitChoice) -> String {
 
 /// The properties used, at each temperature the correlations read them, with their sources.
 pub fn property_table(o: &Outcome, c: &UnitChoice) -> impl IntoView {
-    let cell = |v: f64, d: Dim| with_unit(v, d, c);
-    let rows = o
-        .properties
-        .iter()
-        .map(|r| {
-            let p = &r.props;
-            view! {
-                <tr data-prop-row=r.role>
-                    <th scope="row">{r.role}<br/>{cell(p.t, Dim::Temperature)}</th>
-                    <td data-label="ρ">{cell(p.rho, Dim::Density)}</td>
-                    <td data-label="μ">{cell(p.mu, Dim::DynamicViscosity)}</td>
-                    <td data-label="k">{cell(p.k, Dim::ThermalConductivity)}</td>
-                    <td data-label="cp">{cell(p.cp, Dim::SpecificHeat)}</td>
-                    <td data-label="Pr">{format_sig(p.pr, 3)}</td>
-                </tr>
-            }
-        })
-        .collect_view();
-    let sources = o.property_sources();
-    view! {
-        <table class="props" data-props>
-            <caption>{format!("Properties of {} used", o.fluid)}</caption>
-            <thead><tr><th scope="col">"at"</th><th scope="col">"ρ"</th><th scope="col">"μ"</th><th scope="col">"k"</th><th scope="col">"cp"</th><th scope="col">"Pr"</th></tr></thead>
-            <tbody>{rows}</tbody>
-        </table>
-        <p class="sources">{sources}</p>
-    }
+    view! { <div inner_html=super::markup::property_table(o, c)></div> }
 }

@@ -1,0 +1,409 @@
+//! The result views that never take a tap (verdict cards, the correlations table, the property
+//! table) written as markup strings and set in one step, as the plots are: one parse by the
+//! browser per redraw instead of a call across the wasm boundary per element, and one small
+//! writer in the wasm instead of a view per element. Plain functions over the engine's `Outcome`:
+//! they compute nothing, and every text passes through `esc` (none of it is the person's text
+//! anyway: names, summaries and messages are the engine's own).
+
+use std::fmt::Write;
+
+use crate::engine::catalogue::order_text;
+use crate::engine::chart::svg::esc;
+use crate::engine::scenario::{JobResult, Outcome};
+use crate::engine::units::{format_sig, show, Dim, UnitChoice};
+
+fn u(v: f64, d: Dim, c: &UnitChoice) -> String {
+    esc(&show(v, c.get(d)))
+}
+
+fn mark(ok: bool) -> &'static str {
+    if ok {
+        "✓ "
+    } else {
+        "⚠ "
+    }
+}
+
+/// The verdict cards (touch, condensation, freezing, the run, insulated against bare), then the
+/// card through the layers with `section` (the cross-section's SVG) when the surface was solved.
+pub fn verdict_cards(o: &Outcome, c: &UnitChoice, section: Option<&str>) -> String {
+    let mut m = String::with_capacity(4096);
+    for v in &o.verdicts {
+        let _ = write!(
+            m,
+            r#"<article class="verdict{}" data-verdict="{}" data-ok="{}"><h3>{}{}</h3><p>{}</p>"#,
+            if v.ok { "" } else { " warn" },
+            esc(v.id),
+            v.ok,
+            mark(v.ok),
+            esc(v.title),
+            esc(&v.summary)
+        );
+        if let Some(th) = v.thickness {
+            let _ = write!(
+                m,
+                r#"<p class="order" data-order>The outer layer <strong>{}</strong>.</p>"#,
+                esc(&order_text(th, c.get(Dim::Length)))
+            );
+        }
+        m.push_str("<ul>");
+        for (label, value, dim) in &v.figures {
+            let _ = write!(
+                m,
+                "<li><span>{}: </span><strong>{}</strong></li>",
+                esc(label),
+                u(*value, *dim, c)
+            );
+        }
+        m.push_str("</ul>");
+        if let Some(t) = v.caution {
+            let _ = write!(m, r#"<p class="caution-note">{}</p>"#, esc(t));
+        }
+        m.push_str("</article>");
+    }
+    if let (Some(j), Some(svg)) = (o.job.as_ref(), section) {
+        layers_card(&mut m, j, c, svg);
+    }
+    m
+}
+
+fn layers_card(m: &mut String, j: &JobResult, c: &UnitChoice, svg: &str) {
+    let _ = write!(
+        m,
+        r#"<article class="verdict" data-verdict="layers"><h3>Through the layers</h3><div class="section-box">{svg}</div><ul><li>bore: {}</li>"#,
+        u(j.solution.t_bore, Dim::Temperature, c)
+    );
+    for (i, t) in j.solution.interfaces.iter().enumerate() {
+        let name = if i == 0 {
+            "outside of the wall".to_string()
+        } else {
+            format!("outside of layer {i}")
+        };
+        let _ = write!(m, "<li>{name}: {}</li>", u(*t, Dim::Temperature, c));
+    }
+    let _ = write!(
+        m,
+        "<li>outer diameter: {}</li></ul>",
+        u(j.solution.outer_d, Dim::Length, c)
+    );
+    for n in &j.notes {
+        let _ = write!(m, r#"<p class="flag">⚠ {}</p>"#, esc(n));
+    }
+    m.push_str("</article>");
+}
+
+/// Forced correlations side by side (the recommended one marked, a handover's shares said),
+/// natural convection and the blend below them.
+pub fn correlation_table(o: &Outcome, c: &UnitChoice) -> String {
+    let a = &o.analysis;
+    let mut m = String::with_capacity(4096);
+    m.push_str(r#"<div class="table-wrap" tabindex="0" role="region" aria-label="Correlations side by side (scrolls sideways)"><table class="corr" data-table="correlations"><caption class="sr-only">Every correlation for this shape, each at its own reference temperature</caption><thead><tr><th scope="col">Correlation</th><th scope="col">Properties at</th><th scope="col">Re</th><th scope="col">Nu</th><th scope="col">h</th><th scope="col">Range</th></tr></thead><tbody>"#);
+    let flags_list = |m: &mut String, flags: &[crate::engine::Flag]| {
+        m.push_str(r#"<ul class="row-flags">"#);
+        for f in flags {
+            let _ = write!(m, "<li>{}</li>", esc(&f.message()));
+        }
+        m.push_str("</ul>");
+    };
+    for (i, e) in a.forced.iter().enumerate() {
+        let rec = i == a.recommended;
+        let share = a.pick.weights.get(i).copied().unwrap_or(0.0);
+        let status = if !e.valid() {
+            "outside its range"
+        } else if e.flags.is_empty() {
+            "in range"
+        } else {
+            "near a band edge"
+        };
+        let _ = write!(
+            m,
+            r#"<tr{} data-correlation="{}" data-h="{}" data-valid="{}"><th scope="row">{}"#,
+            if rec { r#" class="recommended""# } else { "" },
+            esc(e.id),
+            e.h,
+            e.valid(),
+            esc(e.name)
+        );
+        if rec {
+            m.push_str(r#"<span class="rec-mark"> ★ recommended</span>"#);
+        }
+        if share > 0.0 && share < 1.0 {
+            let _ = write!(
+                m,
+                r#"<small class="detail">{} % of the recommended value (handover)</small>"#,
+                format_sig(100.0 * share, 2)
+            );
+        }
+        if let Some(d) = e.detail() {
+            let _ = write!(m, r#"<small class="detail">{}</small>"#, esc(&d));
+        }
+        let _ = write!(
+            m,
+            r#"</th><td data-label="Properties at">{}</td><td data-label="Re">{}</td><td data-label="Nu">{}</td><td data-label="h">{}</td><td data-label="Range"{}>{}{status}"#,
+            esc(e.reference.short()),
+            format_sig(e.groups.re, 3),
+            format_sig(e.nu, 3),
+            u(e.h, Dim::HeatTransferCoefficient, c),
+            if e.valid() { "" } else { r#" class="warn""# },
+            mark(e.valid())
+        );
+        flags_list(&mut m, &e.flags);
+        m.push_str("</td></tr>");
+    }
+    m.push_str(r#"</tbody><tbody class="extra">"#);
+    if let Some(n) = a.natural.as_ref() {
+        let ok = n.flags.is_empty();
+        let _ = write!(
+            m,
+            r#"<tr data-correlation="{}" data-h="{}"><th scope="row">{} (still fluid)</th><td data-label="Properties at">Tf</td><td data-label="Ra">{}</td><td data-label="Nu">{}</td><td data-label="h">{}</td><td data-label="Range"{}>{}"#,
+            esc(n.id),
+            n.h,
+            esc(n.name),
+            format_sig(n.ra, 3),
+            format_sig(n.nu, 3),
+            u(n.h, Dim::HeatTransferCoefficient, c),
+            if ok { "" } else { r#" class="warn""# },
+            if ok { "✓ in range" } else { "⚠ see note" }
+        );
+        flags_list(&mut m, &n.flags);
+        m.push_str("</td></tr>");
+        let _ = write!(
+            m,
+            r#"<tr class="answer" data-correlation="mixed"><th scope="row">Blend of ★ and natural, n = {}</th><td class="empty">—</td><td class="empty">—</td><td data-label="Nu">{}</td><td data-label="h">{}</td><td data-label="Flow">{}</td></tr>"#,
+            format_sig(a.exponent, 2),
+            format_sig(o.nusselt, 3),
+            u(a.h, Dim::HeatTransferCoefficient, c),
+            esc(a.direction.describe())
+        );
+    }
+    m.push_str("</tbody></table></div>");
+    m
+}
+
+/// The stream's properties at each temperature the correlations read them, with their sources.
+pub fn property_table(o: &Outcome, c: &UnitChoice) -> String {
+    let mut m = String::with_capacity(2048);
+    let _ = write!(
+        m,
+        r#"<table class="props" data-props><caption>Properties of {} used</caption><thead><tr><th scope="col">at</th><th scope="col">ρ</th><th scope="col">μ</th><th scope="col">k</th><th scope="col">cp</th><th scope="col">Pr</th></tr></thead><tbody>"#,
+        esc(&o.fluid.to_string())
+    );
+    for r in &o.properties {
+        let p = &r.props;
+        let _ = write!(
+            m,
+            r#"<tr data-prop-row="{}"><th scope="row">{}<br>{}</th><td data-label="ρ">{}</td><td data-label="μ">{}</td><td data-label="k">{}</td><td data-label="cp">{}</td><td data-label="Pr">{}</td></tr>"#,
+            esc(r.role),
+            esc(r.role),
+            u(p.t, Dim::Temperature, c),
+            u(p.rho, Dim::Density, c),
+            u(p.mu, Dim::DynamicViscosity, c),
+            u(p.k, Dim::ThermalConductivity, c),
+            u(p.cp, Dim::SpecificHeat, c),
+            format_sig(p.pr, 3)
+        );
+    }
+    let _ = write!(
+        m,
+        r#"</tbody></table><p class="sources">{}</p>"#,
+        esc(&o.property_sources())
+    );
+    m
+}
+
+/// Who and when a report is for: the person's own words, escaped where they are written.
+pub struct Item<'a> {
+    pub name: &'a str,
+    pub tag: &'a str,
+    pub place: &'a str,
+    /// "2026-12-05 10:05" (UTC).
+    pub date: &'a str,
+}
+
+/// The one-page report's content: results, the inputs the item uses (a third k point left at 0
+/// is not one of them), range notes, verdicts with the thickness that meets each limit, the
+/// working's key steps, sources and cautions (each once).
+pub fn report(
+    o: &Outcome,
+    s: &crate::engine::scenario::Scenario,
+    c: &UnitChoice,
+    item: &Item,
+) -> String {
+    use crate::engine::scenario::{cautions, Group, FIELDS};
+    let mut m = String::with_capacity(8192);
+    let name = item.name.trim();
+    let _ = write!(
+        m,
+        r#"<h1>{}</h1><p class="meta">{} UTC · item {} · {}</p><p class="meta">{}, {} in {}; recommended {} ({}).</p><h2>Results</h2><dl class="kv results">"#,
+        if name.is_empty() {
+            "Leeward report".to_string()
+        } else {
+            format!("Leeward report: {}", esc(name))
+        },
+        esc(item.date),
+        if item.tag.is_empty() {
+            "—".to_string()
+        } else {
+            esc(item.tag)
+        },
+        if item.place.is_empty() {
+            "location not given".to_string()
+        } else {
+            esc(item.place)
+        },
+        esc(o.shape.label()),
+        esc(&o.analysis.mode().to_string()),
+        esc(&o.fluid.to_string()),
+        esc(&o.method.to_string()),
+        esc(&o.regime.to_string())
+    );
+    let kv = |m: &mut String, k: &str, v: String| {
+        let _ = write!(m, "<div><dt>{}</dt><dd>{v}</dd></div>", esc(k));
+    };
+    if let Some(q) = o.q_per_length {
+        kv(
+            &mut m,
+            "Heat loss per length",
+            u(q, Dim::HeatFlowPerLength, c),
+        );
+    }
+    kv(
+        &mut m,
+        "Heat loss over the length or body",
+        u(o.q_total, Dim::HeatFlow, c),
+    );
+    kv(
+        &mut m,
+        "Surface temperature",
+        u(o.surface_temp, Dim::Temperature, c),
+    );
+    kv(
+        &mut m,
+        "Heat-transfer coefficient (convection)",
+        u(o.h, Dim::HeatTransferCoefficient, c),
+    );
+    kv(&mut m, "Radiation part", u(o.q_rad_total, Dim::HeatFlow, c));
+    kv(
+        &mut m,
+        "Energy per year",
+        u(o.annual_energy, Dim::EnergyPerYear, c),
+    );
+    kv(
+        &mut m,
+        "Cost per year",
+        u(o.annual_cost, Dim::MoneyPerYear, c),
+    );
+    m.push_str(r#"</dl><h2>Inputs used</h2><dl class="kv">"#);
+    let curved = FIELDS.iter().any(|sp| {
+        sp.group == Group::LayerCurve
+            && sp.dim != Dim::Temperature
+            && s.uses(sp.field)
+            && s.get(sp.field) > 0.0
+    });
+    for sp in FIELDS.iter().filter(|sp| s.uses(sp.field)).filter(|sp| {
+        sp.group != Group::LayerCurve
+            || (curved && (sp.dim == Dim::Temperature || s.get(sp.field) > 0.0))
+    }) {
+        kv(&mut m, sp.label, u(s.get(sp.field), sp.dim, c));
+    }
+    m.push_str("</dl><h2>Range notes</h2>");
+    if o.flags.is_empty() {
+        m.push_str(
+            r#"<p class="meta">None: every method used is inside its published range here.</p>"#,
+        );
+    }
+    m.push_str("<ul>");
+    for f in &o.flags {
+        let _ = write!(m, "<li>{}</li>", esc(&f.message()));
+    }
+    m.push_str("</ul><h2>Verdicts</h2><ul>");
+    for v in &o.verdicts {
+        let mut figs: Vec<String> = v
+            .figures
+            .iter()
+            .map(|(l, x, d)| format!("{l}: {}", show(*x, c.get(*d))))
+            .collect();
+        if let Some(th) = v.thickness {
+            figs.push(format!(
+                "outer layer {}",
+                order_text(th, c.get(Dim::Length))
+            ));
+        }
+        let _ = write!(
+            m,
+            "<li><strong>{}{}</strong>: {} {}</li>",
+            mark(v.ok),
+            esc(v.title),
+            esc(&v.summary),
+            esc(&figs.join("; "))
+        );
+    }
+    m.push_str("</ul><h2>Working (summary)</h2><ol>");
+    for st in o.working.iter().filter(|st| st.is_key()) {
+        let _ = write!(
+            m,
+            "<li><strong>{}</strong>: {}</li>",
+            esc(st.title),
+            esc(&st.text)
+        );
+    }
+    let _ = write!(
+        m,
+        r#"</ol><p class="meta">Property sources: {}. Correlations of this kind are good to about ±20–25 % (common practice).</p><h2>Cautions</h2><ul>"#,
+        esc(&o.property_sources())
+    );
+    let all: std::collections::BTreeSet<&str> = cautions(s, o)
+        .into_iter()
+        .chain(o.verdicts.iter().filter_map(|v| v.caution))
+        .collect();
+    for t in all {
+        let _ = write!(m, "<li>{}</li>", esc(t));
+    }
+    m.push_str(r#"</ul><p class="meta">Engineering estimates from published correlations. Local codes and licensed practice govern any decision about safety.</p>"#);
+    m
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::engine::scenario::{evaluate, DEMO};
+    use crate::engine::units::System;
+
+    /// Each verdict, correlation and property row of the demo is written once, with the
+    /// attributes the page and its tests find them by, and no number is lost in markup.
+    #[test]
+    fn the_demo_writes_every_row_once() {
+        let o = evaluate(&DEMO).expect("demo");
+        let c = UnitChoice::for_system(System::Us);
+        let cards = verdict_cards(&o, &c, None);
+        assert_eq!(cards.matches("<article").count(), o.verdicts.len());
+        let t = correlation_table(&o, &c);
+        assert_eq!(
+            t.matches("data-correlation=").count(),
+            o.analysis.forced.len() + 2 * usize::from(o.analysis.natural.is_some())
+        );
+        assert_eq!(t.matches(r#"class="recommended""#).count(), 1);
+        let p = property_table(&o, &c);
+        assert_eq!(p.matches("data-prop-row=").count(), o.properties.len());
+        let r = report(
+            &o,
+            &DEMO,
+            &c,
+            &Item {
+                name: "<b>Roof & co</b>",
+                tag: "\"L-1\"",
+                place: "",
+                date: "2026-12-05 10:05",
+            },
+        );
+        assert!(
+            r.contains("Leeward report: &lt;b&gt;Roof &amp; co&lt;/b&gt;"),
+            "{r}"
+        );
+        assert!(!r.contains("<b>") && r.contains("item &quot;L-1&quot;"));
+        for s in [&cards, &t, &p, &r] {
+            assert!(!s.contains("NaN") && !s.contains("inf"), "{s}");
+            assert_eq!(s.matches('<').count(), s.matches('>').count());
+        }
+    }
+}
