@@ -147,7 +147,7 @@ ledger() {
   local tmp
   tmp=$(mktemp -d)
   wasm-bindgen --target web --out-dir "$tmp" target/wasm32-unknown-unknown/release/leeward.wasm
-  wasm-opt -Oz --converge --low-memory-unused -g --enable-bulk-memory --enable-nontrapping-float-to-int \
+  wasm-opt -Oz --converge --low-memory-unused --flatten --rereloop -Oz --strip-producers --strip-target-features -g --enable-bulk-memory --enable-nontrapping-float-to-int \
     --enable-sign-ext --enable-mutable-globals "$tmp/leeward_bg.wasm" -o "$tmp/named.wasm"
   log "size ledger (raw bytes of the optimised wasm, by crate; generic view code counts under tachys):"
   twiggy top -n 1000000 "$tmp/named.wasm" | awk -f tests/bench/size_ledger.awk >&2

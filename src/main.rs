@@ -1,4 +1,3 @@
 fn main() {
-    console_error_panic_hook::set_once();
     leptos::mount::mount_to_body(leeward::ui::App);
 }

@@ -363,6 +363,243 @@ pub fn report(
     m
 }
 
+/// One result as `<div><dt>label</dt><dd><output data-quantity data-si>…</output> unit</dd></div>`:
+/// `data-si` the value as computed (full precision), the text at its unit's resolution. A value
+/// that does not apply keeps its element, hidden, with an empty `data-si`.
+fn figure(
+    m: &mut String,
+    label: &str,
+    quantity: &str,
+    v: Option<f64>,
+    d: Option<Dim>,
+    c: &UnitChoice,
+    note: &str,
+) {
+    let (text, unit) = match (v, d) {
+        (Some(v), Some(d)) => {
+            let (t, u) = crate::engine::units::shown(v, c.get(d));
+            (t, u)
+        }
+        (Some(v), None) => (format_sig(v, 3), ""),
+        (None, _) => ("—".to_string(), ""),
+    };
+    let _ = write!(
+        m,
+        r#"<div{}><dt>{}</dt><dd><output data-quantity="{quantity}" data-si="{}">{}</output><span class="unit">{}</span>{note}</dd></div>"#,
+        match (v.is_some(), quantity) {
+            (false, _) => r#" class="hidden""#,
+            // the answer's coefficient spans the row, as the loss and surface above it do
+            (true, "h") => r#" class="main""#,
+            _ => "",
+        },
+        esc(label),
+        v.map(|v| format!("{v}")).unwrap_or_default(),
+        esc(&text),
+        esc(unit)
+    );
+}
+
+/// The results below the answer (the parts of the loss, energy and cost, h and its groups, the
+/// outdoor and inside-film figures where they apply), then the range notes; `run` says the
+/// length the yearly totals are over (" (over L = 12 m)", or "" for a body).
+pub fn figures(o: &Outcome, c: &UnitChoice, run: &str) -> String {
+    let mut m = String::with_capacity(4096);
+    let n = o.flags.len();
+    let flag_mark = if n > 0 {
+        format!(
+            r#"<span class="flag-mark" data-flag-mark>⚠ {n} range note{} below</span>"#,
+            if n == 1 { "" } else { "s" }
+        )
+    } else {
+        String::new()
+    };
+    m.push_str(r#"<dl class="figures">"#);
+    let t = Some(Dim::Temperature);
+    figure(
+        &mut m,
+        "By convection",
+        "q_conv",
+        Some(o.q_conv_total),
+        Some(Dim::HeatFlow),
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "By radiation",
+        "q_rad",
+        Some(o.q_rad_total),
+        Some(Dim::HeatFlow),
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Radiation coefficient h_rad",
+        "h_rad",
+        Some(o.h_rad),
+        Some(Dim::HeatTransferCoefficient),
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        &format!("Energy per year{run}"),
+        "annual_energy",
+        Some(o.annual_energy),
+        Some(Dim::EnergyPerYear),
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        &format!("Cost per year{run}"),
+        "annual_cost",
+        Some(o.annual_cost),
+        Some(Dim::MoneyPerYear),
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Heat-transfer coefficient h (convection)",
+        "h",
+        Some(o.h),
+        Some(Dim::HeatTransferCoefficient),
+        c,
+        &flag_mark,
+    );
+    figure(
+        &mut m,
+        "Nusselt number Nu = h·D/k",
+        "nusselt",
+        Some(o.nusselt),
+        None,
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Reynolds number Re (★)",
+        "reynolds",
+        Some(o.reynolds),
+        None,
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Prandtl number Pr (★)",
+        "prandtl",
+        Some(o.prandtl),
+        None,
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Film temperature",
+        "film_temperature",
+        Some(o.film_temp),
+        t,
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Pressure used",
+        "pressure",
+        Some(o.pressure),
+        Some(Dim::Pressure),
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Sky temperature",
+        "sky_temperature",
+        o.sky_temp,
+        t,
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Sky and ground together (radiant)",
+        "radiant_temperature",
+        o.radiant_temp,
+        t,
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Sun absorbed per length",
+        "solar_per_length",
+        o.solar_per_length,
+        Some(Dim::HeatFlowPerLength),
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        &format!("Sun absorbed{run}"),
+        "solar_total",
+        o.solar_total,
+        Some(Dim::HeatFlow),
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Wind at the body",
+        "wind_at_body",
+        o.wind_at_body,
+        Some(Dim::Speed),
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Wind-angle factor on forced convection",
+        "yaw_factor",
+        o.yaw_factor,
+        None,
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Dew point of the stream",
+        "dew_point",
+        o.dew_point,
+        t,
+        c,
+        "",
+    );
+    let inside = o.inside.as_ref();
+    figure(
+        &mut m,
+        "Inside film h_i (worked out)",
+        "h_inside",
+        inside.map(|f| f.h),
+        Some(Dim::HeatTransferCoefficient),
+        c,
+        &flag_mark,
+    );
+    figure(
+        &mut m,
+        "Reynolds number in the bore",
+        "re_inside",
+        inside.map(|f| f.re),
+        None,
+        c,
+        "",
+    );
+    m.push_str("</dl>");
+    m
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -401,7 +638,30 @@ mod tests {
             "{r}"
         );
         assert!(!r.contains("<b>") && r.contains("item &quot;L-1&quot;"));
-        for s in [&cards, &t, &p, &r] {
+        let f = figures(&o, &c, " (over L = 39.4 ft)");
+        // every output the README lists beside the answer, once, with its full value
+        for q in [
+            "q_conv",
+            "q_rad",
+            "h_rad",
+            "annual_energy",
+            "annual_cost",
+            "h",
+            "nusselt",
+            "reynolds",
+            "prandtl",
+            "film_temperature",
+            "pressure",
+            "dew_point",
+        ] {
+            assert_eq!(
+                f.matches(&format!(r#"data-quantity="{q}""#)).count(),
+                1,
+                "{q}"
+            );
+        }
+        assert!(f.contains(&format!(r#"data-si="{}""#, o.h)));
+        for s in [&cards, &t, &p, &r, &f] {
             assert!(!s.contains("NaN") && !s.contains("inf"), "{s}");
             assert_eq!(s.matches('<').count(), s.matches('>').count());
         }

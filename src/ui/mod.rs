@@ -19,7 +19,7 @@ use unit_select::UnitSelect;
 
 use crate::engine::scenario::{
     self, Axis, Field, FieldSpec, FluidKind, Group, HumidityInput, Outcome, PressureInput,
-    Scenario, Shape, SurfaceMode, Wind, FIELDS,
+    Scenario, Setting, Shape, SurfaceMode, Wind, FIELDS,
 };
 use crate::engine::units::{self, format_sig, Dim, System, UnitChoice};
 
@@ -328,6 +328,31 @@ pub fn App() -> impl IntoView {
         |s| s.fluid == FluidKind::HumidAir,
     );
 
+    let setting_toggle = toggle(
+        "setting",
+        "Indoors",
+        "Outdoors",
+        |s| s.setting == Setting::Indoors,
+        |s, a| {
+            s.setting = if a {
+                Setting::Indoors
+            } else {
+                Setting::Outdoors
+            }
+        },
+        |_| true,
+    );
+    let terrain_options = crate::engine::outdoors::wind::Terrain::ALL
+        .into_iter()
+        .map(|t| {
+            view! {
+                <option value=t.category() prop:selected=move || scenario.with(|s| s.terrain == t)>
+                    {scenario::terrain_label(t)}
+                </option>
+            }
+        })
+        .collect_view();
+
     let axis_toggle = toggle(
         "axis",
         "Axis level",
@@ -538,10 +563,24 @@ pub fn App() -> impl IntoView {
                             {fluid_options}
                         </select>
                     </div>
+                    {setting_toggle}
                     {wind_select}
                     {pressure_toggle}
                     {humidity_toggle}
                     {fields_of(Group::Stream)}
+                    <div class="outdoors" data-group="outdoors" class:hidden=move || scenario.with(|s| s.setting != Setting::Outdoors)>
+                        <h3 class="sub">"Outdoors: sky, sun and wind"</h3>
+                        <div class="field">
+                            <label for="in-terrain">"Terrain around the site"<small>"EN 1991-1-4 terrain category: how much the ground slows the wind"</small></label>
+                            <select id="in-terrain" class="wide" data-choice="terrain" on:change=move |ev| {
+                                if let Some(t) = scenario::terrain_from_id(&event_target_value(&ev)) {
+                                    scenario.update(|s| s.terrain = t);
+                                }
+                            }>{terrain_options}</select>
+                        </div>
+                        {fields_of(Group::Outdoors)}
+                        {pickers::typical_picker(scenario, choice, text_of, &crate::engine::catalogue::SOLAR_ABSORPTANCES, Field::Absorptance, "in-as-pick", "Typical solar absorptances", "Choose a finish, or type the absorptance above")}
+                    </div>
                 </section>
                 <section aria-labelledby="surface-title">
                     <h2 id="surface-title">"3 · Surface"</h2>
@@ -549,7 +588,7 @@ pub fn App() -> impl IntoView {
                     {pickers::wall_select(scenario, choice)}
                     {pickers::inside_select(scenario)}
                     {fields_of(Group::Surface)}
-                    {pickers::emissivity_picker(scenario, choice, text_of)}
+                    {pickers::typical_picker(scenario, choice, text_of, &crate::engine::job::EMISSIVITIES, Field::Emissivity, "in-eps-pick", "Typical emissivities", "Choose a surface, or type ε above")}
                     {pickers::layer_picker(scenario)}
                     {fields_of(Group::Layers)}
                     <details class="fold" data-fold="k-curve" class:hidden=move || !scenario.with(|s| s.solved() && s.layer_count > 0)>
@@ -582,22 +621,7 @@ pub fn App() -> impl IntoView {
                 <ul class="cautions" data-cautions>
                     {move || shown.with(|s| s.outcome.as_ref().map(|o| scenario::cautions(&scenario.get(), o).into_iter().map(|c| view! { <li class="caution">"⚠ "{c}</li> }).collect_view()))}
                 </ul>
-                <dl class="figures">
-                    <div><dt>"By convection"</dt><dd>{out("q_conv", |o| Some(o.q_conv_total), Some(Dim::HeatFlow))}</dd></div>
-                    <div><dt>"By radiation"</dt><dd>{out("q_rad", |o| Some(o.q_rad_total), Some(Dim::HeatFlow))}</dd></div>
-                    <div><dt>"Radiation coefficient h_rad"</dt><dd>{out("h_rad", |o| Some(o.h_rad), Some(Dim::HeatTransferCoefficient))}</dd></div>
-                    <div><dt>{move || format!("Energy per year{}", run_note())}</dt><dd>{out("annual_energy", |o| Some(o.annual_energy), Some(Dim::EnergyPerYear))}</dd></div>
-                    <div><dt>{move || format!("Cost per year{}", run_note())}</dt><dd>{out("annual_cost", |o| Some(o.annual_cost), Some(Dim::MoneyPerYear))}</dd></div>
-                    <div class="main"><dt>"Heat-transfer coefficient h (convection)"</dt><dd>{out("h", |o| Some(o.h), Some(Dim::HeatTransferCoefficient))}{flag_mark}</dd></div>
-                    <div><dt>"Nusselt number Nu = h·D/k"</dt><dd>{out("nusselt", |o| Some(o.nusselt), None)}</dd></div>
-                    <div><dt>"Reynolds number Re (★)"</dt><dd>{out("reynolds", |o| Some(o.reynolds), None)}</dd></div>
-                    <div><dt>"Prandtl number Pr (★)"</dt><dd>{out("prandtl", |o| Some(o.prandtl), None)}</dd></div>
-                    <div><dt>"Film temperature"</dt><dd>{out("film_temperature", |o| Some(o.film_temp), Some(Dim::Temperature))}</dd></div>
-                    <div><dt>"Pressure used"</dt><dd>{out("pressure", |o| Some(o.pressure), Some(Dim::Pressure))}</dd></div>
-                    <div class:hidden=move || shown.with(|s| s.outcome.as_ref().is_none_or(|o| o.dew_point.is_none()))><dt>"Dew point of the stream"</dt><dd>{out("dew_point", |o| o.dew_point, Some(Dim::Temperature))}</dd></div>
-                    <div class:hidden=move || shown.with(|s| s.outcome.as_ref().is_none_or(|o| o.inside.is_none()))><dt>"Inside film h_i (worked out)"</dt><dd>{out("h_inside", |o| o.inside.as_ref().map(|f| f.h), Some(Dim::HeatTransferCoefficient))}{flag_mark}</dd></div>
-                    <div class:hidden=move || shown.with(|s| s.outcome.as_ref().is_none_or(|o| o.inside.is_none()))><dt>"Reynolds number in the bore"</dt><dd>{out("re_inside", |o| o.inside.as_ref().map(|f| f.re), None)}</dd></div>
-                </dl>
+                <div data-figures inner_html=move || shown.with(|s| s.outcome.as_ref().map(|o| markup::figures(o, &choice.get(), &run_note())).unwrap_or_default())></div>
                 <p class="spread" data-spread>{move || shown.with(|s| s.outcome.as_ref().map(|o| results::spread_text(o, &choice.get())))}</p>
                 <p class="method">{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Recommended: {} ({}). {} {}", o.method, o.analysis.mode(), o.regime, o.analysis.notes.join(" "))))}</p>
                 <p class="reason" data-reason>{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Why this one: {}", o.analysis.reason())))}</p>

@@ -43,7 +43,7 @@ pub fn inside_select(scenario: RwSignal<Scenario>) -> impl IntoView {
         .collect_view();
     view! {
         <div class="field" class:hidden=move || !scenario.with(|s| s.offers_inside_film())>
-            <label for="in-inside">"Inside film"<small>"typed, or worked out from the flow set under 4 · The job"</small></label>
+            <label for="in-inside">"What flows inside, and its film"<small>"typed, or worked out from the flow set under 4 · The job; steam or gas: no freezing check"</small></label>
             <select id="in-inside" class="wide" data-choice="inside" on:change=move |ev| {
                 if let Some(m) = InsideFilm::from_id(&event_target_value(&ev)) {
                     scenario.update(|s| s.inside = m);
@@ -85,28 +85,36 @@ pub fn size_picker(
     }
 }
 
-/// Typical emissivities set ε (and the text shown in its field).
-pub fn emissivity_picker(
+/// A pick-list of typical values (common practice, rounded) that sets one field: its value and
+/// its text in the unit shown.
+#[allow(clippy::too_many_arguments)]
+pub fn typical_picker(
     scenario: RwSignal<Scenario>,
     choice: RwSignal<UnitChoice>,
     text_of: impl Fn(Field) -> RwSignal<String> + Copy + Send + Sync + 'static,
+    list: &'static [(&'static str, f64)],
+    field: Field,
+    id: &'static str,
+    label: &'static str,
+    prompt: &'static str,
 ) -> impl IntoView {
-    let opts = crate::engine::job::EMISSIVITIES
+    let opts = list
         .iter()
         .enumerate()
         .map(|(i, (name, e))| view! { <option value=i.to_string()>{format!("{name}: {e}")}</option> })
         .collect_view();
+    let spec = scenario::spec(field);
     view! {
-        <div class="field">
-            <label for="in-eps-pick">"Typical emissivities"<small>"common practice, rounded; a measured value is better"</small></label>
-            <select id="in-eps-pick" class="wide" data-choice="emissivity" on:change=move |ev| {
+        <div class="field" class:hidden=move || !scenario.with(|s| s.uses(field))>
+            <label for=id>{label}<small>"common practice, rounded; a measured value is better"</small></label>
+            <select id=id class="wide" data-choice=id on:change=move |ev| {
                 let Ok(i) = event_target_value(&ev).parse::<usize>() else { return };
-                let Some((_, e)) = crate::engine::job::EMISSIVITIES.get(i) else { return };
-                scenario.update(|s| s.emissivity = *e);
-                let u = choice.get_untracked().get(Dim::Ratio);
-                text_of(Field::Emissivity).set(scenario::shown_text(scenario::spec(Field::Emissivity), *e, u));
+                let Some((_, e)) = list.get(i) else { return };
+                scenario.update(|s| s.set(field, *e));
+                let u = choice.get_untracked().get(spec.dim);
+                text_of(field).set(scenario::shown_text(spec, *e, u));
             }>
-                <option value="" selected>"Choose a surface, or type ε above"</option>
+                <option value="" selected>{prompt}</option>
                 {opts}
             </select>
         </div>

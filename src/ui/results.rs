@@ -21,7 +21,9 @@ fn width_class() -> f64 {
 }
 
 thread_local! {
-    static PLOT_WIDTH: std::cell::OnceCell<RwSignal<f64>> = const { std::cell::OnceCell::new() };
+    // Reference-counted, not owned by the view that first asked: the plots are redrawn (and their
+    // owners disposed) on every change, and an owned signal would go with the first of them.
+    static PLOT_WIDTH: std::cell::OnceCell<ArcRwSignal<f64>> = const { std::cell::OnceCell::new() };
 }
 
 /// The plots' drawing width in SVG units: narrower on a phone, so that their 11–12 unit text
@@ -30,16 +32,18 @@ thread_local! {
 fn plot_width() -> f64 {
     PLOT_WIDTH
         .with(|c| {
-            *c.get_or_init(|| {
-                let sig = RwSignal::new(width_class());
+            c.get_or_init(|| {
+                let sig = ArcRwSignal::new(width_class());
+                let on_resize = sig.clone();
                 let _ = window_event_listener(leptos::ev::resize, move |_| {
                     let w = width_class();
-                    if sig.get_untracked() != w {
-                        sig.set(w);
+                    if on_resize.get_untracked() != w {
+                        on_resize.set(w);
                     }
                 });
                 sig
             })
+            .clone()
         })
         .get()
 }

@@ -16,68 +16,80 @@ fn polygon(cx: f64, cy: f64, r: f64, n: usize, start_deg: f64) -> String {
         .join(" ")
 }
 
-/// The drawing of one shape with the flow arrows and the D dimension.
-pub fn drawing(shape: Shape, large: bool) -> impl IntoView {
+/// The drawing of one shape with the flow arrows and the D dimension, as SVG markup (set in one
+/// step; no text of the person's goes in).
+pub fn markup(shape: Shape, large: bool) -> String {
     let (cx, cy) = (66.0, 40.0);
     // Half the width across the stream, so the D line spans it.
-    let (outline, half): (AnyView, f64) = match shape {
+    let (outline, half) = match shape {
         Shape::Cylinder => (
-            view! { <circle cx=cx cy=cy r="26" class="body"/> }.into_any(),
+            format!(r#"<circle cx="{cx}" cy="{cy}" r="26" class="body"/>"#),
             26.0,
         ),
         Shape::Sphere => (
-            view! {
-                <circle cx=cx cy=cy r="26" class="body"/>
-                <ellipse cx=cx cy=cy rx="26" ry="8" class="contour"/>
-            }
-            .into_any(),
+            format!(
+                r#"<circle cx="{cx}" cy="{cy}" r="26" class="body"/><ellipse cx="{cx}" cy="{cy}" rx="26" ry="8" class="contour"/>"#
+            ),
             26.0,
         ),
         Shape::SquareFace => (
-            view! { <rect x={cx - 24.0} y={cy - 24.0} width="48" height="48" class="body"/> }
-                .into_any(),
+            format!(
+                r#"<rect x="{}" y="{}" width="48" height="48" class="body"/>"#,
+                cx - 24.0,
+                cy - 24.0
+            ),
             24.0,
         ),
         Shape::SquareCorner => (
-            view! { <polygon points={polygon(cx, cy, 30.0, 4, 0.0)} class="body"/> }.into_any(),
+            format!(
+                r#"<polygon points="{}" class="body"/>"#,
+                polygon(cx, cy, 30.0, 4, 0.0)
+            ),
             30.0,
         ),
         // Flat faces upstream and downstream: corners at the top and bottom.
         Shape::HexFace => (
-            view! { <polygon points={polygon(cx, cy, 28.0, 6, 90.0)} class="body"/> }.into_any(),
+            format!(
+                r#"<polygon points="{}" class="body"/>"#,
+                polygon(cx, cy, 28.0, 6, 90.0)
+            ),
             28.0,
         ),
         // A corner upstream: flats at the top and bottom.
         Shape::HexCorner => (
-            view! { <polygon points={polygon(cx, cy, 30.0, 6, 0.0)} class="body"/> }.into_any(),
+            format!(
+                r#"<polygon points="{}" class="body"/>"#,
+                polygon(cx, cy, 30.0, 6, 0.0)
+            ),
             30.0 * 3f64.sqrt() / 2.0,
         ),
         Shape::Plate => (
-            view! { <rect x={cx - 3.0} y={cy - 28.0} width="6" height="56" class="body"/> }
-                .into_any(),
+            format!(
+                r#"<rect x="{}" y="{}" width="6" height="56" class="body"/>"#,
+                cx - 3.0,
+                cy - 28.0
+            ),
             28.0,
         ),
     };
     let dx = 108.0;
     let (top, bottom) = (cy - half, cy + half);
-    let size = if large { "big" } else { "icon" };
-    view! {
-        <svg viewBox="0 0 120 80" class=format!("shape-drawing {size}") role="img"
-            aria-label=format!("{}; the stream comes from the left; {}", shape.label(), shape.length_meaning())>
-            <g class="flow">
-                <line x1="4" y1="22" x2="26" y2="22"/><path d="M26,18 L32,22 L26,26 Z"/>
-                <line x1="4" y1="40" x2="26" y2="40"/><path d="M26,36 L32,40 L26,44 Z"/>
-                <line x1="4" y1="58" x2="26" y2="58"/><path d="M26,54 L32,58 L26,62 Z"/>
-            </g>
-            {outline}
-            <g class="dim">
-                <line x1={dx} y1={top} x2={dx} y2={bottom}/>
-                <line x1={dx - 4.0} y1={top} x2={dx + 4.0} y2={top}/>
-                <line x1={dx - 4.0} y1={bottom} x2={dx + 4.0} y2={bottom}/>
-                <line x1={cx} y1={top} x2={dx} y2={top} class="ext"/>
-                <line x1={cx} y1={bottom} x2={dx} y2={bottom} class="ext"/>
-                <text x={dx + 3.0} y={cy + 4.0}>"D"</text>
-            </g>
-        </svg>
-    }
+    format!(
+        r#"<svg viewBox="0 0 120 80" class="shape-drawing {size}" role="img" aria-label="{label}"><g class="flow"><line x1="4" y1="22" x2="26" y2="22"/><path d="M26,18 L32,22 L26,26 Z"/><line x1="4" y1="40" x2="26" y2="40"/><path d="M26,36 L32,40 L26,44 Z"/><line x1="4" y1="58" x2="26" y2="58"/><path d="M26,54 L32,58 L26,62 Z"/></g>{outline}<g class="dim"><line x1="{dx}" y1="{top:.1}" x2="{dx}" y2="{bottom:.1}"/><line x1="{a}" y1="{top:.1}" x2="{b}" y2="{top:.1}"/><line x1="{a}" y1="{bottom:.1}" x2="{b}" y2="{bottom:.1}"/><line x1="{cx}" y1="{top:.1}" x2="{dx}" y2="{top:.1}" class="ext"/><line x1="{cx}" y1="{bottom:.1}" x2="{dx}" y2="{bottom:.1}" class="ext"/><text x="{t}" y="{ty}">D</text></g></svg>"#,
+        size = if large { "big" } else { "icon" },
+        label = crate::engine::chart::svg::esc(&format!(
+            "{}; the stream comes from the left; {}",
+            shape.label(),
+            shape.length_meaning()
+        )),
+        a = dx - 4.0,
+        b = dx + 4.0,
+        t = dx + 3.0,
+        ty = cy + 4.0,
+    )
+}
+
+/// The drawing as a view: a span holding [`markup`].
+pub fn drawing(shape: Shape, large: bool) -> impl IntoView {
+    view! { <span class="shape-box" inner_html=markup(shape, large)></span> }
 }

@@ -156,34 +156,52 @@ pub fn sweep_figure(s: &Sweep) -> String {
     let (l, r, _, _) = f.margin;
     let mut g = Svg::new(w, h, "", s.title);
     g.frame(f, &f.x_ticks(chart.x_step), &f.y_ticks(chart.y_step), true);
-    // A limit line's words go at the end of the line away from where the curve crosses it (a
-    // surface falling with thickness crosses a high limit near the left, a low one near the
-    // right), and below the line when it runs along the frame's top.
+    // A limit line's words go where the curve leaves them most room: at either end of the line,
+    // above or below it (a surface falling with thickness runs through the left end of a high
+    // limit and along the top of a low one), never past the frame's top.
+    let pts: Vec<(f64, f64)> = xv
+        .iter()
+        .zip(&yv)
+        .filter(|(x, y)| x.is_finite() && y.is_finite())
+        .map(|(x, y)| f.to_svg(*x, *y))
+        .collect();
     let top = f.margin.2;
+    let span = w - l - r;
     for (label, v) in &tv {
         let (_, y) = f.to_svg(f.x.0, *v);
         g.line((l, y), (w - r, y), "target");
-        let pts: Vec<(f64, f64)> = xv
-            .iter()
-            .zip(&yv)
-            .filter(|(x, y)| x.is_finite() && y.is_finite())
-            .map(|(x, y)| (*x, *y))
-            .collect();
-        let crossing = pts
-            .windows(2)
-            .find(|p| (p[0].1 - v) * (p[1].1 - v) <= 0.0)
-            .map(|p| p[0].0);
-        let left = match (crossing, pts.first(), pts.last()) {
-            (Some(xc), _, _) => xc > (f.x.0 + f.x.1) / 2.0,
-            (None, Some(a), Some(b)) => (a.1 - v).abs() > (b.1 - v).abs(),
-            _ => false,
+        // candidate boxes: (x0, x1) of the words, and their text baseline above or below
+        let room = |x0: f64, x1: f64, y0: f64, y1: f64| {
+            pts.iter()
+                .filter(|p| p.0 >= x0 - 6.0 && p.0 <= x1 + 6.0)
+                .map(|p| {
+                    if p.1 < y0 {
+                        y0 - p.1
+                    } else if p.1 > y1 {
+                        p.1 - y1
+                    } else {
+                        0.0
+                    }
+                })
+                .fold(f64::INFINITY, f64::min)
         };
-        let ty = if y - 16.0 < top { y + 14.0 } else { y - 4.0 };
-        if left {
-            g.text((l + 4.0, ty), "tick", "start", label);
-        } else {
-            g.text((w - r - 4.0, ty), "tick", "end", label);
+        let wide = span * 0.4;
+        let mut best = (f64::NEG_INFINITY, (w - r - 4.0, y - 4.0), "end");
+        for (x0, x1, tx, anchor) in [
+            (w - r - wide, w - r, w - r - 4.0, "end"),
+            (l, l + wide, l + 4.0, "start"),
+        ] {
+            for (ty, y0, y1) in [(y - 4.0, y - 15.0, y), (y + 14.0, y, y + 17.0)] {
+                if y0 < top {
+                    continue;
+                }
+                let r = room(x0, x1, y0, y1);
+                if r > best.0 + 0.5 {
+                    best = (r, (tx, ty), anchor);
+                }
+            }
         }
+        g.text(best.1, "tick", best.2, label);
     }
     g.path(&chart.path, "in sweep");
     if let Some((px, py)) = s.point {
@@ -411,5 +429,59 @@ mod tests {
         // two rings, the bore, and a dot where each of the three faces' leader starts
         assert_eq!(m.matches("<circle").count(), 6);
         assert_eq!(m.matches(r#"class="lead""#).count(), 3);
+    }
+
+    /// Regression (phone walk): the surface curve ran through "dew point + margin" and a high
+    /// limit's words. A surface falling steeply with thickness: the high limit's words go to the
+    /// right, the low limit's below its line (the curve runs just above it).
+    #[test]
+    fn limit_words_keep_clear_of_the_curve() {
+        let c = unit("C").unwrap();
+        let xs: Vec<f64> = (0..=12).map(|i| i as f64 * 0.1 / 12.0).collect();
+        let ys: Vec<f64> = xs
+            .iter()
+            .map(|x| 263.15 + 3.0 + 150.0 * (-x / 0.004).exp())
+            .collect();
+        let m = sweep_figure(&Sweep {
+            id: "surface-thickness",
+            title: "Surface",
+            x_label: "outer layer thickness",
+            x_unit: unit("mm").unwrap(),
+            y_label: "surface",
+            y_unit: c,
+            xs: &xs,
+            ys: &ys,
+            point: None,
+            targets: &[("touch limit", 333.15), ("dew point + margin", 263.15)],
+            width: 480.0,
+        });
+        let at = |w: &str| {
+            let i = m.find(&format!(">{w}</text>")).unwrap();
+            let open = m[..i].rfind("<text").unwrap();
+            m[open..i].to_string()
+        };
+        assert!(at("touch limit").contains(r#"text-anchor="end""#), "{m}");
+        let line_y = |v: f64| -> f64 {
+            let f = line_chart(
+                &xs.iter().map(|x| x * 1000.0).collect::<Vec<_>>(),
+                &ys.iter().map(|y| y - 273.15).collect::<Vec<_>>(),
+                &[60.0, -10.0],
+                480.0,
+                240.0,
+            )
+            .frame;
+            f.to_svg(f.x.0, v).1
+        };
+        let dew = at("dew point + margin");
+        let y: f64 = dew
+            .split("y=\"")
+            .nth(1)
+            .unwrap()
+            .split('"')
+            .next()
+            .unwrap()
+            .parse()
+            .unwrap();
+        assert!(y > line_y(-10.0), "below its line: {dew}");
     }
 }

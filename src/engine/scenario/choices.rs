@@ -125,14 +125,17 @@ pub enum InsideFilm {
     Water,
     EthyleneGlycol,
     PropyleneGlycol,
+    /// Steam or a gas inside: the film is typed, and there is no water to freeze.
+    Gas,
 }
 
 impl InsideFilm {
-    pub const ALL: [InsideFilm; 4] = [
+    pub const ALL: [InsideFilm; 5] = [
         InsideFilm::Typed,
         InsideFilm::Water,
         InsideFilm::EthyleneGlycol,
         InsideFilm::PropyleneGlycol,
+        InsideFilm::Gas,
     ];
     /// Stable id in links.
     pub fn id(&self) -> &'static str {
@@ -141,6 +144,7 @@ impl InsideFilm {
             InsideFilm::Water => "water",
             InsideFilm::EthyleneGlycol => "eg",
             InsideFilm::PropyleneGlycol => "pg",
+            InsideFilm::Gas => "gas",
         }
     }
     pub fn label(&self) -> &'static str {
@@ -149,6 +153,7 @@ impl InsideFilm {
             InsideFilm::Water => "Flow of water",
             InsideFilm::EthyleneGlycol => "Flow of ethylene glycol–water",
             InsideFilm::PropyleneGlycol => "Flow of propylene glycol–water",
+            InsideFilm::Gas => "Steam or gas inside, film typed below (nothing to freeze)",
         }
     }
     pub fn from_id(id: &str) -> Option<Self> {

@@ -212,6 +212,20 @@ pub fn from_fragment(fragment: &str) -> Result<(Scenario, System), String> {
             }
         }
     }
+    // The surroundings and the ground follow the stream's temperature until set apart: a link
+    // that leaves them out (written by hand) means the stream's, not the demo's.
+    // (A field the scenario does not use keeps the demo's value, so every written link still
+    // reads back exactly.)
+    let has = |k: &str| {
+        f.split('&')
+            .any(|p| p.split_once('=').is_some_and(|(key, _)| key == k))
+    };
+    if !has("Tr") && s.uses(Field::Surround) {
+        s.t_surround = s.fluid_temp;
+    }
+    if !has("Tg") && s.uses(Field::GroundTemp) {
+        s.t_ground = s.fluid_temp;
+    }
     match version {
         Some(v) if v == LINK_VERSION.to_string() => Ok((s, system)),
         Some(_) => Err(format!(

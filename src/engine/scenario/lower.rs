@@ -26,7 +26,7 @@ impl Scenario {
 
     /// Whether the inside film is worked out from a process fluid's flow (solved pipes only).
     pub fn inside_computed(&self) -> bool {
-        self.offers_inside_film() && self.inside != InsideFilm::Typed
+        self.offers_inside_film() && !matches!(self.inside, InsideFilm::Typed | InsideFilm::Gas)
     }
 
     /// The process fluid whose flow sets the inside film, when it is worked out.
@@ -270,7 +270,10 @@ impl Scenario {
             efficiency: self.efficiency,
             mass_flow: self.mass_flow,
             process_cp: inside.props().map(|pr| pr.cp).unwrap_or(self.process_cp),
-            process_water: !matches!(self.process_fluid(), Some(Fluid::Glycol(..))),
+            // Water unless the line carries a glycol mixture or steam (gas): a steam line gets
+            // no freezing card.
+            process_water: !(self.offers_inside_film() && self.inside == InsideFilm::Gas)
+                && !matches!(self.process_fluid(), Some(Fluid::Glycol(..))),
             wall_heat_capacity: self.wall.properties().map(|(_, rho, cp)| {
                 crate::engine::layers::wall_heat_capacity(
                     self.diameter,

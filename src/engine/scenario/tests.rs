@@ -618,3 +618,43 @@ fn the_reports_key_steps_are_written() {
         o.working.iter().map(|s| s.title).collect::<Vec<_>>()
     );
 }
+
+/// Regression (phone walk): a winter steam line showed a freezing card with no way to say it
+/// carries steam. Marked as steam or gas, it has none; typed (unknown contents, taken as water)
+/// it keeps it.
+#[test]
+fn a_steam_line_gets_no_freezing_card() {
+    let mut s = DEMO;
+    s.surface_mode = SurfaceMode::Solved;
+    s.fluid_temp = 263.15;
+    s.t_surround = 263.15;
+    s.process_temp = 423.15;
+    s.layer_count = 0;
+    s.mass_flow = 0.0;
+    s.inside = InsideFilm::Typed;
+    let has_freeze = |s: &Scenario| {
+        evaluate(s)
+            .unwrap()
+            .verdicts
+            .iter()
+            .any(|v| v.id == "freeze")
+    };
+    assert!(has_freeze(&s));
+    s.inside = InsideFilm::Gas;
+    assert!(!has_freeze(&s));
+    // the link keeps the choice
+    let (back, _) = from_fragment(&to_fragment(&s, crate::engine::units::System::Si)).unwrap();
+    assert_eq!(back.inside, InsideFilm::Gas);
+}
+
+/// A hand-written link that leaves out the surroundings and the ground means the stream's
+/// temperature for both, not the demo's (a winter link radiated to 5 °C surroundings).
+#[test]
+fn a_link_without_surroundings_follows_the_stream() {
+    let (s, _) = from_fragment("v=1&s=cyl&Ta=263.15&sm=x&Tp=423.15").unwrap();
+    assert_eq!(s.t_surround, 263.15);
+    let (s, _) = from_fragment("v=1&s=cyl&f=humid&Ta=263.15&env=out").unwrap();
+    assert_eq!(s.t_ground, 263.15);
+    let (s, _) = from_fragment("v=1&s=cyl&Ta=263.15&Tr=300").unwrap();
+    assert_eq!(s.t_surround, 300.0);
+}
