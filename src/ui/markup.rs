@@ -285,7 +285,7 @@ pub fn report(
     kv(&mut m, "Radiation part", u(o.q_rad_total, Dim::HeatFlow, c));
     kv(
         &mut m,
-        "Energy per year",
+        "Energy bought per year",
         u(o.annual_energy, Dim::EnergyPerYear, c),
     );
     kv(
@@ -444,7 +444,7 @@ pub fn figures(o: &Outcome, c: &UnitChoice, run: &str) -> String {
     );
     figure(
         &mut m,
-        &format!("Energy per year{run}"),
+        &format!("Energy bought per year{run}"),
         "annual_energy",
         Some(o.annual_energy),
         Some(Dim::EnergyPerYear),
