@@ -232,22 +232,7 @@ proptest! {
             Ok(o) => o,
             Err(e) => return Err(TestCaseError::fail(format!("{e} for {s:?}"))),
         };
-        let sol = &o.job.as_ref().unwrap().solution;
-        prop_assert!(sol.iterations <= leeward::engine::solve::MAX_ITER);
-        // Closure to 1e-9 of the heat flow — or, where the surface sits within micro-kelvins of
-        // the air, to what f64 can resolve: the loss is (h + h_rad)·A·(Ts − T∞) and Ts itself carries
-        // a rounding of about ε·Ts, so the residual cannot be smaller than that times the
-        // conductance (with a factor 100 of headroom).
-        let area = if s.shape == leeward::engine::scenario::Shape::Sphere {
-            std::f64::consts::PI * sol.outer_d * sol.outer_d
-        } else {
-            std::f64::consts::PI * sol.outer_d
-        };
-        let floor = 100.0 * f64::EPSILON * o.surface_temp * (sol.loss.h_conv + sol.loss.h_rad) * area;
-        prop_assert!(
-            sol.residual.abs() <= (1e-9 * sol.q.abs()).max(floor),
-            "residual {} of {} (floor {})", sol.residual, sol.q, floor
-        );
+        closes(&s, &o, 0.0)?;
         for v in [o.h, o.q_total, o.surface_temp, o.annual_energy, o.annual_cost] {
             prop_assert!(v.is_finite());
         }
@@ -298,19 +283,9 @@ proptest! {
             Ok(o) => o,
             Err(e) => return Err(TestCaseError::fail(format!("{e} for {s:?}"))),
         };
-        let sol = &o.job.as_ref().unwrap().solution;
-        prop_assert!(sol.iterations <= leeward::engine::solve::MAX_ITER);
-        let area = if s.shape == leeward::engine::scenario::Shape::Sphere {
-            std::f64::consts::PI * sol.outer_d * sol.outer_d
-        } else {
-            std::f64::consts::PI * sol.outer_d
-        };
-        let floor = 100.0 * f64::EPSILON * o.surface_temp * (sol.loss.h_conv + sol.loss.h_rad) * area;
-        let sun = o.solar_total.unwrap() / if s.shape == leeward::engine::scenario::Shape::Sphere { 1.0 } else { s.length };
-        prop_assert!(
-            sol.residual.abs() <= (1e-9 * sol.q.abs().max(sun)).max(floor),
-            "residual {} of {} (sun {sun}, floor {floor})", sol.residual, sol.q
-        );
+        let sun = o.solar_total.unwrap()
+            / if s.shape == leeward::engine::scenario::Shape::Sphere { 1.0 } else { s.length };
+        closes(&s, &o, sun)?;
         for v in [o.h, o.q_total, o.surface_temp, o.sky_temp.unwrap(), o.radiant_temp.unwrap(), o.wind_at_body.unwrap()] {
             prop_assert!(v.is_finite());
         }
@@ -463,4 +438,31 @@ proptest! {
             }
         }
     }
+}
+
+/// The solved job's energy balance closes within the solver's bound: to 1e-9 of the heat flow (or
+/// of the absorbed sun per metre, `sun`, where that is larger) — or, where the surface sits within
+/// micro-kelvins of the air, to what f64 can resolve: the loss is (h + h_rad)·A·(Ts − T∞) and Ts
+/// itself carries a rounding of about ε·Ts, so the residual cannot be smaller than that times the
+/// conductance (with a factor 100 of headroom).
+fn closes(
+    s: &leeward::engine::scenario::Scenario,
+    o: &leeward::engine::scenario::Outcome,
+    sun: f64,
+) -> Result<(), TestCaseError> {
+    let sol = &o.job.as_ref().unwrap().solution;
+    prop_assert!(sol.iterations <= leeward::engine::solve::MAX_ITER);
+    let area = if s.shape == leeward::engine::scenario::Shape::Sphere {
+        std::f64::consts::PI * sol.outer_d * sol.outer_d
+    } else {
+        std::f64::consts::PI * sol.outer_d
+    };
+    let floor = 100.0 * f64::EPSILON * o.surface_temp * (sol.loss.h_conv + sol.loss.h_rad) * area;
+    prop_assert!(
+        sol.residual.abs() <= (1e-9 * sol.q.abs().max(sun)).max(floor),
+        "residual {} of {} (sun {sun}, floor {floor})",
+        sol.residual,
+        sol.q
+    );
+    Ok(())
 }
