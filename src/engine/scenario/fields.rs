@@ -215,7 +215,7 @@ fn layer_3(s: &Scenario) -> bool {
     s.solved() && s.layer_count >= 3
 }
 fn still_water(s: &Scenario) -> bool {
-    s.offers_inside_film() && s.mass_flow == 0.0
+    s.offers_inside_film() && s.mass_flow == 0.0 && !s.carries_gas()
 }
 fn process_cp_typed(s: &Scenario) -> bool {
     s.offers_inside_film() && !s.inside_computed()

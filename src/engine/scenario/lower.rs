@@ -29,6 +29,11 @@ impl Scenario {
         self.offers_inside_film() && !matches!(self.inside, InsideFilm::Typed | InsideFilm::Gas)
     }
 
+    /// The line carries steam or a gas: nothing inside can freeze.
+    pub fn carries_gas(&self) -> bool {
+        self.offers_inside_film() && self.inside == InsideFilm::Gas
+    }
+
     /// The process fluid whose flow sets the inside film, when it is worked out.
     pub fn process_fluid(&self) -> Option<Fluid> {
         if !self.inside_computed() {
@@ -272,7 +277,7 @@ impl Scenario {
             process_cp: inside.props().map(|pr| pr.cp).unwrap_or(self.process_cp),
             // Water unless the line carries a glycol mixture or steam (gas): a steam line gets
             // no freezing card.
-            process_water: !(self.offers_inside_film() && self.inside == InsideFilm::Gas)
+            process_water: !self.carries_gas()
                 && !matches!(self.process_fluid(), Some(Fluid::Glycol(..))),
             wall_heat_capacity: self.wall.properties().map(|(_, rho, cp)| {
                 crate::engine::layers::wall_heat_capacity(

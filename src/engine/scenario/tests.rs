@@ -642,6 +642,8 @@ fn a_steam_line_gets_no_freezing_card() {
     assert!(has_freeze(&s));
     s.inside = InsideFilm::Gas;
     assert!(!has_freeze(&s));
+    // nor is the time to hold out against freezing asked for (the report listed it)
+    assert!(!s.uses(Field::FreezeTarget));
     // the link keeps the choice
     let (back, _) = from_fragment(&to_fragment(&s, crate::engine::units::System::Si)).unwrap();
     assert_eq!(back.inside, InsideFilm::Gas);
