@@ -99,8 +99,10 @@ fn eighths(inches: f64) -> String {
 }
 
 /// What a card says of the thickness that meets its limit, in the length unit the person reads
-/// (inch series where lengths are in inches or feet): "needs ≥ 38 mm; next stocked size 40 mm".
-pub fn order_text(needed: f64, length: &'static Unit) -> String {
+/// (inch series where lengths are in inches or feet): "needs ≥ 38 mm; next stocked size 40 mm",
+/// or, when the present layer already meets it (`met`), "meets it from 2 mm; the thinnest
+/// stocked size that does is 13 mm" (a present layer is never said to need what it has).
+pub fn order_text(needed: f64, length: &'static Unit, met: bool) -> String {
     let inch = matches!(length.id, "in" | "ft");
     let (up, next) = thickness_to_order(needed, inch);
     let write = |t: f64| {
@@ -115,12 +117,18 @@ pub fn order_text(needed: f64, length: &'static Unit) -> String {
             )
         }
     };
-    match next {
-        Some(n) => format!("needs ≥ {}; next stocked size {}", write(up), write(n)),
-        None => format!(
+    match (next, met) {
+        (Some(n), false) => format!("needs ≥ {}; next stocked size {}", write(up), write(n)),
+        (None, false) => format!(
             "needs ≥ {}, thicker than the stocked sizes listed",
             write(up)
         ),
+        (Some(n), true) => format!(
+            "meets it from {}; the thinnest stocked size that does is {}",
+            write(up),
+            write(n)
+        ),
+        (None, true) => format!("meets it from {}", write(up)),
     }
 }
 
@@ -151,20 +159,25 @@ mod tests {
     fn the_card_writes_the_thickness_as_ordered() {
         let u = |id| units::unit(id).unwrap();
         assert_eq!(
-            order_text(0.0372, u("mm")),
+            order_text(0.0372, u("mm"), false),
             "needs ≥ 38 mm; next stocked size 40 mm"
         );
         assert_eq!(
-            order_text(1.1 * 0.0254, u("in")),
+            order_text(1.1 * 0.0254, u("in"), false),
             "needs ≥ 1⅛ in; next stocked size 1½ in"
         );
         assert_eq!(
-            order_text(0.3 * 0.0254, u("in")),
+            order_text(0.3 * 0.0254, u("in"), false),
             "needs ≥ ⅜ in; next stocked size ½ in"
         );
         assert_eq!(
-            order_text(0.25, u("mm")),
+            order_text(0.25, u("mm"), false),
             "needs ≥ 250 mm, thicker than the stocked sizes listed"
+        );
+        // A present layer that already meets the limit is not said to need it.
+        assert_eq!(
+            order_text(0.0017, u("mm"), true),
+            "meets it from 2 mm; the thinnest stocked size that does is 10 mm"
         );
     }
 }

@@ -43,7 +43,7 @@ pub fn verdict_cards(o: &Outcome, c: &UnitChoice, section: Option<&str>) -> Stri
             let _ = write!(
                 m,
                 r#"<p class="order" data-order>The outer layer <strong>{}</strong>.</p>"#,
-                esc(&order_text(th, c.get(Dim::Length)))
+                esc(&order_text(th, c.get(Dim::Length), v.ok))
             );
         }
         m.push_str("<ul>");
@@ -326,7 +326,7 @@ pub fn report(
         if let Some(th) = v.thickness {
             figs.push(format!(
                 "outer layer {}",
-                order_text(th, c.get(Dim::Length))
+                order_text(th, c.get(Dim::Length), v.ok)
             ));
         }
         let _ = write!(

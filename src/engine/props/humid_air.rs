@@ -154,8 +154,10 @@ fn vapour(t: f64, p: f64, h: Humidity) -> Result<(f64, f64), EngineError> {
         Humidity::Relative(rh) => {
             finite("relative humidity", rh)?;
             if t > water::T_CRIT {
+                // The air temperature is what was typed last and what to change (or give the dew
+                // point): the message stands beside the stream's temperature.
                 return Err(EngineError::Undefined {
-                    subject: crate::engine::error::Subject::Humidity,
+                    subject: crate::engine::error::Subject::Input("Ta"),
                     quantity: "relative humidity",
                     value: rh * 100.0,
                     unit: "%",

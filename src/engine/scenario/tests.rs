@@ -660,3 +660,19 @@ fn a_link_without_surroundings_follows_the_stream() {
     let (s, _) = from_fragment("v=1&s=cyl&Ta=263.15&Tr=300").unwrap();
     assert_eq!(s.t_surround, 300.0);
 }
+
+/// Air typed at 1,000 °C with a relative humidity: the humidity has no meaning above water's
+/// critical temperature (647.096 K, IAPWS), and the message stands beside the air temperature
+/// that was typed, not beside the humidity several fields away.
+#[test]
+fn air_above_waters_critical_point_is_marked_at_its_temperature() {
+    let mut s = DEMO;
+    s.fluid_temp = 1273.15;
+    let e = evaluate(&s).unwrap_err();
+    assert_eq!(error_field(&s, &e), Some(Field::FluidTemp), "{e}");
+    assert!(e.to_string().contains("dew point"), "{e}");
+    // What the message offers: the same air with its dew point given computes.
+    s.humidity_input = HumidityInput::DewPoint;
+    s.dew_point = 283.15;
+    assert!(evaluate(&s).is_ok());
+}
