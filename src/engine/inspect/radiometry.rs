@@ -189,8 +189,8 @@ pub fn check(r: &Reading, emissivity: f64) -> Result<(), EngineError> {
         return Err(input_error(
             "lb2",
             "band upper wavelength",
-            b,
-            "m",
+            b * 1e6,
+            "µm",
             "must be longer than the band's lower wavelength (an empty or reversed band)",
         ));
     }
