@@ -11,6 +11,7 @@ pub mod chart;
 pub mod correlations;
 pub mod error;
 pub mod heatloss;
+pub mod inspect;
 pub mod job;
 pub mod layers;
 pub mod outdoors;

@@ -1,6 +1,7 @@
 //! Criterion benchmarks of the engine: `cargo bench --bench engine`.
 //! Budgets (README, Performance): one property set ≤ 1 µs; all correlations of one shape for one
-//! state, properties included, ≤ 1 µs; a full scenario evaluation (with its working) recorded.
+//! state, properties included, ≤ 1 µs; the inspection's effective-k inverse ≤ 100 µs; a full
+//! scenario evaluation (with its working) recorded.
 
 mod field_job;
 
@@ -87,11 +88,33 @@ fn field_job(c: &mut Criterion) {
     });
 }
 
+/// The inspection's inverse (issue #20): the factor on the outer layer's k that reproduces a
+/// measured surface, on the two-layer field job (budget 100 µs native, as the thickness inverse).
+/// The surface is the job's own with that layer's k doubled, so the answer is known (2).
+fn effective_k(c: &mut Criterion) {
+    use leeward::engine::inspect::effective_k::{effective_k, scaled};
+    let job = field_job::job();
+    let ts = leeward::engine::heatloss::solve(&scaled(&job, 2.0))
+        .unwrap()
+        .t_surface;
+    c.bench_function(
+        "inspection: outer layer's k factor from a measured surface",
+        |b| b.iter(|| effective_k(black_box(&job), black_box(ts)).unwrap()),
+    );
+}
+
 fn scenario(c: &mut Criterion) {
     c.bench_function("demo scenario, full evaluation", |b| {
         b.iter(|| evaluate(black_box(&DEMO)).unwrap())
     });
 }
 
-criterion_group!(benches, properties, correlations, field_job, scenario);
+criterion_group!(
+    benches,
+    properties,
+    correlations,
+    field_job,
+    effective_k,
+    scenario
+);
 criterion_main!(benches);

@@ -6,6 +6,7 @@ mod correlation_reference;
 mod entry;
 mod fixture;
 mod fluid_reference;
+mod infrared;
 mod property_laws;
 mod recommendation;
 mod round_trip;

@@ -1,5 +1,5 @@
 //! Every input field survives the three ways a scenario travels — the link, the saved-work file
-//! and the survey CSV (in SI and in US units) — at full precision. Five scenarios together use
+//! and the survey CSV (in SI and in US units) — at full precision. Six scenarios together use
 //! every row of `FIELDS` (the test checks that they do), each value is nudged off round numbers,
 //! and what comes back must be the same number: bit for bit through the link and the file (they
 //! carry the SI value), within 1e-12 relative through the CSV in US units (a unit conversion and
@@ -56,7 +56,18 @@ fn scenarios() -> Vec<Scenario> {
     e.albedo = 0.25;
     e.body_height = 4.5;
     e.yaw = 40.0;
-    vec![a, b, c, d, e]
+
+    // An infrared reading (issue #20): every reading input off its default.
+    let mut f = a;
+    f.surface_mode = SurfaceMode::Reading;
+    f.ir_reading = 301.0;
+    f.ir_emissivity = 0.93;
+    f.ir_reflected = 281.0;
+    f.ir_band_low = 7.5e-6;
+    f.ir_band_high = 13e-6;
+    f.ir_accuracy = 1.5;
+    f.ir_emissivity_uncertainty = 0.03;
+    vec![a, b, c, d, f, e]
 }
 
 /// A value off round numbers, still inside the field's hard limits.

@@ -191,9 +191,12 @@ impl Inside {
     }
 }
 
-/// Whether the surface temperature is typed or solved from the process inside.
+/// Whether the surface temperature is typed, solved from the process inside, or read with an
+/// infrared instrument (issue #20: the construction is solved as designed, and the reading,
+/// corrected, says what the insulation really does; link `sm=r`).
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum SurfaceMode {
     Given,
     Solved,
+    Reading,
 }

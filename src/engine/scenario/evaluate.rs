@@ -124,6 +124,10 @@ pub struct Outcome {
     /// Flags on the answer: properties, the recommended correlation, natural convection, blend.
     pub flags: Vec<Flag>,
     pub working: Vec<Step>,
+    /// Read with an infrared instrument (`SurfaceMode::Reading`, issue #20): the reading
+    /// corrected, the loss as built against the design (the rest of the outcome is the design),
+    /// the outer layer's k ratio, the condition, the excess and the ranges.
+    pub inspection: Option<crate::engine::inspect::Inspection>,
 }
 
 /// Evaluate a scenario. Errors only where nothing meaningful can be computed.
@@ -146,8 +150,16 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         env,
         mut flags,
     } = s.case()?;
+    let mut inspection = None;
     let (a, ts, outer_d, job_result) = match job {
         Some(job) => {
+            if s.reads() {
+                inspection = Some(crate::engine::inspect::inspect(
+                    &job,
+                    &s.ir(),
+                    &inspection_terms(s),
+                )?);
+            }
             let mut r = crate::engine::job::evaluate(&job, &targets, s.layer_count)?;
             if let Inside::Still(_) = &inside {
                 r.notes.push("No flow through the pipe: the inside film is not worked out, and the bore is taken at the process temperature (still fluid).".into());
@@ -231,6 +243,9 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
             ));
         }
     }
+    if let Some(i) = &inspection {
+        verdicts.push(inspection_verdict(s, i));
+    }
     crate::engine::job::sanitize(&mut verdicts);
     let nusselt = finite_result("Nusselt number", h * outer_d / a.film.k)?;
 
@@ -268,7 +283,11 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         env: &env,
     };
     let working = if sweeps {
-        working(s, &a, &w)
+        let mut steps = working(s, &a, &w);
+        if let Some(i) = &inspection {
+            steps.extend(inspection_working(s, i));
+        }
+        steps
     } else {
         Vec::new()
     };
@@ -345,6 +364,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         analysis: a,
         flags,
         working,
+        inspection,
     })
 }
 

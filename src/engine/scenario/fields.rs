@@ -63,6 +63,13 @@ pub enum Field {
     Albedo,
     BodyHeight,
     Yaw,
+    IrReading,
+    IrEmissivity,
+    IrReflected,
+    IrBandLow,
+    IrBandHigh,
+    IrAccuracy,
+    IrEmissivityUncertainty,
 }
 
 /// The group a field is shown in.
@@ -232,9 +239,12 @@ fn outdoors(s: &Scenario) -> bool {
 fn yawed(s: &Scenario) -> bool {
     s.outdoors() && s.yaw_applies()
 }
+fn read_ir(s: &Scenario) -> bool {
+    s.reads()
+}
 
 #[rustfmt::skip]
-pub const FIELDS: [FieldSpec; 57] = [
+pub const FIELDS: [FieldSpec; 64] = [
     f(Field::Diameter, Group::Body, "D", "Size D", Dim::Length, (0.0, true, 100.0), "as drawn: the width across the stream (bare outside diameter of a pipe)", at!(diameter), always),
     f(Field::Length, Group::Body, "L", "Length", Dim::RunLength, (0.0, true, 10_000.0), "along the axis; the height when upright", at!(length), not_sphere),
     f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air; outdoors, the wind a weather report gives (10 m over open ground)", at!(speed), always),
@@ -292,6 +302,13 @@ pub const FIELDS: [FieldSpec; 57] = [
     f(Field::Albedo, Group::Outdoors, "alb", "Ground reflectance", Dim::Ratio, (0.0, false, 1.0), "about 0.2 grass or soil, 0.3 concrete, 0.8 fresh snow (common practice)", at!(albedo), outdoors),
     f(Field::BodyHeight, Group::Outdoors, "zb", "Height above ground", Dim::RunLength, (0.0, true, 1000.0), "of the body: the wind there is less than the report's at 10 m", at!(body_height), outdoors),
     f(Field::Yaw, Group::Outdoors, "yaw", "Wind angle to the axis", Dim::Angle, (0.0, false, 90.0), "90° square across (the most cooling), 0° along it", at!(yaw), yawed),
+    f(Field::IrReading, Group::Surface, "Tir", "Infrared reading", Dim::Temperature, (0.0, true, 3000.0), "the temperature the instrument displayed on the surface", at!(ir_reading), read_ir),
+    f(Field::IrEmissivity, Group::Surface, "eir", "Instrument emissivity setting", Dim::Ratio, (0.0, true, 1.0), "what the instrument was set to; 0.95 is a common factory setting (common practice)", at!(ir_emissivity), read_ir),
+    f(Field::IrReflected, Group::Surface, "Trf", "Reflected apparent temperature", Dim::Temperature, (0.0, true, 3000.0), "what the instrument compensated with (ASTM E1862); the surroundings' if unsure", at!(ir_reflected), read_ir),
+    f(Field::IrBandLow, Group::Surface, "lb1", "Instrument band from", Dim::Wavelength, (0.1e-6, false, 100e-6), "shortest wavelength it sees; 8 µm for most field instruments", at!(ir_band_low), read_ir),
+    f(Field::IrBandHigh, Group::Surface, "lb2", "Instrument band to", Dim::Wavelength, (0.1e-6, false, 100e-6), "longest wavelength it sees; 14 µm for most field instruments", at!(ir_band_high), read_ir),
+    f(Field::IrAccuracy, Group::Surface, "dTir", "Reading accuracy", Dim::TemperatureDifference, (0.0, false, 100.0), "± as the instrument's sheet states it; {dT:2} is common for field instruments (common practice)", at!(ir_accuracy), read_ir),
+    f(Field::IrEmissivityUncertainty, Group::Surface, "de", "Emissivity uncertainty", Dim::Ratio, (0.0, false, 0.5), "± on the surface's emissivity; 0.05 from a table (common practice), less measured by ASTM E1933", at!(ir_emissivity_uncertainty), read_ir),
 ];
 
 /// The row of a field: `FIELDS` is in `Field`'s order (a test holds it so).
@@ -315,7 +332,8 @@ impl Scenario {
 }
 
 /// A field's help text in the units the person reads: `{T:333.15}` in a row's help is a
-/// temperature in kelvin, `{cp:4180}` a heat capacity in J/(kg·K), each written in the unit
+/// temperature in kelvin, `{dT:2}` a temperature difference in kelvin, `{cp:4180}` a heat
+/// capacity in J/(kg·K), each written in the unit
 /// chosen ("60 °C", "140 °F"; "4180 J/(kg·K)", "0.998 Btu/(lb·°F)").
 pub fn help_text(spec: &FieldSpec, c: &units::UnitChoice) -> String {
     let mut out = String::new();
@@ -328,6 +346,7 @@ pub fn help_text(spec: &FieldSpec, c: &units::UnitChoice) -> String {
             let dim = match k {
                 "T" => Dim::Temperature,
                 "cp" => Dim::SpecificHeat,
+                "dT" => Dim::TemperatureDifference,
                 _ => return None,
             };
             // Written as a person would type it ("60 °C", not "60.0 °C").

@@ -31,6 +31,7 @@ pub fn to_fragment(s: &Scenario, system: System) -> String {
         out.push_str(match s.surface_mode {
             SurfaceMode::Given => "&sm=g",
             SurfaceMode::Solved => "&sm=x",
+            SurfaceMode::Reading => "&sm=r",
         });
     }
     if s.solved() {
@@ -152,6 +153,7 @@ pub fn from_fragment(fragment: &str) -> Result<(Scenario, System), String> {
                 s.surface_mode = match value {
                     "g" => SurfaceMode::Given,
                     "x" => SurfaceMode::Solved,
+                    "r" => SurfaceMode::Reading,
                     _ => return Err("the link names an unknown way to give the surface".into()),
                 }
             }

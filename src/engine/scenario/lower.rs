@@ -13,9 +13,28 @@ impl Scenario {
     }
 
     /// Whether the surface temperature is solved from the process inside (pipes and vessels only).
+    /// An infrared reading solves the construction as designed too (see [`Scenario::reads`]).
     pub fn solved(&self) -> bool {
-        self.surface_mode == SurfaceMode::Solved
-            && matches!(self.shape, Shape::Cylinder | Shape::Sphere)
+        matches!(
+            self.surface_mode,
+            SurfaceMode::Solved | SurfaceMode::Reading
+        ) && matches!(self.shape, Shape::Cylinder | Shape::Sphere)
+    }
+
+    /// Whether the surface was read with an infrared instrument (issue #20): the design is solved
+    /// as in [`Scenario::solved`], and the reading, corrected, is set against it.
+    pub fn reads(&self) -> bool {
+        self.surface_mode == SurfaceMode::Reading && self.solved()
+    }
+
+    /// The infrared reading's own inputs, as the inspection takes them.
+    pub fn ir(&self) -> crate::engine::inspect::Reading {
+        crate::engine::inspect::Reading {
+            displayed: self.ir_reading,
+            emissivity_set: self.ir_emissivity,
+            reflected: self.ir_reflected,
+            band: (self.ir_band_low, self.ir_band_high),
+        }
     }
 
     /// A pipe carrying a process fluid, solved from inside: the flow, the inside-film choice, the
@@ -237,6 +256,25 @@ impl Scenario {
                 unit: si_unit.symbol,
                 why: "outside the physical limits of the input",
             })?;
+        }
+        if self.reads() {
+            crate::engine::inspect::radiometry::check(&self.ir(), self.emissivity)?;
+            let hot = self.process_temp > self.fluid_temp;
+            if (hot && self.ir_reading > self.process_temp)
+                || (!hot && self.ir_reading < self.process_temp)
+            {
+                return Err(EngineError::Undefined {
+                    subject: crate::engine::error::Subject::Input("Tir"),
+                    quantity: "infrared reading",
+                    value: self.ir_reading,
+                    unit: "K",
+                    why: if hot {
+                        "is above the process temperature of a hot line: the surface cannot be hotter than what heats it (in the sun, read in the shade)"
+                    } else {
+                        "is below the process temperature of a cold line: the surface cannot be colder than what cools it"
+                    },
+                });
+            }
         }
         if !self.solved() && self.surface_temp == self.fluid_temp {
             return Err(EngineError::NoTemperatureDifference {

@@ -21,6 +21,9 @@ mod choices;
 mod entry;
 mod evaluate;
 mod fields;
+mod inspection;
+#[cfg(test)]
+mod inspection_tests;
 mod link;
 mod lower;
 mod outdoor;
@@ -35,6 +38,7 @@ pub use choices::*;
 pub use entry::*;
 pub use evaluate::*;
 pub use fields::*;
+pub(crate) use inspection::*;
 pub use link::*;
 pub(crate) use lower::Case;
 pub use outdoor::*;
@@ -126,6 +130,16 @@ pub struct Scenario {
     pub body_height: f64,
     /// Outdoors: the wind's angle to the axis, degrees (90: square to it).
     pub yaw: f64,
+    /// Read with an infrared instrument (issue #20): the temperature it displayed, K; the
+    /// emissivity it was set to; the reflected apparent temperature it compensated with, K; its
+    /// waveband, m; its stated accuracy, ± K; the surface emissivity's uncertainty, ±.
+    pub ir_reading: f64,
+    pub ir_emissivity: f64,
+    pub ir_reflected: f64,
+    pub ir_band_low: f64,
+    pub ir_band_high: f64,
+    pub ir_accuracy: f64,
+    pub ir_emissivity_uncertainty: f64,
 }
 
 /// The demo that opens by default (invented): a bare 2-inch line (60.3 mm outside diameter), a
@@ -204,6 +218,16 @@ pub const DEMO: Scenario = Scenario {
     // A low pipe rack (invented round value).
     body_height: 3.0,
     yaw: 90.0,
+    // An invented reading of the insulated line: 7.5 °C on an instrument at its factory 0.95 (common
+    // practice), the surroundings as the reflected temperature, the 8–14 µm band of most field
+    // instruments, ±2 K and ±0.05 (common practice).
+    ir_reading: 280.65,
+    ir_emissivity: 0.95,
+    ir_reflected: 278.15,
+    ir_band_low: 8e-6,
+    ir_band_high: 14e-6,
+    ir_accuracy: crate::engine::inspect::DEFAULT_ACCURACY,
+    ir_emissivity_uncertainty: crate::engine::inspect::DEFAULT_EMISSIVITY_UNCERTAINTY,
 };
 
 pub const DEMO_TITLE: &str = "Demo: a bare 2-inch line on a windy roof";

@@ -5,7 +5,8 @@
 //! `sm`, `wm`, `nl`, `hf`, `env`, `tc`; blank where the link leaves them out); then every numeric input as
 //! `label (key) [unit id]`, e.g. `Size D (D) [mm]`, `Stream temperature (Ta) [C]` (files with the
 //! bare `key [unit id]` of earlier versions still read), blank where the item does not use it;
-//! then the results (`Result: …`) and verdicts (`Verdict: …`), which the import ignores; last
+//! then the results (`Result: …`, an infrared reading's four among them) and verdicts
+//! (`Verdict: …`), which the import ignores; last
 //! the item's `link`. A cell that still shows what the export wrote keeps the link's full
 //! precision; a changed cell wins; a blank cell takes the link's value, or the demo's.
 
@@ -23,14 +24,19 @@ pub const CHOICE_KEYS: [&str; 12] = [
 ];
 
 /// The verdict columns of the CSV: the card's id and the column's heading.
-const VERDICT_COLUMNS: [(&str, &str); 6] = [
+const VERDICT_COLUMNS: [(&str, &str); 7] = [
     ("touch", "touch"),
     ("dew", "condensation"),
     ("freeze", "freezing"),
     ("flow", "outlet"),
     ("loss", "loss target"),
     ("cooling", "cooling"),
+    ("insulation", "insulation condition"),
 ];
+
+/// How many result cells come before the verdicts: five figures, the range notes and the
+/// inspection's four (blank unless the item was read with an infrared instrument).
+const RESULT_CELLS: usize = 10;
 
 /// A CSV cell, quoted where it must be (RFC 4180).
 fn cell(s: &str) -> String {
@@ -74,6 +80,16 @@ pub fn header(system: System) -> Vec<String> {
         format!("Result: energy per year [{}]", unit(Dim::EnergyPerYear)),
         format!("Result: cost per year [{}]", unit(Dim::MoneyPerYear)),
         "Result: range notes".to_string(),
+        format!(
+            "Result: surface from the infrared reading [{}]",
+            unit(Dim::Temperature)
+        ),
+        "Result: outer layer k over data sheet".to_string(),
+        "Result: insulation condition".to_string(),
+        format!(
+            "Result: excess cost per year against design [{}]",
+            unit(Dim::MoneyPerYear)
+        ),
     ]);
     h.extend(
         VERDICT_COLUMNS
@@ -104,6 +120,15 @@ fn result_cells(r: &Figure, c: &UnitChoice) -> Vec<String> {
                 v(r.annual_cost, Dim::MoneyPerYear),
                 r.flags.to_string(),
             ];
+            match &r.inspection {
+                Some(i) => out.extend([
+                    v(i.surface, Dim::Temperature),
+                    units::format_value(i.k_ratio, c.get(Dim::Ratio)),
+                    cell(i.condition.id()),
+                    v(i.excess_cost, Dim::MoneyPerYear),
+                ]),
+                None => out.extend(std::iter::repeat_n(String::new(), 4)),
+            }
             out.extend(VERDICT_COLUMNS.iter().map(|(id, _)| {
                 match r.verdicts.iter().find(|(v, _)| v == id) {
                     Some((_, true)) => "ok".to_string(),
@@ -115,7 +140,7 @@ fn result_cells(r: &Figure, c: &UnitChoice) -> Vec<String> {
             out
         }
         Err(why) => {
-            let mut out = vec![String::new(); 6 + VERDICT_COLUMNS.len()];
+            let mut out = vec![String::new(); RESULT_CELLS + VERDICT_COLUMNS.len()];
             out.push(cell(why));
             out
         }

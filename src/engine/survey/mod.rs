@@ -18,6 +18,18 @@ pub struct ItemResult {
     pub annual_energy: f64,
     pub annual_cost: f64,
     pub verdicts: Vec<(&'static str, bool)>,
+    /// Read with an infrared instrument (issue #20): the corrected surface K, the outer layer's
+    /// k ratio to its data sheet, the condition, and the excess cost per year against design.
+    pub inspection: Option<InspectionFigures>,
+}
+
+/// An item's inspection in the list.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct InspectionFigures {
+    pub surface: f64,
+    pub k_ratio: f64,
+    pub condition: crate::engine::inspect::Condition,
+    pub excess_cost: f64,
 }
 
 pub fn evaluate_item(s: &Scenario) -> Result<ItemResult, EngineError> {
@@ -30,6 +42,12 @@ pub fn evaluate_item(s: &Scenario) -> Result<ItemResult, EngineError> {
         annual_energy: o.annual_energy,
         annual_cost: o.annual_cost,
         verdicts: o.verdicts.iter().map(|v| (v.id, v.ok)).collect(),
+        inspection: o.inspection.as_ref().map(|i| InspectionFigures {
+            surface: i.corrected.surface,
+            k_ratio: i.k.factor,
+            condition: i.condition,
+            excess_cost: i.excess_cost,
+        }),
     })
 }
 
@@ -137,5 +155,40 @@ mod tests {
         let want: f64 = rs.iter().map(|r| r.as_ref().unwrap().q_total).sum();
         assert_eq!(q, want);
         assert!(e > 0.0 && c > 0.0);
+    }
+
+    /// An item read with an infrared instrument carries its inspection into the CSV's result
+    /// columns (corrected surface, k ratio, condition, excess cost); an item without leaves them
+    /// blank, and the import reads both back.
+    #[test]
+    fn an_inspected_item_writes_its_inspection_columns() {
+        use crate::engine::scenario::SurfaceMode;
+        use crate::engine::store::Saved;
+        let mut read = DEMO;
+        read.surface_mode = SurfaceMode::Reading;
+        let items = [
+            Saved::new("Read", "IR-1", "Rack", &read, System::Si),
+            Saved::new("Plain", "P-1", "Roof", &DEMO, System::Si),
+        ];
+        let text = to_csv(&items, System::Si, &Figures::default());
+        let lines: Vec<Vec<&str>> = text.lines().map(|l| l.split(',').collect()).collect();
+        let col = |name: &str| {
+            lines[0]
+                .iter()
+                .position(|h| h.starts_with(name))
+                .unwrap_or_else(|| panic!("{name}"))
+        };
+        let i = evaluate_item(&read).unwrap().inspection.unwrap();
+        assert_eq!(
+            lines[1][col("Result: insulation condition")],
+            i.condition.id()
+        );
+        assert_eq!(lines[1][col("Verdict: insulation condition")], "attention");
+        assert!(!lines[1][col("Result: outer layer k")].is_empty());
+        assert!(!lines[1][col("Result: surface from the infrared")].is_empty());
+        assert!(lines[2][col("Result: excess cost")].is_empty());
+        let (rows, errors) = from_csv(&text);
+        assert!(errors.is_empty() && rows.len() == 2, "{errors:?}");
+        assert_eq!(rows[0].scenario().unwrap().0, read);
     }
 }

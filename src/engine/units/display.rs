@@ -99,6 +99,7 @@ pub fn resolution(u: &Unit) -> Resolution {
         (Dim::Ratio, _) => sig_at_least(2, 2),
         (Dim::Angle, _) => step(0),
         (Dim::Oktas, _) => step(1),
+        (Dim::Wavelength, _) => sig_at_least(2, 1),
         _ => sig(3),
     }
 }

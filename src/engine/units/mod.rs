@@ -51,10 +51,12 @@ pub enum Dim {
     HeatFlux,
     /// Cloud cover in oktas (eighths of the sky), 0–8.
     Oktas,
+    /// A wavelength (an infrared instrument's band), µm on the page in both systems.
+    Wavelength,
 }
 
 /// Every dimension, in the order the page lists them.
-pub const ALL_DIMS: [Dim; 28] = [
+pub const ALL_DIMS: [Dim; 29] = [
     Dim::Temperature,
     Dim::Length,
     Dim::Speed,
@@ -83,6 +85,7 @@ pub const ALL_DIMS: [Dim; 28] = [
     Dim::Angle,
     Dim::HeatFlux,
     Dim::Oktas,
+    Dim::Wavelength,
 ];
 
 /// A unit system for the global switch.
@@ -252,6 +255,8 @@ pub const UNITS: &[Unit] = &[
         0.0,
     ),
     u("okta", "oktas", Dim::Oktas, 1.0, 0.0),
+    u("m-wl", "m", Dim::Wavelength, 1.0, 0.0),
+    u("um", "µm", Dim::Wavelength, 1e-6, 0.0),
 ];
 
 impl Unit {
@@ -334,6 +339,7 @@ pub fn default_unit(dim: Dim, system: System) -> &'static Unit {
         (Dim::HeatFlux, System::Si) => "W/m2",
         (Dim::HeatFlux, System::Us) => "Btu/hft2",
         (Dim::Oktas, _) => "okta",
+        (Dim::Wavelength, _) => "um",
     };
     unit(id).expect("every default unit is in UNITS")
 }

@@ -1,0 +1,162 @@
+//! The inspection round (issue #20) in a scenario: its terms from the inputs, its verdict card and
+//! its steps of the working. The computation is `engine::inspect`.
+
+use super::*;
+use crate::engine::inspect::{Condition, Inspection, Terms};
+
+/// What a card on an inspection says beside its figures.
+pub const INSPECTION_CAUTION: &str = "An infrared survey screens; it does not prove. The k ratio carries every error of the reading (emissivity, reflected temperature, wind at the moment of reading, sun) and of the design inputs. Confirm a degraded or wet section by opening it or by a contact measurement before repair decisions, and follow your site's rules for work on hot or cold lines.";
+
+/// The inspection's terms from the scenario: run length (1 for a sphere: whole body), the energy
+/// and cost inputs, the reading's accuracy and the emissivity's uncertainty.
+pub(crate) fn inspection_terms(s: &Scenario) -> Terms {
+    Terms {
+        run: if s.shape.is_sphere() { 1.0 } else { s.length },
+        hours: s.hours,
+        efficiency: s.efficiency,
+        price: s.price,
+        accuracy: s.ir_accuracy,
+        emissivity_uncertainty: s.ir_emissivity_uncertainty,
+    }
+}
+
+/// The condition card: passes only as designed.
+pub(crate) fn inspection_verdict(s: &Scenario, i: &Inspection) -> Verdict {
+    let what = match i.condition {
+        Condition::AsDesigned => "The insulation performs as designed: its effective conductivity is within 1.3 times the data sheet's (common practice).",
+        Condition::Degraded => "The insulation is degraded: its effective conductivity is 1.3 to 2.5 times the data sheet's (common practice thresholds).",
+        Condition::Failed => "The insulation is likely wet, damaged or missing in part: its effective conductivity is more than 2.5 times the data sheet's (common practice threshold).",
+    };
+    let mut summary = what.to_string();
+    if !i.corrected.reliable() {
+        summary.push_str(" The reading is uncertain: ");
+        summary.push_str(
+            &i.corrected
+                .caveats
+                .iter()
+                .map(|c| c.text())
+                .collect::<Vec<_>>()
+                .join("; "),
+        );
+        summary.push('.');
+    }
+    let mut figures = vec![
+        ("surface, corrected", i.corrected.surface, Dim::Temperature),
+        ("surface as designed", i.design_surface, Dim::Temperature),
+        ("k over data sheet", i.k.factor, Dim::Fraction),
+    ];
+    if s.shape.perimeter_over_d().is_some() {
+        figures.push(("excess loss per length", i.excess, Dim::HeatFlowPerLength));
+    }
+    figures.extend([
+        ("excess loss of the item", i.excess_total, Dim::HeatFlow),
+        ("excess cost per year", i.excess_cost, Dim::MoneyPerYear),
+    ]);
+    Verdict {
+        id: "insulation",
+        title: "Insulation condition (infrared reading)",
+        ok: i.condition == Condition::AsDesigned,
+        summary,
+        figures,
+        thickness: None,
+        caution: Some(INSPECTION_CAUTION),
+    }
+}
+
+/// The inspection's steps of the working, each with its method named.
+pub(crate) fn inspection_working(s: &Scenario, i: &Inspection) -> Vec<Step> {
+    let g = |v: f64| format_sig(v, 5);
+    let c = &i.corrected;
+    let r = &i.reading;
+    let mut out = vec![Step {
+        title: "Infrared reading corrected (band radiance)",
+        text: format!(
+            "Method after ASTM E1862 (reflected temperature) and ASTM E1933 (emissivity): the instrument set to ε = {} showed {} K compensating a reflected {} K; the signal it received is ε_set·L(T_d) + (1 − ε_set)·L(T_r) = ε_s·L(T_s) + (1 − ε_s)·L(T_r) with the surface's ε_s = {}, L the blackbody radiance over its band {}–{} µm (Planck's law, the exact series Σ e^(−nx)(x³/n + 3x²/n² + 6x/n³ + 6/n⁴) for ∫x³/(eˣ − 1)dx, x = c₂/(λT)). L(T_d) = {} and L(T_r) = {} W/(m²·sr) give L(T_s) = {} W/(m²·sr), inverted by the bracketed solver in {} iterations: T_s = {} K, a correction of {} K. The total-radiation form (σT⁴ in place of L) gives {} K, a cross-check only. Assumed: a grey opaque surface, one uniform reflected temperature (the one the instrument used), air transmitting everything at short range. With the emissivity 0.05 off: {} and {} K.{}",
+            g(r.emissivity_set),
+            g(r.displayed),
+            g(r.reflected),
+            g(s.emissivity),
+            g(r.band.0 * 1e6),
+            g(r.band.1 * 1e6),
+            g(c.radiance_displayed),
+            g(c.radiance_reflected),
+            g(c.radiance_surface),
+            c.iterations,
+            g(c.surface),
+            format_sig(c.correction, 3),
+            g(c.total_radiation),
+            c.at_lower_emissivity
+                .map(g)
+                .unwrap_or_else(|| "no answer".into()),
+            g(c.at_higher_emissivity),
+            if c.reliable() {
+                String::new()
+            } else {
+                format!(
+                    " Flagged (common practice thresholds): {}.",
+                    c.caveats
+                        .iter()
+                        .map(|c| c.text())
+                        .collect::<Vec<_>>()
+                        .join("; ")
+                )
+            }
+        ),
+    }];
+    out.push(Step {
+        title: "Loss at the measured surface",
+        text: format!(
+            "Convection (the same correlations as the design, at T_s) plus radiation{} at the corrected surface {} K: {} W/m (or W for a sphere) leaves it. As designed the surface is {} K and loses {}.",
+            if s.outdoors() { " less the absorbed sun" } else { "" },
+            g(c.surface),
+            g(i.actual),
+            g(i.design_surface),
+            g(i.design)
+        ),
+    });
+    out.push(Step {
+        title: "Effective conductivity of the outer layer (inverse)",
+        text: format!(
+            "The measured loss crosses the inside film, the wall and the inner layers as designed, reaching the outer layer's inner face at {} K; the outer layer must carry it, q = f·S·[K(T_in) − K(T_s)] (Kirchhoff transform of the data sheet's k), which gives f = {}. The surface solve with the outer layer's k(T) times f, solved for f by bracketed regula falsi (Anderson–Björck) over ln f in {} iterations, gives f = {} with the solved surface {} K from the measured one.",
+            g(i.k.inner_face),
+            g(i.k.from_loss),
+            i.k.iterations,
+            g(i.k.factor),
+            format_sig(i.k.residual, 2)
+        ),
+    });
+    out.push(Step {
+        title: "Condition and excess against design",
+        text: format!(
+            "k ratio {} → {} (common practice thresholds: ≤ 1.3 as designed, ≤ 2.5 degraded, above likely wet, damaged or missing). Excess loss |q| − |q_design| = {} W/m (W for a sphere), {} W over the item; energy bought per year = excess × {} h × 3600 s/h ÷ efficiency {} = {} J/yr; at the price given, {} per year.",
+            g(i.k.factor),
+            i.condition.id(),
+            g(i.excess),
+            g(i.excess_total),
+            g(s.hours),
+            g(s.efficiency),
+            g(i.excess_energy),
+            format_sig(i.excess_cost, 3)
+        ),
+    });
+    let gr = &i.ranges;
+    out.push(Step {
+        title: "Ranges (bounds by corner evaluation)",
+        text: format!(
+            "Every corner of reading ± {} K, surface emissivity ± {} and forced convection × {} or × {} (the lowest and highest in-range correlation over the recommended one at the measured surface), each corrected, solved and inverted again; not a statistical interval. Surface {}–{} K, k ratio {}–{}, excess cost {}–{} per year; {} of {} corners explained by no insulation and left out.",
+            g(s.ir_accuracy),
+            g(s.ir_emissivity_uncertainty),
+            format_sig(gr.convection.0, 3),
+            format_sig(gr.convection.1, 3),
+            g(gr.surface.lo),
+            g(gr.surface.hi),
+            format_sig(gr.k_ratio.lo, 3),
+            format_sig(gr.k_ratio.hi, 3),
+            format_sig(gr.excess_cost.lo, 3),
+            format_sig(gr.excess_cost.hi, 3),
+            gr.unexplained,
+            gr.corners
+        ),
+    });
+    out
+}

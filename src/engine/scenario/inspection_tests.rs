@@ -1,0 +1,110 @@
+//! The inspection in a scenario (issue #20): the mode, its fields, its errors placed on the
+//! fields, its card and its working. The physics is checked in `engine::inspect`'s tests and
+//! against scipy in `tests/it/infrared.rs`.
+
+use super::*;
+
+fn reading() -> Scenario {
+    let mut s = DEMO;
+    s.surface_mode = SurfaceMode::Reading;
+    s
+}
+
+#[test]
+fn the_demo_read_with_an_instrument_shows_the_inspection() {
+    let s = reading();
+    let o = evaluate(&s).unwrap();
+    let i = o.inspection.as_ref().expect("an inspection");
+    eprintln!(
+        "demo read: Ts {} (design {}), f {}, {:?}",
+        i.corrected.surface, i.design_surface, i.k.factor, i.condition
+    );
+    // The rest of the outcome is the design, exactly as the solved mode gives it.
+    let mut solved = s;
+    solved.surface_mode = SurfaceMode::Solved;
+    let d = evaluate(&solved).unwrap();
+    assert_eq!((o.q_total, o.surface_temp), (d.q_total, d.surface_temp));
+    assert!(d.inspection.is_none());
+    assert_eq!(i.design, d.job.as_ref().unwrap().solution.q);
+    assert!(o.verdicts.iter().any(|v| v.id == "insulation"));
+    // Each step names its method.
+    for (title, method) in [
+        ("Infrared reading corrected (band radiance)", "ASTM E1862"),
+        ("Infrared reading corrected (band radiance)", "Planck"),
+        (
+            "Effective conductivity of the outer layer (inverse)",
+            "regula falsi",
+        ),
+        (
+            "Ranges (bounds by corner evaluation)",
+            "not a statistical interval",
+        ),
+    ] {
+        let step = o.working.iter().find(|w| w.title == title).expect(title);
+        assert!(step.text.contains(method), "{title}: {}", step.text);
+    }
+    // Only the reading mode uses the reading's fields.
+    for f in [Field::IrReading, Field::IrBandHigh, Field::IrAccuracy] {
+        assert!(s.uses(f) && !DEMO.uses(f) && !solved.uses(f));
+    }
+    assert!(!s.uses(Field::SurfaceTemp) && s.uses(Field::ProcessTemp));
+    // The link carries the mode.
+    let link = to_fragment(&s, System::Si);
+    assert!(link.contains("sm=r") && link.contains("Tir="));
+    assert_eq!(from_fragment(&link).unwrap().0, s);
+}
+
+#[test]
+fn bad_readings_are_messages_on_their_fields() {
+    let field = |s: &Scenario| {
+        let e = evaluate(s).unwrap_err();
+        (
+            error_field(s, &e),
+            error_message(&e, &units::UnitChoice::for_system(System::Si)),
+        )
+    };
+    let mut hot = reading();
+    hot.ir_reading = hot.process_temp + 5.0;
+    assert_eq!(field(&hot).0, Some(Field::IrReading));
+    let mut band = reading();
+    band.ir_band_high = 7e-6;
+    let (f, m) = field(&band);
+    assert_eq!(f, Some(Field::IrBandHigh));
+    assert!(m.contains("7 µm"), "{m}");
+    let mut same = reading();
+    same.ir_reflected = same.ir_reading;
+    assert_eq!(field(&same).0, Some(Field::IrReading));
+    let mut black = reading();
+    black.emissivity = 0.0;
+    assert_eq!(field(&black).0, Some(Field::Emissivity));
+    let mut set = reading();
+    set.ir_emissivity = 0.0;
+    assert!(evaluate(&set).is_err());
+    // Colder than the air on a hot line, indoors: no insulation explains it.
+    let mut cold = reading();
+    cold.ir_reading = cold.fluid_temp - 3.0;
+    cold.ir_reflected = cold.fluid_temp + 10.0;
+    let (f, m) = field(&cold);
+    assert_eq!(f, Some(Field::IrReading));
+    assert!(m.contains("no insulation explains it"), "{m}");
+    // A bare line has no insulation to judge.
+    let mut bare = reading();
+    bare.layer_count = 0;
+    assert!(evaluate(&bare).is_err());
+}
+
+/// A surface read as designed gives a k ratio of 1: the design surface, seen by an instrument
+/// set to the surface's own emissivity with the reflection at the surroundings, reads as itself.
+#[test]
+fn a_surface_read_as_designed_is_as_designed() {
+    let mut s = reading();
+    s.ir_emissivity = s.emissivity;
+    let design = evaluate(&s).unwrap().surface_temp;
+    s.ir_reading = design;
+    let o = evaluate(&s).unwrap();
+    let i = o.inspection.unwrap();
+    assert!((i.corrected.surface - design).abs() < 1e-9);
+    assert!((i.k.factor - 1.0).abs() < 1e-6, "{}", i.k.factor);
+    assert_eq!(i.condition, crate::engine::inspect::Condition::AsDesigned);
+    assert!(i.excess_cost.abs() < 1e-6 * o.annual_cost);
+}
