@@ -9,7 +9,8 @@ use crate::engine::units::{self, Dim, UnitChoice};
 
 /// The verdicts that earn a badge, in the order a technician asks about them, with short names
 /// (the card's title is the long one).
-const BADGES: [(&str, &str); 6] = [
+const BADGES: [(&str, &str); 7] = [
+    ("insulation", "Insulation"),
     ("touch", "Touch"),
     ("dew", "Sweat"),
     ("freeze", "Freeze"),
@@ -76,12 +77,18 @@ pub fn AnswerBar(
                     Some(q) => ("Loss", q, Dim::HeatFlowPerLength),
                     None => ("Loss", o.q_total, Dim::HeatFlow),
                 };
+                // Checking a reading: the loss and surface the reading says, not the design's.
+                let (label, v, surface, surface_label) = match &o.inspection {
+                    Some(i) => ("Loss, read", i.actual, i.corrected.surface, "Surface, read"),
+                    None => (label, v, o.surface_temp, "Surface"),
+                };
                 // A cold body gains heat: say so rather than show a negative loss.
                 let (label, v) = if v < 0.0 { ("Gain", -v) } else { (label, v) };
                 (
                     label,
                     units::show(v, c.get(d)),
-                    units::show(o.surface_temp, c.get(Dim::Temperature)),
+                    units::show(surface, c.get(Dim::Temperature)),
+                    surface_label,
                 )
             })
         })
@@ -127,9 +134,9 @@ pub fn AnswerBar(
         <div class="answer-bar" class:stale=stale data-answer-bar role="region" aria-label="Answer">
             <div class="answer-figures">
                 {move || match main() {
-                    Some((label, loss, surface)) => view! {
+                    Some((label, loss, surface, surface_label)) => view! {
                         <p><span class="answer-label">{label}</span><strong data-answer="loss">{loss}</strong></p>
-                        <p><span class="answer-label">"Surface"</span><strong data-answer="surface">{surface}</strong></p>
+                        <p><span class="answer-label">{surface_label}</span><strong data-answer="surface">{surface}</strong></p>
                     }.into_any(),
                     None => view! { <p>"—"</p> }.into_any(),
                 }}

@@ -428,6 +428,22 @@ pub fn App() -> impl IntoView {
         },
         |s| matches!(s.shape, Shape::Cylinder | Shape::Sphere),
     );
+    // An insulated line worked out from inside can be set against an infrared reading of its
+    // surface (the design stays the reference; the reading says what the insulation really does).
+    let reading_toggle = toggle(
+        "inspection",
+        "As designed",
+        "Check an infrared reading",
+        |s| s.surface_mode != SurfaceMode::Reading,
+        |s, a| {
+            s.surface_mode = if a {
+                SurfaceMode::Solved
+            } else {
+                SurfaceMode::Reading
+            }
+        },
+        |s| s.solved() && matches!(s.shape, Shape::Cylinder | Shape::Sphere),
+    );
     // An output: `data-si` carries the value as computed (signed, full precision); the text
     // shows it at its unit's resolution, as a magnitude where the label names the direction.
     let out_as = move |quantity: &'static str,
@@ -585,6 +601,7 @@ pub fn App() -> impl IntoView {
                 <section aria-labelledby="surface-title">
                     <h2 id="surface-title">"3 · Surface"</h2>
                     {surface_toggle}
+                    {reading_toggle}
                     {pickers::wall_select(scenario, choice)}
                     {pickers::inside_select(scenario)}
                     {fields_of(Group::Surface)}

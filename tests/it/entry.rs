@@ -201,3 +201,24 @@ fn the_surroundings_follow_the_stream_until_set_apart() {
     );
     assert!(scenario::field_note(&p.s, leeward::engine::scenario::Field::Surround).is_some());
 }
+
+/// The infrared reading's reflected temperature stands for the surroundings the instrument saw
+/// (ASTM E1862: the reflected apparent temperature): while a person has not set it apart it
+/// follows the stream's temperature, and the surroundings' once those are typed apart; typed
+/// apart itself, it stays.
+#[test]
+fn the_reflected_temperature_follows_the_surroundings_until_set_apart() {
+    let mut p = Page::new();
+    let key = |k: &str| FIELDS.iter().position(|f| f.key == k).unwrap();
+    let (ta, tr, trf) = (key("Ta"), key("Tr"), key("Trf"));
+    assert_eq!(p.s.ir_reflected, p.s.fluid_temp);
+    p.apply(&Act::Type(ta, "-20".into()));
+    assert!((p.s.ir_reflected - 253.15).abs() < 1e-9 && p.texts[trf] == "-20");
+    p.apply(&Act::Type(tr, "-30".into()));
+    assert!((p.s.ir_reflected - 243.15).abs() < 1e-9 && p.texts[trf] == "-30");
+    p.agrees().unwrap();
+    p.apply(&Act::Type(trf, "10".into()));
+    p.apply(&Act::Type(ta, "0".into()));
+    p.apply(&Act::Type(tr, "5".into()));
+    assert!((p.s.ir_reflected - 283.15).abs() < 1e-9, "set apart, it stays");
+}

@@ -24,8 +24,9 @@ pub fn shown_text(spec: &FieldSpec, si: f64, unit: &Unit) -> String {
 /// keeps its last good value and the message is returned for the page to show beside the field.
 ///
 /// The surroundings' temperature, and outdoors the ground's, follow the stream's while each is
-/// equal to it (a person who has not set them apart means "the same"); the fields that followed
-/// are returned, for the page to rewrite their texts.
+/// equal to it (a person who has not set them apart means "the same"), and an infrared reading's
+/// reflected temperature follows the stream's or the surroundings'; the fields that followed are
+/// returned, for the page to rewrite their texts.
 pub fn type_text(
     s: &mut Scenario,
     spec: &FieldSpec,
@@ -36,6 +37,10 @@ pub fn type_text(
     let stream = spec.field == Field::FluidTemp;
     let follows = stream && s.t_surround == s.fluid_temp;
     let ground = stream && s.t_ground == s.fluid_temp;
+    // The infrared reading's reflected temperature follows the surroundings it stands for (the
+    // stream's temperature, or the surroundings' where typed apart) while it equals them.
+    let reflected = (stream && s.ir_reflected == s.fluid_temp)
+        || (spec.field == Field::Surround && s.ir_reflected == s.t_surround);
     s.set(spec.field, si);
     let mut moved = Vec::new();
     if follows {
@@ -45,6 +50,10 @@ pub fn type_text(
     if ground {
         s.t_ground = si;
         moved.push(Field::GroundTemp);
+    }
+    if reflected {
+        s.ir_reflected = si;
+        moved.push(Field::IrReflected);
     }
     Ok(moved)
 }

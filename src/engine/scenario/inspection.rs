@@ -40,10 +40,18 @@ pub(crate) fn inspection_verdict(s: &Scenario, i: &Inspection) -> Verdict {
         );
         summary.push('.');
     }
+    // The ranges (corner bounds of the reading's accuracy, the emissivity's uncertainty and the
+    // correlations' spread) beside each figure they bound, so a defect stands out from the noise.
+    let r = &i.ranges;
     let mut figures = vec![
+        ("reading as shown", i.reading.displayed, Dim::Temperature),
         ("surface, corrected", i.corrected.surface, Dim::Temperature),
+        ("surface range, low", r.surface.lo, Dim::Temperature),
+        ("surface range, high", r.surface.hi, Dim::Temperature),
         ("surface as designed", i.design_surface, Dim::Temperature),
         ("k over data sheet", i.k.factor, Dim::Fraction),
+        ("k range, low", r.k_ratio.lo, Dim::Fraction),
+        ("k range, high", r.k_ratio.hi, Dim::Fraction),
     ];
     if s.shape.perimeter_over_d().is_some() {
         figures.push(("excess loss per length", i.excess, Dim::HeatFlowPerLength));
@@ -51,6 +59,8 @@ pub(crate) fn inspection_verdict(s: &Scenario, i: &Inspection) -> Verdict {
     figures.extend([
         ("excess loss of the item", i.excess_total, Dim::HeatFlow),
         ("excess cost per year", i.excess_cost, Dim::MoneyPerYear),
+        ("excess cost range, low", r.excess_cost.lo, Dim::MoneyPerYear),
+        ("excess cost range, high", r.excess_cost.hi, Dim::MoneyPerYear),
     ]);
     Verdict {
         id: "insulation",

@@ -228,6 +228,13 @@ pub fn from_fragment(fragment: &str) -> Result<(Scenario, System), String> {
     if !has("Tg") && s.uses(Field::GroundTemp) {
         s.t_ground = s.fluid_temp;
     }
+    if !has("Trf") && s.uses(Field::IrReflected) {
+        s.ir_reflected = if s.uses(Field::Surround) {
+            s.t_surround
+        } else {
+            s.fluid_temp
+        };
+    }
     match version {
         Some(v) if v == LINK_VERSION.to_string() => Ok((s, system)),
         Some(_) => Err(format!(

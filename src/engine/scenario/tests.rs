@@ -661,6 +661,18 @@ fn a_link_without_surroundings_follows_the_stream() {
     assert_eq!(s.t_surround, 300.0);
 }
 
+/// The same for an infrared reading's reflected temperature: left out of a link it is the
+/// surroundings' the instrument saw (typed apart, or the stream's), not the demo's.
+#[test]
+fn a_link_without_the_reflected_temperature_follows_the_surroundings() {
+    let (s, _) = from_fragment("v=1&s=cyl&Ta=263.15&sm=r&Tp=423.15&nl=1").unwrap();
+    assert_eq!(s.ir_reflected, 263.15);
+    let (s, _) = from_fragment("v=1&s=cyl&Ta=263.15&Tr=250&sm=r&Tp=423.15&nl=1").unwrap();
+    assert_eq!(s.ir_reflected, 250.0);
+    let (s, _) = from_fragment("v=1&s=cyl&Ta=263.15&sm=r&Tp=423.15&nl=1&Trf=300").unwrap();
+    assert_eq!(s.ir_reflected, 300.0);
+}
+
 /// Air typed at 1,000 °C with a relative humidity: the humidity has no meaning above water's
 /// critical temperature (647.096 K, IAPWS), and the message stands beside the air temperature
 /// that was typed, not beside the humidity several fields away.
