@@ -93,27 +93,36 @@ pub fn AnswerBar(
             })
         })
     };
+    // The badges as markup; a tap on one goes to its card (`data-badge` names the verdict).
     let badges = move || {
         shown.with(|s| {
             let Some(o) = s.outcome.as_ref() else {
-                return Vec::new();
+                return String::new();
             };
             BADGES
                 .iter()
                 .filter_map(|(id, name)| {
-                    let v = o.verdicts.iter().find(|v| v.id == *id)?;
-                    let ok = v.ok;
-                    let sel = format!("[data-verdict=\"{id}\"]");
-                    Some(view! {
-                        <button type="button" class="badge" class:bad=!ok data-badge=*id data-ok=ok.to_string()
-                            aria-label=format!("{name}: {}. Show its card.", if ok { "fine" } else { "needs attention" })
-                            on:click=move |_| go_to(&sel)>
-                            {if ok { "✓ " } else { "⚠ " }}{*name}
-                        </button>
-                    })
+                    let ok = o.verdicts.iter().find(|v| v.id == *id)?.ok;
+                    Some(format!(
+                        r#"<button type="button" class="badge{}" data-badge="{id}" data-ok="{ok}" aria-label="{name}: {}. Show its card.">{}{name}</button>"#,
+                        if ok { "" } else { " bad" },
+                        if ok { "fine" } else { "needs attention" },
+                        if ok { "✓ " } else { "⚠ " }
+                    ))
                 })
-                .collect::<Vec<_>>()
+                .collect::<String>()
         })
+    };
+    let on_badge = move |ev: leptos::ev::MouseEvent| {
+        use wasm_bindgen::JsCast;
+        let id = ev
+            .target()
+            .and_then(|t| t.dyn_into::<web_sys::Element>().ok())
+            .and_then(|e| e.closest("[data-badge]").ok().flatten())
+            .and_then(|b| b.get_attribute("data-badge"));
+        if let Some(id) = id {
+            go_to(&format!("[data-verdict=\"{id}\"]"));
+        }
     };
     // One jump, inputs to results or back, as the person's place on the page says.
     let at_results = RwSignal::new(false);
@@ -143,7 +152,7 @@ pub fn AnswerBar(
                 {move || stale.get().then(|| view! { <p class="answer-stale">"paused: last good result"</p> })}
             </div>
             <div class="answer-badges">
-                {badges}
+                <span class="badge-set" on:click=on_badge inner_html=badges></span>
                 <button type="button" class="jump" data-jump=move || if at_results.get() { "inputs" } else { "results" }
                     aria-label=move || if at_results.get() { "Go to the inputs" } else { "Go to the results" }
                     on:click=jump>

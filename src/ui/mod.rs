@@ -22,6 +22,7 @@ use crate::engine::scenario::{
     Scenario, Setting, Shape, SurfaceMode, Wind, FIELDS,
 };
 use crate::engine::units::{self, format_sig, Dim, System, UnitChoice};
+use crate::engine::chart::svg::esc;
 
 /// What the results panel shows: the latest good outcome, and why it is stale if it is.
 #[derive(Debug, Clone, PartialEq)]
@@ -635,18 +636,12 @@ pub fn App() -> impl IntoView {
                     <div class="main"><dt>"Surface temperature"</dt><dd>{out("surface_temperature", |o| Some(o.surface_temp), Some(Dim::Temperature))}</dd></div>
                 </dl>
                 <div class="verdicts" data-verdicts inner_html=move || shown.with(|s| s.outcome.as_ref().map(|o| results::verdicts(o, &choice.get())).unwrap_or_default())></div>
-                <ul class="cautions" data-cautions>
-                    {move || shown.with(|s| s.outcome.as_ref().map(|o| scenario::cautions(&scenario.get(), o).into_iter().map(|c| view! { <li class="caution">"⚠ "{c}</li> }).collect_view()))}
-                </ul>
+                <ul class="cautions" data-cautions inner_html=move || shown.with(|s| s.outcome.as_ref().map(|o| scenario::cautions(&scenario.get(), o).iter().map(|c| format!(r#"<li class="caution">⚠ {}</li>"#, esc(c))).collect::<String>()).unwrap_or_default())></ul>
                 <div data-figures inner_html=move || shown.with(|s| s.outcome.as_ref().map(|o| markup::figures(o, &choice.get(), &run_note())).unwrap_or_default())></div>
                 <p class="spread" data-spread>{move || shown.with(|s| s.outcome.as_ref().map(|o| results::spread_text(o, &choice.get())))}</p>
                 <p class="method">{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Recommended: {} ({}). {} {}", o.method, o.analysis.mode(), o.regime, o.analysis.notes.join(" "))))}</p>
                 <p class="reason" data-reason>{move || shown.with(|s| s.outcome.as_ref().map(|o| format!("Why this one: {}", o.analysis.reason())))}</p>
-                <ul class="flags" data-flags>
-                    {move || shown.with(|s| s.outcome.as_ref().map(|o| o.flags.iter().map(|f| view! {
-                        <li class="flag" data-flag=f.method>"⚠ "{f.message()}</li>
-                    }).collect_view()))}
-                </ul>
+                <ul class="flags" data-flags inner_html=move || shown.with(|s| s.outcome.as_ref().map(|o| o.flags.iter().map(|f| format!(r#"<li class="flag" data-flag="{}">⚠ {}</li>"#, esc(f.method), esc(&f.message()))).collect::<String>()).unwrap_or_default())></ul>
                 <details class="fold" data-fold="correlations" on:toggle=move |ev| open_table.set(is_open(&ev))>
                     <summary>"Every correlation side by side, and how the recommendation is chosen"</summary>
                     {move || open_table.get().then(|| view! {
@@ -657,11 +652,7 @@ pub fn App() -> impl IntoView {
                 <details class="working" on:toggle=move |ev| open_working.set(is_open(&ev))>
                     <summary>"How this was worked out"</summary>
                     {move || open_working.get().then(|| view! {
-                        <ol>
-                            {move || shown.with(|s| s.outcome.as_ref().map(|o| o.working.iter().map(|st| view! {
-                                <li><strong>{st.title}</strong><br/>{st.text.clone()}</li>
-                            }).collect_view()))}
-                        </ol>
+                        <ol inner_html=move || shown.with(|s| s.outcome.as_ref().map(|o| o.working.iter().map(|st| format!("<li><strong>{}</strong><br>{}</li>", esc(st.title), esc(&st.text))).collect::<String>()).unwrap_or_default())></ol>
                         {move || shown.with(|s| s.outcome.as_ref().map(|o| results::property_table(o, &choice.get())))}
                     })}
                 </details>
@@ -669,7 +660,7 @@ pub fn App() -> impl IntoView {
             {(!view_opts.embed).then(|| view! { <saved::SavedPanel scenario=scenario system=system name=item_name tag=tag place=place choice=choice on_open=open_saved/> })}
             <section class="plots" class:hidden=view_opts.embed aria-labelledby="plots-title">
                 <h2 id="plots-title">"Against thickness and wind"</h2>
-                {move || shown.with(|sh| sh.outcome.as_ref().map(|o| results::sweeps(o, &scenario.get(), &choice.get())))}
+                <div data-sweeps inner_html=move || shown.with(|sh| sh.outcome.as_ref().map(|o| results::sweeps(o, &scenario.get(), &choice.get())).unwrap_or_default())></div>
                 <details class="fold" data-fold="nu-re" on:toggle=move |ev| open_plots.set(is_open(&ev))>
                     <summary>"The Nusselt number against Reynolds for every correlation, and around the front of the body"</summary>
                     {move || open_plots.get().then(|| view! {

@@ -101,7 +101,7 @@ fn sweep_plot(
     point: Option<(f64, f64)>,
     targets: Vec<(&'static str, f64)>,
     c: &UnitChoice,
-) -> impl IntoView {
+) -> String {
     let m = chart::svg::sweep_figure(&chart::svg::Sweep {
         id,
         title: &title,
@@ -115,11 +115,11 @@ fn sweep_plot(
         targets: &targets,
         width: plot_width(),
     });
-    view! { <figure class="plot" data-plot=id inner_html=m></figure> }
+    format!(r#"<figure class="plot" data-plot="{id}">{m}</figure>"#)
 }
 
-/// The plots against thickness (solved, with layers) and against stream speed.
-pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice) -> impl IntoView {
+/// The plots against thickness (solved, with layers) and against stream speed, as markup.
+pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice) -> String {
     let mut out = Vec::new();
     if !o.thickness_sweep.is_empty() {
         let xs: Vec<f64> = o.thickness_sweep.iter().map(|p| p.0).collect();
@@ -139,8 +139,7 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
                 Some((outer, o.q_total)),
                 o.loss_marks.clone(),
                 c,
-            )
-            .into_any(),
+            ),
         );
         out.push(
             sweep_plot(
@@ -157,8 +156,7 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
                 Some((outer, o.surface_temp)),
                 o.surface_marks.clone(),
                 c,
-            )
-            .into_any(),
+            ),
         );
     }
     let xs: Vec<f64> = o.wind_sweep.iter().map(|p| p.0).collect();
@@ -191,8 +189,7 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
             Some((s.speed, o.q_total)),
             vec![],
             c,
-        )
-        .into_any(),
+        ),
     );
     if s.solved() {
         out.push(
@@ -210,8 +207,7 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
                 Some((s.speed, o.surface_temp)),
                 o.surface_marks.clone(),
                 c,
-            )
-            .into_any(),
+            ),
         );
     } else {
         out.push(
@@ -229,11 +225,10 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
                 Some((s.speed, o.h)),
                 vec![],
                 c,
-            )
-            .into_any(),
+            ),
         );
     }
-    out.collect_view()
+    out.concat()
 }
 
 /// A cross-section of the wall and its layers, drawn to scale (each ring at least 3 px so a thin

@@ -8,6 +8,7 @@ use wasm_bindgen::JsCast;
 use super::mark;
 use crate::engine::scenario::Scenario;
 use crate::engine::store::{self, Loaded, Plan, Saved, Store};
+use crate::engine::chart::svg::esc;
 use crate::engine::survey;
 use crate::engine::units::{Dim, System, UnitChoice};
 
@@ -212,6 +213,51 @@ fn download(name: &str, mime: &str, text: &str) {
     let _ = web_sys::Url::revoke_object_url(&url);
 }
 
+/// One survey row as markup: the item's name (a tap opens it), its tag and place, its figures in
+/// the chosen units, and the actions in a menu; every button says what it does in `data-act`.
+fn row_markup(m: &mut String, it: &Saved, res: &survey::Figure, c: &UnitChoice) {
+    use std::fmt::Write;
+    let f = |v: f64, d: Dim| crate::engine::units::show(v, c.get(d));
+    let (loss, surface, range, checks) = match res {
+        Ok(r) => (
+            f(r.q_total, Dim::HeatFlow),
+            f(r.surface_temp, Dim::Temperature),
+            if r.flags == 0 {
+                "✓".to_string()
+            } else {
+                format!("⚠ {}", r.flags)
+            },
+            // An inspected item: its k ratio and what the defect costs a year.
+            match &r.inspection {
+                Some(i) => format!(
+                    "{} · k {} · {}",
+                    super::answer::failing(&r.verdicts),
+                    f(i.k_ratio, Dim::Fraction),
+                    f(i.excess_cost, Dim::MoneyPerYear)
+                ),
+                None => super::answer::failing(&r.verdicts),
+            },
+        ),
+        Err(e) => (format!("⚠ {e}"), "—".into(), "—".into(), "—".into()),
+    };
+    let sub = [it.tag.as_str(), it.location.as_str()]
+        .iter()
+        .filter(|x| !x.is_empty())
+        .cloned()
+        .collect::<Vec<_>>()
+        .join(" · ");
+    let name = esc(&it.name);
+    let _ = write!(
+        m,
+        r#"<tr data-saved="{name}"><th scope="row"><button type="button" class="item-open" data-open data-act="open" title="Open this item">{name}</button><small>{}</small></th><td data-item-loss data-label="Heat loss">{}</td><td data-label="Surface">{}</td><td data-label="Checks" data-item-checks>{}</td><td data-label="Range">{}</td><td class="item-menu"><details class="menu"><summary aria-label="Actions for {name}">Actions</summary><div class="saved-actions"><button type="button" data-act="open">Open</button><button type="button" data-act="update" title="Store the inputs shown in this item">Update</button><button type="button" data-act="rename" title="Rename to the name typed above">Rename</button><button type="button" data-act="dup">Duplicate</button><button type="button" data-act="delete">Delete</button></div></details></td></tr>"#,
+        esc(&sub),
+        esc(&loss),
+        esc(&surface),
+        esc(&checks),
+        esc(&range)
+    );
+}
+
 #[component]
 pub fn SavedPanel(
     scenario: RwSignal<Scenario>,
@@ -369,144 +415,115 @@ pub fn SavedPanel(
     let sorted = move || {
         let mut shown = list.get();
         if by_loss.get() {
-            let loss = |r: &survey::Figure| {
-                r.as_ref()
-                    .map(|r| r.q_total.abs())
-                    .unwrap_or(f64::NEG_INFINITY)
-            };
-            shown.sort_by(|a, b| loss(&b.1).total_cmp(&loss(&a.1)));
+            survey::worst_first(&mut shown);
         }
         shown
     };
-    let row = move |(it, res): (Saved, survey::Figure)| {
-        let label = it.name.clone();
-        let figs = move || {
-            let c = choice.get();
-            let f = move |v: f64, d: Dim| crate::engine::units::show(v, c.get(d));
-            match &res {
-                Ok(r) => (
-                    f(r.q_total, Dim::HeatFlow),
-                    f(r.surface_temp, Dim::Temperature),
-                    if r.flags == 0 {
-                        "✓".to_string()
-                    } else {
-                        format!("⚠ {}", r.flags)
-                    },
-                    super::answer::failing(&r.verdicts),
-                ),
-                Err(e) => (format!("⚠ {e}"), "—".into(), "—".into(), "—".into()),
+    // Every button of a row is handled here, by what it does (`data-act`) and its row's item
+    // (`data-saved`: names are unique in the store); the rows themselves are markup.
+    let open_item = move |k: &str| {
+        if let Some(it) = find(k).and_then(|i| saved.with_untracked(|s| s.items.get(i).cloned())) {
+            if let Ok((sc, sys)) = it.scenario() {
+                name.set(it.name.clone());
+                tag.set(it.tag.clone());
+                place.set(it.location.clone());
+                on_open(sc, sys);
             }
-        };
-        let figs = Memo::new(move |_| figs());
-        let key = StoredValue::new(it.name.clone());
-        let open = move |_| {
-            let item = key
-                .with_value(|k| find(k))
-                .and_then(|i| saved.with_untracked(|s| s.items.get(i).cloned()));
-            if let Some(it) = item {
-                if let Ok((sc, sys)) = it.scenario() {
-                    name.set(it.name.clone());
-                    tag.set(it.tag.clone());
-                    place.set(it.location.clone());
-                    on_open(sc, sys);
-                }
-            }
-        };
-        let update = move |_| {
-            let mut next = saved.get_untracked();
-            if let Some(c) = key
-                .with_value(|k| find(k))
-                .and_then(|i| next.items.get_mut(i))
-            {
-                let n = c.name.clone();
+        }
+    };
+    let act_on = move |act: &str, k: &str| {
+        if act == "open" {
+            return open_item(k);
+        }
+        let mut next = saved.get_untracked();
+        let Some(i) = find(k) else { return };
+        let done = match act {
+            "update" => {
+                let c = &mut next.items[i];
                 *c = Saved::new(
-                    &n,
+                    k,
                     &tag.get_untracked(),
                     &place.get_untracked(),
                     &scenario.get_untracked(),
                     system.get_untracked(),
                 );
-                commit(next, format!("“{n}” now holds the inputs shown."));
+                format!("“{k}” now holds the inputs shown.")
             }
-        };
-        let dup = move |_| {
-            let mut next = saved.get_untracked();
-            if let Some(mut c) = key
-                .with_value(|k| find(k))
-                .and_then(|i| next.items.get(i).cloned())
-            {
+            "dup" => {
+                let mut c = next.items[i].clone();
                 c.name = store::free_name(&next, &c.name);
                 let n = c.name.clone();
                 next.items.push(c);
-                commit(next, format!("Duplicated as “{n}”."));
+                format!("Duplicated as “{n}”.")
             }
-        };
-        let rename = move |_| {
-            let mut next = saved.get_untracked();
-            let new = store::free_name(&next, &name.get_untracked());
-            if let Some(c) = key
-                .with_value(|k| find(k))
-                .and_then(|i| next.items.get_mut(i))
-            {
-                c.name = new.clone();
-                commit(next, format!("Renamed to “{new}”."));
+            "rename" => {
+                let new = store::free_name(&next, &name.get_untracked());
+                next.items[i].name = new.clone();
+                format!("Renamed to “{new}”.")
             }
-        };
-        let delete = move |_| {
-            let mut next = saved.get_untracked();
-            if let Some(i) = key.with_value(|k| find(k)) {
+            "delete" => {
                 let gone = next.items.remove(i).name;
-                commit(next, format!("Deleted “{gone}”."));
+                format!("Deleted “{gone}”.")
             }
+            _ => return,
         };
-        let sub = [it.tag.as_str(), it.location.as_str()]
-            .iter()
-            .filter(|x| !x.is_empty())
-            .cloned()
-            .collect::<Vec<_>>()
-            .join(" · ");
-        // One tap on the name opens the item; the other actions wait in a menu.
-        view! {
-            <tr data-saved=label.clone()>
-                <th scope="row"><button type="button" class="item-open" data-open on:click=open title="Open this item">{label.clone()}</button><small>{sub}</small></th>
-                <td data-item-loss data-label="Heat loss">{move || figs.get().0}</td>
-                <td data-label="Surface">{move || figs.get().1}</td>
-                <td data-label="Checks" data-item-checks>{move || figs.get().3}</td>
-                <td data-label="Range">{move || figs.get().2}</td>
-                <td class="item-menu">
-                    <details class="menu">
-                        <summary aria-label=format!("Actions for {label}")>"Actions"</summary>
-                        <div class="saved-actions">
-                            <button type="button" on:click=open>"Open"</button>
-                            <button type="button" on:click=update title="Store the inputs shown in this item">"Update"</button>
-                            <button type="button" on:click=rename title="Rename to the name typed above">"Rename"</button>
-                            <button type="button" on:click=dup>"Duplicate"</button>
-                            <button type="button" on:click=delete>"Delete"</button>
-                        </div>
-                    </details>
-                </td>
-            </tr>
+        commit(next, done);
+    };
+    let on_list_click = move |ev: leptos::ev::MouseEvent| {
+        let button = ev
+            .target()
+            .and_then(|t| t.dyn_into::<web_sys::Element>().ok())
+            .and_then(|e| e.closest("[data-act]").ok().flatten());
+        let Some(b) = button else { return };
+        let item = b
+            .closest("[data-saved]")
+            .ok()
+            .flatten()
+            .and_then(|r| r.get_attribute("data-saved"));
+        if let (Some(act), Some(k)) = (b.get_attribute("data-act"), item) {
+            act_on(&act, &k);
         }
+    };
+    // The rows in the order shown, as one piece of markup set in one step (user text escaped).
+    let rows = move || {
+        let c = choice.get();
+        let shown = sorted();
+        let mut m = String::with_capacity(shown.len() * 900);
+        for (it, res) in &shown {
+            row_markup(&mut m, it, res, &c);
+        }
+        m
     };
     let totals = move || {
         let c = choice.get();
-        let (n, (q, e, m)) = list.with(|l| {
+        let (n, (q, e, m), (read, xq, xm)) = list.with(|l| {
+            let figures: Vec<survey::Figure> = l.iter().map(|(_, r)| r.clone()).collect();
             (
                 l.len(),
                 survey::totals(
-                    &l.iter()
-                        .filter_map(|(_, r)| r.clone().ok())
+                    &figures
+                        .iter()
+                        .filter_map(|r| r.clone().ok())
                         .map(Ok)
                         .collect::<Vec<_>>(),
                 ),
+                survey::inspection_totals(&figures),
             )
         });
         let u = |v: f64, d: Dim| crate::engine::units::show(v, c.get(d));
+        // An inspection round also totals what its defects lose against design.
+        let excess = (read > 0).then(|| {
+            format!(
+                " · {read} read with infrared: {} and {} over design",
+                u(xq, Dim::HeatFlow),
+                u(xm, Dim::MoneyPerYear)
+            )
+        });
         view! {
             <tr class="totals" data-totals>
                 <th scope="row">{format!("Total of {n} item(s)")}</th>
                 <td data-total-loss>{u(q, Dim::HeatFlow)}</td>
-                <td colspan="4">{format!("{} · {}", u(e, Dim::EnergyPerYear), u(m, Dim::MoneyPerYear))}</td>
+                <td colspan="4" data-total-excess>{format!("{} · {}{}", u(e, Dim::EnergyPerYear), u(m, Dim::MoneyPerYear), excess.unwrap_or_default())}</td>
             </tr>
         }
     };
@@ -574,7 +591,7 @@ pub fn SavedPanel(
                 <table class="saved-list" data-saved-list>
                     <caption>"Survey list: every saved item with its results"</caption>
                     <thead><tr><th scope="col">"Item"</th><th scope="col">"Heat loss"</th><th scope="col">"Surface"</th><th scope="col">"Checks"</th><th scope="col">"Range"</th><th scope="col">"Actions"</th></tr></thead>
-                    <tbody><For each=sorted key=|(it, _)| (it.name.clone(), it.tag.clone(), it.location.clone(), it.link.clone()) children=row/></tbody>
+                    <tbody on:click=on_list_click inner_html=rows></tbody>
                     <tfoot>{totals}</tfoot>
                 </table>
             </div>

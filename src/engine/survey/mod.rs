@@ -29,6 +29,8 @@ pub struct InspectionFigures {
     pub surface: f64,
     pub k_ratio: f64,
     pub condition: crate::engine::inspect::Condition,
+    /// Excess over design: heat flow of the item, W, and cost per year.
+    pub excess_loss: f64,
     pub excess_cost: f64,
 }
 
@@ -46,6 +48,7 @@ pub fn evaluate_item(s: &Scenario) -> Result<ItemResult, EngineError> {
             surface: i.corrected.surface,
             k_ratio: i.k.factor,
             condition: i.condition,
+            excess_loss: i.excess_total,
             excess_cost: i.excess_cost,
         }),
     })
@@ -100,6 +103,35 @@ pub fn totals(results: &[Result<ItemResult, EngineError>]) -> (f64, f64, f64) {
         .fold((0.0, 0.0, 0.0), |(q, e, c), r| {
             (q + r.q_total, e + r.annual_energy, c + r.annual_cost)
         })
+}
+
+/// The inspected items' excess over design, summed: heat flow W and cost per year, and how many
+/// items were inspected (0: the list has no inspection, the totals row says nothing of it).
+pub fn inspection_totals(results: &[Figure]) -> (usize, f64, f64) {
+    results
+        .iter()
+        .flatten()
+        .filter_map(|r| r.inspection.as_ref())
+        .fold((0, 0.0, 0.0), |(n, q, c), i| {
+            (n + 1, q + i.excess_loss, c + i.excess_cost)
+        })
+}
+
+/// The list worst first: inspected items by their excess cost against design (the money a defect
+/// loses), then every other item by the size of its heat flow; items that could not be computed
+/// last. Stable: equal items keep their order.
+pub fn worst_first<T>(rows: &mut [(T, Figure)]) {
+    let key = |f: &Figure| match f {
+        Ok(r) => match &r.inspection {
+            Some(i) => (2, i.excess_cost),
+            None => (1, r.q_total.abs()),
+        },
+        Err(_) => (0, 0.0),
+    };
+    rows.sort_by(|a, b| {
+        let (ka, kb) = (key(&a.1), key(&b.1));
+        kb.0.cmp(&ka.0).then(kb.1.total_cmp(&ka.1))
+    });
 }
 
 #[cfg(test)]
@@ -190,5 +222,36 @@ mod tests {
         let (rows, errors) = from_csv(&text);
         assert!(errors.is_empty() && rows.len() == 2, "{errors:?}");
         assert_eq!(rows[0].scenario().unwrap().0, read);
+    }
+
+    /// Worst first on an inspection round: the inspected items by the money their defect loses,
+    /// then the others by heat flow, the failures last; the totals add the inspected items only.
+    #[test]
+    fn an_inspection_round_sorts_by_excess_cost_and_totals_it() {
+        use crate::engine::scenario::SurfaceMode;
+        let mut mild = DEMO;
+        mild.surface_mode = SurfaceMode::Reading;
+        let mut hot = mild;
+        hot.ir_reading += 15.0;
+        let mut big = DEMO;
+        big.diameter *= 3.0;
+        let figure = |s: &Scenario| evaluate_item(s).map_err(|e| e.to_string());
+        let mut rows = vec![
+            ("small", figure(&DEMO)),
+            ("failed", Err("not computed".to_string())),
+            ("mild", figure(&mild)),
+            ("big", figure(&big)),
+            ("hot", figure(&hot)),
+        ];
+        let cost = |r: &Figure| r.as_ref().unwrap().inspection.unwrap().excess_cost;
+        assert!(cost(&rows[4].1) > cost(&rows[2].1), "a hotter reading loses more");
+        let (n, q, c) = inspection_totals(&rows.iter().map(|r| r.1.clone()).collect::<Vec<_>>());
+        assert_eq!(n, 2);
+        assert_eq!(c, cost(&rows[2].1) + cost(&rows[4].1));
+        let ex = |r: &Figure| r.as_ref().unwrap().inspection.unwrap().excess_loss;
+        assert_eq!(q, ex(&rows[2].1) + ex(&rows[4].1));
+        worst_first(&mut rows);
+        let order: Vec<&str> = rows.iter().map(|r| r.0).collect();
+        assert_eq!(order, ["hot", "mild", "big", "small", "failed"]);
     }
 }
