@@ -266,7 +266,8 @@ fn glue_inline(glue: &str) -> String {
 /// (`Uint8Array.fromBase64`), else one plain loop over `atob`'s characters. (`Uint8Array.from` with a
 /// mapping function took 160 ms for this wasm in headless Chromium 156, the loop 7 ms, the native
 /// decoder 1 ms: most of the single file's cold start.)
-const DECODE: &str = "const leewardWasmBytes = Uint8Array.fromBase64 ? Uint8Array.fromBase64(leewardWasmText) : \
+const DECODE: &str =
+    "const leewardWasmBytes = Uint8Array.fromBase64 ? Uint8Array.fromBase64(leewardWasmText) : \
 (() => { const s = atob(leewardWasmText), b = new Uint8Array(s.length); \
 for (let i = 0; i < s.length; i++) b[i] = s.charCodeAt(i); return b; })();";
 
@@ -375,7 +376,9 @@ mod tests {
     /// and once through a stand-in for the browser's own decoder; Node's `Buffer` is the reference.
     #[test]
     fn the_single_files_decoder_gives_the_wasm_bytes_back() {
-        let bytes: Vec<u8> = (0..=255u8).chain((0..700).map(|i| (i * 37 % 256) as u8)).collect();
+        let bytes: Vec<u8> = (0..=255u8)
+            .chain((0..700).map(|i| (i * 37 % 256) as u8))
+            .collect();
         let text = base64(&bytes);
         let check = "const want = Buffer.from(leewardWasmText, 'base64'); \
             if (leewardWasmBytes.length !== want.length || !leewardWasmBytes.every((b, i) => b === want[i])) \
@@ -392,8 +395,16 @@ mod tests {
                 .args(["-e", &js])
                 .output()
                 .expect("node (installed by setup.sh with npm) runs");
-            assert!(out.status.success(), "{name}: {}", String::from_utf8_lossy(&out.stdout));
-            assert_eq!(String::from_utf8_lossy(&out.stdout).trim(), bytes.len().to_string(), "{name}");
+            assert!(
+                out.status.success(),
+                "{name}: {}",
+                String::from_utf8_lossy(&out.stdout)
+            );
+            assert_eq!(
+                String::from_utf8_lossy(&out.stdout).trim(),
+                bytes.len().to_string(),
+                "{name}"
+            );
         }
     }
 

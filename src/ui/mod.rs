@@ -17,12 +17,12 @@ pub(crate) use start::mark;
 
 use unit_select::UnitSelect;
 
+use crate::engine::chart::svg::esc;
 use crate::engine::scenario::{
     self, Axis, Field, FieldSpec, FluidKind, Group, HumidityInput, Outcome, PressureInput,
     Scenario, Setting, Shape, SurfaceMode, Wind, FIELDS,
 };
 use crate::engine::units::{self, format_sig, Dim, System, UnitChoice};
-use crate::engine::chart::svg::esc;
 
 /// What the results panel shows: the latest good outcome, and why it is stale if it is.
 #[derive(Debug, Clone, PartialEq)]

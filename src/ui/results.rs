@@ -124,40 +124,36 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
     if !o.thickness_sweep.is_empty() {
         let xs: Vec<f64> = o.thickness_sweep.iter().map(|p| p.0).collect();
         let outer = s.layer_t[s.layer_count.saturating_sub(1)];
-        out.push(
-            sweep_plot(
-                "loss-thickness",
-                "Heat loss against the outer layer's thickness.".into(),
-                "outer layer thickness",
-                Dim::Length,
-                &xs,
-                Series {
-                    label: "heat loss",
-                    dim: Dim::HeatFlow,
-                    values: o.thickness_sweep.iter().map(|p| p.1).collect(),
-                },
-                Some((outer, o.q_total)),
-                o.loss_marks.clone(),
-                c,
-            ),
-        );
-        out.push(
-            sweep_plot(
-                "surface-thickness",
-                "Surface temperature against the outer layer's thickness.".into(),
-                "outer layer thickness",
-                Dim::Length,
-                &xs,
-                Series {
-                    label: "surface",
-                    dim: Dim::Temperature,
-                    values: o.thickness_sweep.iter().map(|p| p.2).collect(),
-                },
-                Some((outer, o.surface_temp)),
-                o.surface_marks.clone(),
-                c,
-            ),
-        );
+        out.push(sweep_plot(
+            "loss-thickness",
+            "Heat loss against the outer layer's thickness.".into(),
+            "outer layer thickness",
+            Dim::Length,
+            &xs,
+            Series {
+                label: "heat loss",
+                dim: Dim::HeatFlow,
+                values: o.thickness_sweep.iter().map(|p| p.1).collect(),
+            },
+            Some((outer, o.q_total)),
+            o.loss_marks.clone(),
+            c,
+        ));
+        out.push(sweep_plot(
+            "surface-thickness",
+            "Surface temperature against the outer layer's thickness.".into(),
+            "outer layer thickness",
+            Dim::Length,
+            &xs,
+            Series {
+                label: "surface",
+                dim: Dim::Temperature,
+                values: o.thickness_sweep.iter().map(|p| p.2).collect(),
+            },
+            Some((outer, o.surface_temp)),
+            o.surface_marks.clone(),
+            c,
+        ));
     }
     let xs: Vec<f64> = o.wind_sweep.iter().map(|p| p.0).collect();
     // The sweep's span in the speed unit the person reads.
@@ -174,59 +170,53 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
             u.symbol
         )
     };
-    out.push(
-        sweep_plot(
-            "loss-wind",
-            format!("Heat loss against stream speed, {span}."),
+    out.push(sweep_plot(
+        "loss-wind",
+        format!("Heat loss against stream speed, {span}."),
+        "stream speed",
+        Dim::Speed,
+        &xs,
+        Series {
+            label: "heat loss",
+            dim: Dim::HeatFlow,
+            values: o.wind_sweep.iter().map(|p| p.2).collect(),
+        },
+        Some((s.speed, o.q_total)),
+        vec![],
+        c,
+    ));
+    if s.solved() {
+        out.push(sweep_plot(
+            "surface-wind",
+            format!("Surface temperature against stream speed, {span}."),
             "stream speed",
             Dim::Speed,
             &xs,
             Series {
-                label: "heat loss",
-                dim: Dim::HeatFlow,
-                values: o.wind_sweep.iter().map(|p| p.2).collect(),
+                label: "surface",
+                dim: Dim::Temperature,
+                values: o.wind_sweep.iter().map(|p| p.3).collect(),
             },
-            Some((s.speed, o.q_total)),
+            Some((s.speed, o.surface_temp)),
+            o.surface_marks.clone(),
+            c,
+        ));
+    } else {
+        out.push(sweep_plot(
+            "h-wind",
+            format!("Convective coefficient against stream speed, {span}."),
+            "stream speed",
+            Dim::Speed,
+            &xs,
+            Series {
+                label: "h",
+                dim: Dim::HeatTransferCoefficient,
+                values: o.wind_sweep.iter().map(|p| p.1).collect(),
+            },
+            Some((s.speed, o.h)),
             vec![],
             c,
-        ),
-    );
-    if s.solved() {
-        out.push(
-            sweep_plot(
-                "surface-wind",
-                format!("Surface temperature against stream speed, {span}."),
-                "stream speed",
-                Dim::Speed,
-                &xs,
-                Series {
-                    label: "surface",
-                    dim: Dim::Temperature,
-                    values: o.wind_sweep.iter().map(|p| p.3).collect(),
-                },
-                Some((s.speed, o.surface_temp)),
-                o.surface_marks.clone(),
-                c,
-            ),
-        );
-    } else {
-        out.push(
-            sweep_plot(
-                "h-wind",
-                format!("Convective coefficient against stream speed, {span}."),
-                "stream speed",
-                Dim::Speed,
-                &xs,
-                Series {
-                    label: "h",
-                    dim: Dim::HeatTransferCoefficient,
-                    values: o.wind_sweep.iter().map(|p| p.1).collect(),
-                },
-                Some((s.speed, o.h)),
-                vec![],
-                c,
-            ),
-        );
+        ));
     }
     out.concat()
 }

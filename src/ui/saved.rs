@@ -6,9 +6,9 @@ use leptos::prelude::*;
 use wasm_bindgen::JsCast;
 
 use super::mark;
+use crate::engine::chart::svg::esc;
 use crate::engine::scenario::Scenario;
 use crate::engine::store::{self, Loaded, Plan, Saved, Store};
-use crate::engine::chart::svg::esc;
 use crate::engine::survey;
 use crate::engine::units::{Dim, System, UnitChoice};
 

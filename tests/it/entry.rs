@@ -220,5 +220,8 @@ fn the_reflected_temperature_follows_the_surroundings_until_set_apart() {
     p.apply(&Act::Type(trf, "10".into()));
     p.apply(&Act::Type(ta, "0".into()));
     p.apply(&Act::Type(tr, "5".into()));
-    assert!((p.s.ir_reflected - 283.15).abs() < 1e-9, "set apart, it stays");
+    assert!(
+        (p.s.ir_reflected - 283.15).abs() < 1e-9,
+        "set apart, it stays"
+    );
 }

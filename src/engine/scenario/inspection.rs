@@ -59,8 +59,16 @@ pub(crate) fn inspection_verdict(s: &Scenario, i: &Inspection) -> Verdict {
     figures.extend([
         ("excess loss of the item", i.excess_total, Dim::HeatFlow),
         ("excess cost per year", i.excess_cost, Dim::MoneyPerYear),
-        ("excess cost range, low", r.excess_cost.lo, Dim::MoneyPerYear),
-        ("excess cost range, high", r.excess_cost.hi, Dim::MoneyPerYear),
+        (
+            "excess cost range, low",
+            r.excess_cost.lo,
+            Dim::MoneyPerYear,
+        ),
+        (
+            "excess cost range, high",
+            r.excess_cost.hi,
+            Dim::MoneyPerYear,
+        ),
     ]);
     Verdict {
         id: "insulation",

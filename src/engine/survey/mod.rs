@@ -244,7 +244,10 @@ mod tests {
             ("hot", figure(&hot)),
         ];
         let cost = |r: &Figure| r.as_ref().unwrap().inspection.unwrap().excess_cost;
-        assert!(cost(&rows[4].1) > cost(&rows[2].1), "a hotter reading loses more");
+        assert!(
+            cost(&rows[4].1) > cost(&rows[2].1),
+            "a hotter reading loses more"
+        );
         let (n, q, c) = inspection_totals(&rows.iter().map(|r| r.1.clone()).collect::<Vec<_>>());
         assert_eq!(n, 2);
         assert_eq!(c, cost(&rows[2].1) + cost(&rows[4].1));

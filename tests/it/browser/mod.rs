@@ -289,4 +289,5 @@ mod bad_input;
 mod defects;
 mod field;
 mod forms;
+mod inspection;
 mod saved;
