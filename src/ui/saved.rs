@@ -213,6 +213,31 @@ fn download(name: &str, mime: &str, text: &str) {
     let _ = web_sys::Url::revoke_object_url(&url);
 }
 
+/// Replace, in `tb`, the rows between the longest common start and end of `before` and `now` (one
+/// markup string a row) with `now`'s rows there.
+fn redraw_changed(tb: &web_sys::Element, before: &[String], now: &[String]) {
+    let start = before.iter().zip(now).take_while(|(a, b)| a == b).count();
+    let end = before[start..]
+        .iter()
+        .rev()
+        .zip(now[start..].iter().rev())
+        .take_while(|(a, b)| a == b)
+        .count();
+    let rows = tb.children();
+    for _ in start..before.len() - end {
+        if let Some(r) = rows.item(start as u32) {
+            r.remove();
+        }
+    }
+    let html = now[start..now.len() - end].concat();
+    if !html.is_empty() {
+        let _ = match rows.item(start as u32) {
+            Some(next) => next.insert_adjacent_html("beforebegin", &html),
+            None => tb.insert_adjacent_html("beforeend", &html),
+        };
+    }
+}
+
 /// One survey row as markup: the item's name (a tap opens it), its tag and place, its figures in
 /// the chosen units, and the actions in a menu; every button says what it does in `data-act`.
 fn row_markup(m: &mut String, it: &Saved, res: &survey::Figure, c: &UnitChoice) {
@@ -484,16 +509,28 @@ pub fn SavedPanel(
             act_on(&act, &k);
         }
     };
-    // The rows in the order shown, as one piece of markup set in one step (user text escaped).
-    let rows = move || {
+    // The rows in the order shown, each as markup (user text escaped). Only the rows that
+    // changed are redrawn: the run between the unchanged first and last rows is replaced (a save,
+    // a duplicate, a delete or an update touches one row; a sort or a unit switch all of them),
+    // so the browser lays out one new row of a 1,000-row list, not 1,000.
+    let drawn = StoredValue::new(Vec::<String>::new());
+    Effect::new(move |_| {
         let c = choice.get();
-        let shown = sorted();
-        let mut m = String::with_capacity(shown.len() * 900);
-        for (it, res) in &shown {
-            row_markup(&mut m, it, res, &c);
+        let now: Vec<String> = sorted()
+            .iter()
+            .map(|(it, res)| {
+                let mut m = String::with_capacity(900);
+                row_markup(&mut m, it, res, &c);
+                m
+            })
+            .collect();
+        if let Ok(Some(tb)) = document().query_selector("[data-saved-list] tbody") {
+            drawn.update_value(|before| {
+                redraw_changed(&tb, before, &now);
+                *before = now;
+            });
         }
-        m
-    };
+    });
     let totals = move || {
         let c = choice.get();
         let (n, (q, e, m), (read, xq, xm)) = list.with(|l| {
@@ -591,7 +628,7 @@ pub fn SavedPanel(
                 <table class="saved-list" data-saved-list>
                     <caption>"Survey list: every saved item with its results"</caption>
                     <thead><tr><th scope="col">"Item"</th><th scope="col">"Heat loss"</th><th scope="col">"Surface"</th><th scope="col">"Checks"</th><th scope="col">"Range"</th><th scope="col">"Actions"</th></tr></thead>
-                    <tbody on:click=on_list_click inner_html=rows></tbody>
+                    <tbody on:click=on_list_click></tbody>
                     <tfoot>{totals}</tfoot>
                 </table>
             </div>

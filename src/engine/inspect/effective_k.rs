@@ -56,6 +56,9 @@ pub fn scaled(job: &Job, f: f64) -> Job {
     j
 }
 
+/// The largest miss, K, between the surface solved with the factor found and the measured one.
+const MAX_RESIDUAL: f64 = 0.01;
+
 /// The factor on the outer layer's k that makes the solved surface `ts` (K). `job` is the design:
 /// its last layer is the outer insulation (the first is the wall). Errors: a job with no
 /// insulation over the wall, or a surface no factor explains (see the module).
@@ -157,8 +160,14 @@ pub fn effective_k(job: &Job, ts: f64) -> Result<KRatio, EngineError> {
         return Err(e);
     }
     let root = root.map_err(|_| EngineError::NonFiniteResult {
-        quantity: "effective conductivity of the outer layer (no factor between e⁻⁸ and e⁸ of the direct value closes the balance)",
+        quantity: "effective conductivity of the outer layer (no factor within e^±20 of the direct value closes the balance)",
     })?;
+    // A bracket that closed onto a jump rather than a root leaves the surface off: refused.
+    if root.residual.abs() > MAX_RESIDUAL {
+        return Err(EngineError::NonFiniteResult {
+            quantity: "effective conductivity of the outer layer (no factor reproduces the measured surface to 0.01 K)",
+        });
+    }
     Ok(KRatio {
         factor: finite_result("k ratio to the data sheet", root.x.exp())?,
         residual: root.residual,

@@ -43,9 +43,14 @@ pub const EMISSIVITY_STEP: f64 = 0.05;
 pub const LOW_EMISSIVITY: f64 = 0.5;
 /// A correction larger than this, K, is flagged (common practice).
 pub const LARGE_CORRECTION: f64 = 10.0;
-/// A reading within this many kelvin of the reflected temperature carries little of the
-/// surface's own radiation (common practice).
+/// A reading within this many kelvin of the reflected temperature, on a surface that reflects
+/// enough for it to matter ([`REFLECTED_SHARE`]), carries little of the surface's own radiation
+/// (common practice).
 pub const MIN_CONTRAST: f64 = 10.0;
+/// The share of the received signal that is reflection, (1 − ε)·L(T_r)/S, above which a reading
+/// near the reflected temperature is flagged (a threshold chosen here, not a standard's: a
+/// painted jacket, ε 0.95, reflects about 5 % and is never flagged for contrast alone).
+pub const REFLECTED_SHARE: f64 = 0.2;
 /// When ±[`EMISSIVITY_STEP`] moves the corrected temperature by more than this, K, the emissivity
 /// must be known better than tables give it (common practice).
 pub const SENSITIVITY_LIMIT: f64 = 5.0;
@@ -85,7 +90,7 @@ impl Caveat {
         match self {
             Caveat::LowEmissivity => "the surface's emissivity is below 0.5: put a tape or paint of known emissivity on the spot and read that (common practice)",
             Caveat::LargeCorrection => "the correction is more than 10 K (common practice threshold)",
-            Caveat::NearReflected => "the reading is within 10 K of the reflected temperature: little of the signal is the surface's own (common practice threshold)",
+            Caveat::NearReflected => "the reading is within 10 K of the reflected temperature on a surface that reflects a fifth or more of what the instrument receives: an error in the reflected temperature passes straight into the answer (common practice threshold)",
             Caveat::EmissivitySensitive => "an emissivity 0.05 off moves the answer by more than 5 K (common practice threshold)",
         }
     }
@@ -260,6 +265,9 @@ fn surface_root(r: &Reading, emissivity: f64) -> Result<(f64, u32, [f64; 3]), En
     let l_d = band_radiance(r.displayed, r.band);
     let l_r = band_radiance(r.reflected, r.band);
     let target = (r.emissivity_set * l_d + (emissivity - r.emissivity_set) * l_r) / emissivity;
+    if !(target > 0.0 && target.is_finite()) {
+        return Err(input_error("Tir", "reading", r.displayed, "K", "is below what the reflection alone would show at this emissivity: no surface temperature explains it (check the emissivities and the reflected temperature)"));
+    }
     let guess = total_radiation(r, emissivity).unwrap_or(r.displayed);
     let root = invert(target, r.band, guess)?;
     let t = finite_result("corrected surface temperature", root.x)?;
@@ -294,7 +302,10 @@ pub fn correct(r: &Reading, emissivity: f64) -> Result<Corrected, EngineError> {
     if correction.abs() > LARGE_CORRECTION {
         caveats.push(Caveat::LargeCorrection);
     }
-    if (r.displayed - r.reflected).abs() < MIN_CONTRAST {
+    if (r.displayed - r.reflected).abs() < MIN_CONTRAST
+        && (1.0 - emissivity) * l_r / (emissivity * l_s + (1.0 - emissivity) * l_r)
+            > REFLECTED_SHARE
+    {
         caveats.push(Caveat::NearReflected);
     }
     if sensitivity.is_none_or(|s| s > SENSITIVITY_LIMIT) {

@@ -96,6 +96,23 @@ fn bright_aluminium_is_flagged_and_painted_steel_is_not() {
     );
 }
 
+/// Near the reflected temperature, only a surface that reflects much is flagged: a painted
+/// jacket (ε 0.95) read at 25 °C among 20 °C surroundings gets 95 % of its signal from itself
+/// (0.95·L(T_s) of about L(T_s)), and a 5 K error in the reflected temperature moves the answer by
+/// about (1 − ε)/ε·5 K = 0.26 K; a dull metal (ε 0.3) at the same contrast gets over a fifth of
+/// its signal by reflection.
+#[test]
+fn near_the_reflected_temperature_only_a_reflective_surface_is_flagged() {
+    let painted = radiometry::correct(&reading(298.15, 0.95, 293.15), 0.95).unwrap();
+    assert!(painted.reliable(), "{:?}", painted.caveats);
+    let dull = radiometry::correct(&reading(298.15, 0.95, 293.15), 0.3).unwrap();
+    assert!(
+        dull.caveats.contains(&Caveat::NearReflected),
+        "{:?}",
+        dull.caveats
+    );
+}
+
 #[test]
 fn bad_readings_name_their_field() {
     use crate::engine::error::Subject;

@@ -20,14 +20,42 @@ pub(crate) fn inspection_terms(s: &Scenario) -> Terms {
     }
 }
 
-/// The condition card: passes only as designed.
+/// A k ratio below this is not better insulation but a reading or an input to check (a threshold
+/// chosen here: data sheets state k within about ±10 %, from memory).
+const IMPLAUSIBLY_LOW: f64 = 0.7;
+
+/// The condition card: passes only as designed, with the uncertainty unable to change that.
 pub(crate) fn inspection_verdict(s: &Scenario, i: &Inspection) -> Verdict {
     let what = match i.condition {
-        Condition::AsDesigned => "The insulation performs as designed: its effective conductivity is within 1.3 times the data sheet's (common practice).",
+        Condition::AsDesigned => "The insulation performs as designed: its effective conductivity is at most 1.3 times the data sheet's (common practice).",
         Condition::Degraded => "The insulation is degraded: its effective conductivity is 1.3 to 2.5 times the data sheet's (common practice thresholds).",
         Condition::Failed => "The insulation is likely wet, damaged or missing in part: its effective conductivity is more than 2.5 times the data sheet's (common practice threshold).",
     };
     let mut summary = what.to_string();
+    // What the uncertainty leaves open: a verdict that its range could change, a k well below
+    // the data sheet's, corners with no answer. Each makes the card one to act on.
+    let (lo, hi) = (i.ranges.k_ratio.lo, i.ranges.k_ratio.hi);
+    let (c_lo, c_hi) = (Condition::from_ratio(lo), Condition::from_ratio(hi));
+    let mut settled = true;
+    if c_lo != c_hi {
+        settled = false;
+        summary.push_str(&format!(
+            " Within the uncertainty the condition could be anything from {} to {}: read again (closer, on a tape of known emissivity) before deciding.",
+            c_lo.id(),
+            c_hi.id()
+        ));
+    }
+    if i.k.factor < IMPLAUSIBLY_LOW {
+        settled = false;
+        summary.push_str(" The effective conductivity is well below the data sheet's (under 0.7 times): insulation does not do better than its sheet, so check the reading, the emissivities and the inputs.");
+    }
+    if i.ranges.unexplained > 0 {
+        settled = false;
+        summary.push_str(&format!(
+            " {} of the {} corners of the uncertainty have no answer, so the range is wider than shown.",
+            i.ranges.unexplained, i.ranges.corners
+        ));
+    }
     if !i.corrected.reliable() {
         summary.push_str(" The reading is uncertain: ");
         summary.push_str(
@@ -73,7 +101,7 @@ pub(crate) fn inspection_verdict(s: &Scenario, i: &Inspection) -> Verdict {
     Verdict {
         id: "insulation",
         title: "Insulation condition (infrared reading)",
-        ok: i.condition == Condition::AsDesigned,
+        ok: i.condition == Condition::AsDesigned && settled,
         summary,
         figures,
         thickness: None,

@@ -108,3 +108,62 @@ fn a_surface_read_as_designed_is_as_designed() {
     assert_eq!(i.condition, crate::engine::inspect::Condition::AsDesigned);
     assert!(i.excess_cost.abs() < 1e-6 * o.annual_cost);
 }
+
+/// What the instrument displays is not the surface's temperature: set to an emissivity far below
+/// the surface's, it shows more than the surface has, even more than the process. Such a reading
+/// is corrected and used, not refused (the surface beyond the process is refused once corrected).
+/// The displayed figure here comes from the signal balance ε·L(T_s) + (1 − ε)·L(T_r) =
+/// ε_set·L(T_d) + (1 − ε_set)·L(T_r) solved by bisection in the test.
+#[test]
+fn a_display_above_the_process_is_corrected_not_refused() {
+    use crate::engine::inspect::radiometry::band_radiance;
+    let mut s = reading();
+    let design = evaluate(&s).unwrap().inspection.unwrap().design_surface;
+    let (ts, eps, set) = (design + 5.0, s.emissivity, 0.02);
+    s.ir_emissivity = set;
+    let band = (s.ir_band_low, s.ir_band_high);
+    let l = |t: f64| band_radiance(t, band);
+    let want = (eps * l(ts) + (set - eps) * l(s.ir_reflected)) / set;
+    let (mut lo, mut hi) = (ts, 3000.0);
+    for _ in 0..200 {
+        let mid = 0.5 * (lo + hi);
+        if l(mid) < want {
+            lo = mid
+        } else {
+            hi = mid
+        }
+    }
+    s.ir_reading = 0.5 * (lo + hi);
+    assert!(
+        s.ir_reading > s.process_temp,
+        "the display {} K",
+        s.ir_reading
+    );
+    let i = evaluate(&s).unwrap().inspection.unwrap();
+    assert!(
+        (i.corrected.surface - ts).abs() < 1e-6,
+        "{}",
+        i.corrected.surface
+    );
+}
+
+/// A reading whose uncertainty spans two conditions does not pass: the card says the condition
+/// is open, and so does its badge.
+#[test]
+fn a_verdict_the_uncertainty_could_change_is_not_passed() {
+    let mut s = reading();
+    let i = evaluate(&s).unwrap().inspection.unwrap();
+    // Read exactly as designed, with an instrument of ±15 K on a line a few kelvin above the air.
+    s.ir_reading = i.design_surface;
+    s.ir_emissivity = s.emissivity;
+    s.ir_accuracy = 15.0;
+    let o = evaluate(&s).unwrap();
+    let i = o.inspection.as_ref().unwrap();
+    let card = o.verdicts.iter().find(|v| v.id == "insulation").unwrap();
+    assert!(i.ranges.k_ratio.hi > 1.3, "{:?}", i.ranges);
+    assert!(
+        !card.ok && card.summary.contains("could be anything"),
+        "{}",
+        card.summary
+    );
+}

@@ -258,23 +258,10 @@ impl Scenario {
             })?;
         }
         if self.reads() {
+            // Only the settings here: the displayed figure is not the surface's temperature (an
+            // instrument set below the surface's emissivity shows more than the surface has), so
+            // a surface beyond the process is refused once corrected, by the inverse.
             crate::engine::inspect::radiometry::check(&self.ir(), self.emissivity)?;
-            let hot = self.process_temp > self.fluid_temp;
-            if (hot && self.ir_reading > self.process_temp)
-                || (!hot && self.ir_reading < self.process_temp)
-            {
-                return Err(EngineError::Undefined {
-                    subject: crate::engine::error::Subject::Input("Tir"),
-                    quantity: "infrared reading",
-                    value: self.ir_reading,
-                    unit: "K",
-                    why: if hot {
-                        "is above the process temperature of a hot line: the surface cannot be hotter than what heats it (in the sun, read in the shade)"
-                    } else {
-                        "is below the process temperature of a cold line: the surface cannot be colder than what cools it"
-                    },
-                });
-            }
         }
         if !self.solved() && self.surface_temp == self.fluid_temp {
             return Err(EngineError::NoTemperatureDifference {
