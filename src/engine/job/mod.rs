@@ -364,9 +364,9 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
         let mut thickness = None;
         let summary = if insulated_layers == 0 {
             if met {
-                "The loss per metre is within the target.".to_string()
+                "The loss per length is within the target.".to_string()
             } else {
-                "The loss per metre is above the target. Add an insulation layer to see the thickness that meets it.".to_string()
+                "The loss per length is above the target. Add an insulation layer to see the thickness that meets it.".to_string()
             }
         } else {
             let search = heatloss::thickness_search(job, 0.5, t.loss_target, |s| s.q.abs())?;
@@ -377,18 +377,18 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
                 }) => {
                     thickness = Some(th);
                     if met {
-                        "The loss per metre is within the target.".to_string()
+                        "The loss per length is within the target.".to_string()
                     } else {
-                        "The loss per metre is above the target.".to_string()
+                        "The loss per length is above the target.".to_string()
                     }
                 }
-                _ if met => "The loss per metre is within the target.".to_string(),
-                Some(heatloss::Search { at_zero, .. }) if at_zero <= t.loss_target => "The loss per metre is above the target, and the layer makes it worse: without the outer layer the loss is within it (the line is below the critical radius, where a thin layer adds surface faster than resistance).".to_string(),
+                _ if met => "The loss per length is within the target.".to_string(),
+                Some(heatloss::Search { at_zero, .. }) if at_zero <= t.loss_target => "The loss per length is above the target, and the layer makes it worse: without the outer layer the loss is within it (the line is below the critical radius, where a thin layer adds surface faster than resistance).".to_string(),
                 Some(heatloss::Search { at_max, .. }) => {
                     figures.push(("loss with 0.5 m of the outer layer", at_max, Dim::HeatFlowPerLength));
-                    "The loss per metre is above the target, and no outer-layer thickness up to 0.5 m meets it: the target is below what this construction can reach. A better insulant (lower k) or a lower process temperature is needed.".to_string()
+                    "The loss per length is above the target, and no outer-layer thickness up to 0.5 m (about 20 in) meets it: the target is below what this construction can reach. A better insulant (lower k) or a lower process temperature is needed.".to_string()
                 }
-                None => "The loss per metre is above the target.".to_string(),
+                None => "The loss per length is above the target.".to_string(),
             }
         };
         verdicts.push(Verdict {

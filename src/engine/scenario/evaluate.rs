@@ -181,7 +181,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         Some(_) if sweeps && s.layer_count > 0 => {
             let i = s.layer_count - 1;
             let top = (2.0 * s.layer_t[i]).max(0.1);
-            grid_with(top, 12, s.layer_t[i])
+            grid_dense_start(top, 14, s.layer_t[i])
                 .into_iter()
                 .filter_map(|x| {
                     let mut t = *s;
@@ -372,6 +372,22 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
 /// plotted curve passes through the point marked on it.
 pub(crate) fn grid_with(top: f64, steps: usize, also: f64) -> Vec<f64> {
     let mut g: Vec<f64> = (0..=steps).map(|k| top * k as f64 / steps as f64).collect();
+    if also.is_finite() && also >= 0.0 && !g.contains(&also) {
+        g.push(also);
+        g.sort_by(|a, b| a.total_cmp(b));
+    }
+    g
+}
+
+/// 0 to `top` in `steps`, spaced as the square of the step (loss and surface change fastest in
+/// the first millimetres of insulation), with `also` (the operating point) in place of a grid
+/// point within 2 % of `top` of it, so the plot neither skips the steep start nor draws two dots.
+pub(crate) fn grid_dense_start(top: f64, steps: usize, also: f64) -> Vec<f64> {
+    let n = steps as f64;
+    let mut g: Vec<f64> = (0..=steps)
+        .map(|k| top * (k as f64 / n).powi(2))
+        .filter(|x| *x == 0.0 || !(also.is_finite() && (x - also).abs() < 0.02 * top))
+        .collect();
     if also.is_finite() && also >= 0.0 && !g.contains(&also) {
         g.push(also);
         g.sort_by(|a, b| a.total_cmp(b));

@@ -105,6 +105,20 @@ fn sweeps_pass_through_the_operating_point() {
         .unwrap();
     assert!((at.0 - s.layer_t[0]).abs() < 1e-15);
     assert!((at.1 - o.q_total).abs() <= 1e-9 * o.q_total.abs());
+    // Dense where the curve is steep: three points within the first tenth of the span, and no
+    // grid point crowding the operating one.
+    let top = o.thickness_sweep.last().unwrap().0;
+    assert!(
+        o.thickness_sweep
+            .iter()
+            .filter(|p| p.0 > 0.0 && p.0 < 0.1 * top)
+            .count()
+            >= 3
+    );
+    assert!(o
+        .thickness_sweep
+        .iter()
+        .all(|p| p.0 == s.layer_t[0] || (p.0 - s.layer_t[0]).abs() >= 0.02 * top));
     // More insulation: less loss, cooler surface, all along the sweep.
     for w in o.thickness_sweep.windows(2).skip(1) {
         assert!(w[1].1 < w[0].1 && w[1].2 < w[0].2);
