@@ -79,7 +79,12 @@ pub fn AnswerBar(
                 };
                 // Checking a reading: the loss and surface the reading says, not the design's.
                 let (label, v, surface, surface_label) = match &o.inspection {
-                    Some(i) => ("Loss, read", i.actual, i.corrected.surface, "Surface, read"),
+                    Some(i) => (
+                        "Loss, read",
+                        i.actual,
+                        i.corrected.surface,
+                        "Surface, corrected",
+                    ),
                     None => (label, v, o.surface_temp, "Surface"),
                 };
                 // A cold body gains heat: say so rather than show a negative loss.

@@ -625,7 +625,7 @@ pub fn App() -> impl IntoView {
                     {move || stale().then_some("Paused: showing the last good result; fix the marked input to update.")}
                 </p>
                 {move || shown.with(|s| s.error.as_ref().filter(|_| s.error_at.is_none()).map(|e| view! { <p class="error" data-error>"⚠ "{scenario::error_message(e, &choice.get())}</p> }))}
-                <dl class="figures">
+                <dl class="figures" class:designed=move || scenario.with(|s| s.reads())>
                     <div class="main" class:hidden=move || shown.with(|s| s.outcome.as_ref().is_some_and(|o| o.q_per_length.is_none()))><dt>{move || if gains() { "Heat gain per length" } else { "Heat loss per length" }}</dt><dd>{out_as("q_per_length", |o| o.q_per_length, Some(Dim::HeatFlowPerLength), true)}{flag_mark}</dd></div>
                     <div class="main"><dt>{move || {
                         let what = if gains() { "Heat gain" } else { "Heat loss" };

@@ -263,7 +263,13 @@ fn row_markup(m: &mut String, it: &Saved, res: &survey::Figure, c: &UnitChoice) 
                 None => super::answer::failing(&r.verdicts),
             },
         ),
-        Err(e) => (format!("⚠ {e}"), "—".into(), "—".into(), "—".into()),
+        // Why, in the person's units, is on the page once the item is opened.
+        Err(_) => (
+            "⚠ not computed: open it to see why".into(),
+            "—".into(),
+            "—".into(),
+            "—".into(),
+        ),
     };
     let sub = [it.tag.as_str(), it.location.as_str()]
         .iter()
@@ -533,10 +539,11 @@ pub fn SavedPanel(
     });
     let totals = move || {
         let c = choice.get();
-        let (n, (q, e, m), (read, xq, xm)) = list.with(|l| {
+        let (n, computed, (q, e, m), (read, xq, xm)) = list.with(|l| {
             let figures: Vec<survey::Figure> = l.iter().map(|(_, r)| r.clone()).collect();
             (
                 l.len(),
+                figures.iter().filter(|r| r.is_ok()).count(),
                 survey::totals(
                     &figures
                         .iter()
@@ -558,7 +565,7 @@ pub fn SavedPanel(
         });
         view! {
             <tr class="totals" data-totals>
-                <th scope="row">{format!("Total of {n} item(s)")}</th>
+                <th scope="row">{if computed < n { format!("Total of {computed} of {n} item(s), the others not computed") } else { format!("Total of {n} item(s)") }}</th>
                 <td data-total-loss>{u(q, Dim::HeatFlow)}</td>
                 <td colspan="4" data-total-excess>{format!("{} · {}{}", u(e, Dim::EnergyPerYear), u(m, Dim::MoneyPerYear), excess.unwrap_or_default())}</td>
             </tr>

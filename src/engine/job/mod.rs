@@ -357,7 +357,7 @@ pub fn evaluate(job: &Job, t: &Targets, insulated_layers: usize) -> Result<JobRe
     if g == Geometry::Cylinder && t.loss_target > 0.0 {
         let q = solution.q.abs();
         let mut figures = vec![
-            ("loss per metre", q, Dim::HeatFlowPerLength),
+            ("loss per length", q, Dim::HeatFlowPerLength),
             ("target", t.loss_target, Dim::HeatFlowPerLength),
         ];
         let met = q <= t.loss_target;

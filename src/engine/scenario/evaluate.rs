@@ -244,6 +244,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         }
     }
     if let Some(i) = &inspection {
+        as_read(&mut verdicts, s, i, dew_point);
         verdicts.push(inspection_verdict(s, i));
     }
     crate::engine::job::sanitize(&mut verdicts);

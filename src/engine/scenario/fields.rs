@@ -247,7 +247,7 @@ fn read_ir(s: &Scenario) -> bool {
 pub const FIELDS: [FieldSpec; 64] = [
     f(Field::Diameter, Group::Body, "D", "Size D", Dim::Length, (0.0, true, 100.0), "as drawn: the width across the stream (bare outside diameter of a pipe)", at!(diameter), always),
     f(Field::Length, Group::Body, "L", "Length", Dim::RunLength, (0.0, true, 10_000.0), "along the axis; the height when upright", at!(length), not_sphere),
-    f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air; outdoors, the wind a weather report gives (10 m over open ground)", at!(speed), always),
+    f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air; outdoors, the wind a weather report gives (10 m, 33 ft, over open ground)", at!(speed), always),
     f(Field::FluidTemp, Group::Stream, "Ta", "Stream temperature", Dim::Temperature, (0.0, true, 3000.0), "of the approaching fluid", at!(fluid_temp), always),
     f(Field::Pressure, Group::Stream, "p", "Pressure", Dim::Pressure, (0.0, true, 100e6), "absolute, at the site", at!(pressure), pressure_typed),
     f(Field::Elevation, Group::Stream, "z", "Site elevation", Dim::Elevation, (-500.0, false, 11_000.0), "above sea level; standard atmosphere", at!(elevation), elevation_typed),
@@ -265,7 +265,7 @@ pub const FIELDS: [FieldSpec; 64] = [
     f(Field::ProcessGlycol, Group::Surface, "xgp", "Glycol in the process fluid", Dim::Fraction, (0.0, false, 0.6), "by mass, 0–60 %", at!(process_glycol), process_glycol),
     f(Field::WallThickness, Group::Surface, "tw", "Wall thickness", Dim::Length, (0.0, false, 1.0), "of the pipe or vessel", at!(wall_thickness), solved),
     f(Field::WallK, Group::Surface, "kw", "Wall conductivity", Dim::ThermalConductivity, (0.0, true, 1e4), "of your wall material", at!(wall_k), wall_typed),
-    f(Field::Emissivity, Group::Surface, "e", "Emissivity", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 painted or oxidised, 0.1 bright aluminium (common practice)", at!(emissivity), always),
+    f(Field::Emissivity, Group::Surface, "e", "Emissivity", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 painted or oxidised, 0.05 bright aluminium (common practice)", at!(emissivity), always),
     f(Field::Surround, Group::Surface, "Tr", "Surroundings temperature", Dim::Temperature, (0.0, true, 3000.0), "what the surface sees (walls, roof); the stream's if unsure", at!(t_surround), indoors),
     f(Field::Layer1T, Group::Layers, "t1", "Layer 1 thickness", Dim::Length, (0.0, false, 2.0), "innermost insulation", at!(layer_t[0]), layer_1),
     f(Field::Layer1Ka, Group::Layers, "ka1", "Layer 1 k at mean temperature A", Dim::LayerConductivity, (0.0, true, 100.0), "from the data sheet", at!(layer_ka[0]), layer_1),

@@ -20,6 +20,51 @@ pub(crate) fn inspection_terms(s: &Scenario) -> Terms {
     }
 }
 
+/// The design's touch, sweat and loss-target cards judged again on what the reading says: a
+/// surface that burns or sweats as read fails its card whatever the design gives (touch on the
+/// high end of the reading's range, sweating on the low end), and the loss as read meets the
+/// target or not. Each card keeps the design's figures and says which governs.
+pub(crate) fn as_read(verdicts: &mut [Verdict], s: &Scenario, i: &Inspection, dew: Option<f64>) {
+    let r = &i.ranges.surface;
+    let (lo, hi) = (r.lo.min(i.corrected.surface), r.hi.max(i.corrected.surface));
+    for v in verdicts.iter_mut() {
+        let (bad, figure) = match v.id {
+            "touch" => (
+                hi > s.touch_limit,
+                ("surface as read, high end", hi, Dim::Temperature),
+            ),
+            "dew" => match dew {
+                Some(td) => (
+                    lo < td + s.dew_margin,
+                    ("surface as read, low end", lo, Dim::Temperature),
+                ),
+                None => continue,
+            },
+            "loss" => (
+                i.actual > s.loss_target,
+                ("loss per length as read", i.actual, Dim::HeatFlowPerLength),
+            ),
+            _ => continue,
+        };
+        v.figures.insert(0, figure);
+        v.summary = format!(
+            "As read: {}. As designed: {}",
+            if bad {
+                "fails this limit"
+            } else {
+                "within this limit"
+            },
+            v.summary
+        );
+        if bad {
+            v.ok = false;
+            if v.id == "touch" {
+                v.caution = Some(crate::engine::job::TOUCH_CAUTION);
+            }
+        }
+    }
+}
+
 /// A k ratio below this is not better insulation but a reading or an input to check (a threshold
 /// chosen here: data sheets state k within about ±10 %, from memory).
 const IMPLAUSIBLY_LOW: f64 = 0.7;
@@ -27,9 +72,10 @@ const IMPLAUSIBLY_LOW: f64 = 0.7;
 /// The condition card: passes only as designed, with the uncertainty unable to change that.
 pub(crate) fn inspection_verdict(s: &Scenario, i: &Inspection) -> Verdict {
     let what = match i.condition {
-        Condition::AsDesigned => "The insulation performs as designed: its effective conductivity is at most 1.3 times the data sheet's (common practice).",
-        Condition::Degraded => "The insulation is degraded: its effective conductivity is 1.3 to 2.5 times the data sheet's (common practice thresholds).",
-        Condition::Failed => "The insulation is likely wet, damaged or missing in part: its effective conductivity is more than 2.5 times the data sheet's (common practice threshold).",
+        _ if i.k.factor < IMPLAUSIBLY_LOW => "The reading is implausible: the effective conductivity is under 70 % of the data sheet's, and insulation does not do better than its sheet. Check the reading, the emissivities and the inputs.",
+        Condition::AsDesigned => "The insulation performs as designed: its effective conductivity is at most 130 % of the data sheet's (common practice).",
+        Condition::Degraded => "The insulation is degraded: its effective conductivity is 130 % to 250 % of the data sheet's (common practice thresholds).",
+        Condition::Failed => "The insulation is likely wet, damaged or missing in part: its effective conductivity is more than 250 % of the data sheet's (common practice threshold).",
     };
     let mut summary = what.to_string();
     // What the uncertainty leaves open: a verdict that its range could change, a k well below
@@ -47,7 +93,6 @@ pub(crate) fn inspection_verdict(s: &Scenario, i: &Inspection) -> Verdict {
     }
     if i.k.factor < IMPLAUSIBLY_LOW {
         settled = false;
-        summary.push_str(" The effective conductivity is well below the data sheet's (under 0.7 times): insulation does not do better than its sheet, so check the reading, the emissivities and the inputs.");
     }
     if i.ranges.unexplained > 0 {
         settled = false;

@@ -167,3 +167,43 @@ fn a_verdict_the_uncertainty_could_change_is_not_passed() {
         card.summary
     );
 }
+
+/// Safety: a jacket read hotter than the touch limit fails the touch card, whatever the design
+/// says (a walk found "✓ Touch" beside a reading of 73 °C on a 60 °C limit); the card keeps the
+/// design's figures and says which governs.
+#[test]
+fn a_reading_over_the_touch_limit_fails_the_touch_card() {
+    let mut s = reading();
+    s.process_temp = 423.15;
+    s.ir_emissivity = s.emissivity;
+    let mut solved = s;
+    solved.surface_mode = SurfaceMode::Solved;
+    let touch = |o: &Outcome| {
+        o.verdicts
+            .iter()
+            .find(|v| v.id == "touch")
+            .cloned()
+            .unwrap()
+    };
+    assert!(
+        touch(&evaluate(&solved).unwrap()).ok,
+        "the design is safe to touch"
+    );
+    s.ir_reading = 343.15;
+    let o = evaluate(&s).unwrap();
+    let t = touch(&o);
+    assert!(
+        !t.ok && t.summary.starts_with("As read: fails"),
+        "{}",
+        t.summary
+    );
+    assert!(t.caution.is_some() && t.figures[0].1 >= o.inspection.unwrap().corrected.surface);
+    // Read cool, the card passes and still says so.
+    s.ir_reading = 300.15;
+    let t = touch(&evaluate(&s).unwrap());
+    assert!(
+        t.ok && t.summary.starts_with("As read: within"),
+        "{}",
+        t.summary
+    );
+}

@@ -106,14 +106,19 @@ pub fn totals(results: &[Result<ItemResult, EngineError>]) -> (f64, f64, f64) {
 }
 
 /// The inspected items' excess over design, summed: heat flow W and cost per year, and how many
-/// items were inspected (0: the list has no inspection, the totals row says nothing of it).
+/// items were inspected (0: the list has no inspection, the totals row says nothing of it). An
+/// item read better than its design adds nothing (it does not pay for another's defect).
 pub fn inspection_totals(results: &[Figure]) -> (usize, f64, f64) {
     results
         .iter()
         .flatten()
         .filter_map(|r| r.inspection.as_ref())
         .fold((0, 0.0, 0.0), |(n, q, c), i| {
-            (n + 1, q + i.excess_loss, c + i.excess_cost)
+            (
+                n + 1,
+                q + i.excess_loss.max(0.0),
+                c + i.excess_cost.max(0.0),
+            )
         })
 }
 
