@@ -168,8 +168,8 @@ fn compute_list(
 }
 
 /// Read the file just chosen in a file input as text, clear the input (so the same file can be
-/// chosen again), and hand the text to `then`.
-fn read_chosen_file(ev: leptos::ev::Event, then: impl FnOnce(String) + 'static) {
+/// chosen again), and hand the text to `then` (boxed: one copy of the reading for both imports).
+fn read_chosen_file(ev: leptos::ev::Event, then: Box<dyn FnOnce(String)>) {
     let Some(input) = ev
         .target()
         .and_then(|t| t.dyn_into::<web_sys::HtmlInputElement>().ok())
@@ -347,46 +347,52 @@ pub fn SavedPanel(
         Err(e) => note.set(Some(format!("Not exported: {e}."))),
     };
     let import = move |ev: leptos::ev::Event| {
-        read_chosen_file(ev, move |text| match read_text(&text) {
-            Ok(l) => {
-                let plan = store::plan_import(&saved.get_untracked(), &l.store);
-                let extra = if l.problems.is_empty() {
-                    String::new()
-                } else {
-                    format!(" Not importable: {}.", l.problems.join("; "))
-                };
-                note.set(Some(format!("The file adds {} and replaces {} saved scenario(s). Confirm below to import.{extra}", plan.add.len(), plan.replace.len())));
-                pending.set(Some((l.store, plan)));
-            }
-            Err(why) => note.set(Some(format!("Nothing imported: {why}."))),
-        });
+        read_chosen_file(
+            ev,
+            Box::new(move |text| match read_text(&text) {
+                Ok(l) => {
+                    let plan = store::plan_import(&saved.get_untracked(), &l.store);
+                    let extra = if l.problems.is_empty() {
+                        String::new()
+                    } else {
+                        format!(" Not importable: {}.", l.problems.join("; "))
+                    };
+                    note.set(Some(format!("The file adds {} and replaces {} saved scenario(s). Confirm below to import.{extra}", plan.add.len(), plan.replace.len())));
+                    pending.set(Some((l.store, plan)));
+                }
+                Err(why) => note.set(Some(format!("Nothing imported: {why}."))),
+            }),
+        );
     };
 
     let import_csv = move |ev: leptos::ev::Event| {
-        read_chosen_file(ev, move |text| {
-            let (rows, errors) = survey::from_csv(&text);
-            let mut next = saved.get_untracked();
-            let n = rows.len();
-            let mut namer = store::Namer::new(next.items.iter().map(|i| i.name.as_str()));
-            for mut r in rows {
-                r.name = namer.name(&r.name);
-                next.items.push(r);
-            }
-            let report = if errors.is_empty() {
-                format!("Imported {n} row(s) from the CSV file.")
-            } else {
-                format!(
-                    "Imported {n} row(s); {} problem(s), those rows left out: {}.",
-                    errors.len(),
-                    errors
-                        .iter()
-                        .map(|e| e.to_string())
-                        .collect::<Vec<_>>()
-                        .join("; ")
-                )
-            };
-            commit(next, report);
-        });
+        read_chosen_file(
+            ev,
+            Box::new(move |text| {
+                let (rows, errors) = survey::from_csv(&text);
+                let mut next = saved.get_untracked();
+                let n = rows.len();
+                let mut namer = store::Namer::new(next.items.iter().map(|i| i.name.as_str()));
+                for mut r in rows {
+                    r.name = namer.name(&r.name);
+                    next.items.push(r);
+                }
+                let report = if errors.is_empty() {
+                    format!("Imported {n} row(s) from the CSV file.")
+                } else {
+                    format!(
+                        "Imported {n} row(s); {} problem(s), those rows left out: {}.",
+                        errors.len(),
+                        errors
+                            .iter()
+                            .map(|e| e.to_string())
+                            .collect::<Vec<_>>()
+                            .join("; ")
+                    )
+                };
+                commit(next, report);
+            }),
+        );
     };
     let by_loss = RwSignal::new(false);
     // The list as shown: items with their figures, published together once every figure is
