@@ -37,7 +37,7 @@ fn an_infrared_reading_gives_its_card_badge_and_answer_and_a_survey_sorted_by_it
         // The bar says what the reading says, in the page's rounding.
         let bar = text_of(&c, "[data-answer-bar]").await;
         assert!(
-            bar.contains("Loss, read") && bar.contains("Surface, read"),
+            bar.contains("Loss, read") && bar.contains("Surface, corrected"),
             "{bar}"
         );
         assert_eq!(
