@@ -5,7 +5,8 @@
 //!   rewritten (median and 90th percentile of 200 inputs, timed inside the page with
 //!   `performance.now()`), for the demo and for the solved field job;
 //! - the survey list: 1,000 saved items, one duplicated, to every row and the totals recomputed and
-//!   shown (median of 5);
+//!   shown (median of 5), and the same for an inspection round (1,000 items each set against an
+//!   infrared reading);
 //! - opening with 5,000 saved items: navigation to the first result, and to the survey list shown,
 //!   from the page's own performance marks (median of 5).
 
@@ -107,53 +108,64 @@ async fn main() {
         let (m, p90) = median(times);
         println!("keystroke to updated results, {name}: median {m:.2} ms, p90 {p90:.2} ms (200 inputs)");
     }
-    // The survey list of 1,000 items.
-    let many = leeward::engine::store::Store {
-        items: (0..1000)
-            .map(|i| {
-                let mut s = leeward::engine::scenario::DEMO;
-                s.diameter = 0.02 + 0.0003 * i as f64;
-                leeward::engine::store::Saved::new(
-                    &format!("Item {i}"),
-                    "",
-                    "",
-                    &s,
-                    leeward::engine::units::System::Si,
-                )
-            })
-            .collect(),
-        unreadable: vec![],
-    };
-    let text = leeward::engine::store::to_json(&many);
-    let mut list = Vec::new();
-    for _ in 0..5 {
-        c.goto(&url).await.unwrap();
-        c.execute(
-            "localStorage.setItem('leeward.saved', arguments[0]); return true;",
-            vec![json!(text)],
-        )
-        .await
-        .unwrap();
-        c.refresh().await.unwrap();
-        // Wait for the list to be read and shown in full before changing it.
-        c.execute_async(
+    // The survey list of 1,000 items, and an inspection round of 1,000 (each item an insulated
+    // line set against its own infrared reading: #20's budget).
+    for (what, read) in [
+        ("survey list of 1,000 items", false),
+        ("inspection round of 1,000 items read with infrared", true),
+    ] {
+        let many = leeward::engine::store::Store {
+            items: (0..1000)
+                .map(|i| {
+                    let mut s = leeward::engine::scenario::DEMO;
+                    if read {
+                        s.surface_mode = leeward::engine::scenario::SurfaceMode::Reading;
+                        s.ir_reading += 0.005 * i as f64;
+                    } else {
+                        s.diameter = 0.02 + 0.0003 * i as f64;
+                    }
+                    leeward::engine::store::Saved::new(
+                        &format!("Item {i}"),
+                        "",
+                        "",
+                        &s,
+                        leeward::engine::units::System::Si,
+                    )
+                })
+                .collect(),
+            unreadable: vec![],
+        };
+        let text = leeward::engine::store::to_json(&many);
+        let mut list = Vec::new();
+        for _ in 0..5 {
+            c.goto(&url).await.unwrap();
+            c.execute(
+                "localStorage.setItem('leeward.saved', arguments[0]); return true;",
+                vec![json!(text)],
+            )
+            .await
+            .unwrap();
+            c.refresh().await.unwrap();
+            // Wait for the list to be read and shown in full before changing it.
+            c.execute_async(
             "const done = arguments[0]; const f = () => { if (document.querySelectorAll('[data-saved]').length === 1000) done(true); else setTimeout(f, 20); }; f();",
             vec![],
         )
         .await
         .unwrap();
-        tokio::time::sleep(Duration::from_millis(300)).await;
-        let t = c
+            tokio::time::sleep(Duration::from_millis(300)).await;
+            let t = c
             .execute_async(
                 "const done = arguments[0]; const n = document.querySelectorAll('[data-saved]').length; const b = document.querySelector('[data-saved] .saved-actions button:nth-child(4)'); const t0 = performance.now(); b.click(); const f = () => { if (document.querySelectorAll('[data-saved]').length > n) done(performance.now() - t0); else setTimeout(f, 0); }; f();",
                 vec![],
             )
             .await
             .unwrap();
-        list.push(t.as_f64().unwrap());
+            list.push(t.as_f64().unwrap());
+        }
+        let (m, p90) = median(list);
+        println!("{what}, recompute and redraw after a change: median {m:.0} ms, p90 {p90:.0} ms (5 runs)");
     }
-    let (m, p90) = median(list);
-    println!("survey list of 1,000 items, recompute and redraw after a change: median {m:.0} ms, p90 {p90:.0} ms (5 runs)");
     // Opening with 5,000 saved items: the first result must not wait for the list.
     let many = leeward::engine::store::Store {
         items: (0..5000)
