@@ -244,9 +244,16 @@ fn row_markup(m: &mut String, it: &Saved, res: &survey::Figure, c: &UnitChoice) 
     use std::fmt::Write;
     let f = |v: f64, d: Dim| crate::engine::units::show(v, c.get(d));
     let (loss, surface, range, checks) = match res {
+        // An inspected item: its loss and surface as read (the design's are in the item).
         Ok(r) => (
-            f(r.q_total, Dim::HeatFlow),
-            f(r.surface_temp, Dim::Temperature),
+            r.inspection.map_or_else(
+                || f(r.q_total, Dim::HeatFlow),
+                |i| format!("{} read", f(i.loss, Dim::HeatFlow)),
+            ),
+            r.inspection.map_or_else(
+                || f(r.surface_temp, Dim::Temperature),
+                |i| format!("{} read", f(i.surface, Dim::Temperature)),
+            ),
             if r.flags == 0 {
                 "✓".to_string()
             } else {

@@ -29,7 +29,9 @@ pub struct InspectionFigures {
     pub surface: f64,
     pub k_ratio: f64,
     pub condition: crate::engine::inspect::Condition,
-    /// Excess over design: heat flow of the item, W, and cost per year.
+    /// The item's heat flow as read, W (signed as `q_total`), and its excess over design: heat
+    /// flow of the item, W, and cost per year.
+    pub loss: f64,
     pub excess_loss: f64,
     pub excess_cost: f64,
 }
@@ -48,6 +50,12 @@ pub fn evaluate_item(s: &Scenario) -> Result<ItemResult, EngineError> {
             surface: i.corrected.surface,
             k_ratio: i.k.factor,
             condition: i.condition,
+            loss: i.actual
+                * if s.shape == crate::engine::shape::Shape::Sphere {
+                    1.0
+                } else {
+                    s.length
+                },
             excess_loss: i.excess_total,
             excess_cost: i.excess_cost,
         }),
