@@ -167,6 +167,10 @@ fn an_infrared_reading_gives_its_card_badge_and_answer_and_a_survey_sorted_by_it
             wet_row.contains("Insulation") && wet_row.contains("k "),
             "{wet_row}"
         );
+        // Its loss and surface are the reading's, said as such (the design's are the same for
+        // every span of this line and would not tell them apart).
+        let wet_loss = text_of(&c, "[data-saved=\"Read wet\"] [data-item-loss]").await;
+        assert!(wet_loss.ends_with(" read"), "{wet_loss}");
         let totals = text_of(&c, "[data-totals]").await;
         assert!(totals.contains("2 read with infrared"), "{totals}");
         // A row's buttons still act on their own item: open the wet one.
