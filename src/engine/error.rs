@@ -108,6 +108,23 @@ fn fmt4(v: f64) -> String {
     crate::engine::units::format_sig(v, 5)
 }
 
+/// The error for a value outside what a method can be evaluated at at all, about `subject`.
+pub fn undefined(
+    subject: Subject,
+    quantity: &'static str,
+    value: f64,
+    unit: &'static str,
+    why: &'static str,
+) -> EngineError {
+    EngineError::Undefined {
+        subject,
+        quantity,
+        value,
+        unit,
+        why,
+    }
+}
+
 /// Reject NaN and infinities up front.
 pub fn finite(quantity: &'static str, v: f64) -> Result<f64, EngineError> {
     if v.is_finite() {

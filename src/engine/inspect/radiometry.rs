@@ -158,6 +158,7 @@ pub fn band_radiance(t: f64, band: (f64, f64)) -> f64 {
     scale * (tail_integral(x_long) - tail_integral(x_short))
 }
 
+/// The error for the reading input `key` (its link key: the page marks that field).
 fn input_error(
     key: &'static str,
     quantity: &'static str,
@@ -165,13 +166,7 @@ fn input_error(
     unit: &'static str,
     why: &'static str,
 ) -> EngineError {
-    EngineError::Undefined {
-        subject: Subject::Input(key),
-        quantity,
-        value,
-        unit,
-        why,
-    }
+    crate::engine::error::undefined(Subject::Input(key), quantity, value, unit, why)
 }
 
 /// Check a reading's own inputs: emissivities in (0, 1], a band with λ₁ < λ₂, a reading apart from

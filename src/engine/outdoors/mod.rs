@@ -89,22 +89,7 @@ fn finite(quantity: &'static str, v: f64) -> Result<f64, EngineError> {
     crate::engine::error::finite(quantity, v)
 }
 
-/// The error for a value outside what the method can be evaluated at at all.
-fn undefined(
-    subject: Subject,
-    quantity: &'static str,
-    value: f64,
-    unit: &'static str,
-    why: &'static str,
-) -> EngineError {
-    EngineError::Undefined {
-        subject,
-        quantity,
-        value,
-        unit,
-        why,
-    }
-}
+pub(crate) use crate::engine::error::undefined;
 
 /// A finite value within `lo..=hi`, or the error naming the input by `key`.
 fn within(
