@@ -25,6 +25,8 @@ mod inspection;
 #[cfg(test)]
 mod inspection_tests;
 mod link;
+#[cfg(test)]
+mod link_tests;
 mod lower;
 mod outdoor;
 #[cfg(test)]
