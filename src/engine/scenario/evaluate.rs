@@ -213,7 +213,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
     let h_rad = crate::engine::heatloss::radiation_coefficient(s.emissivity, ts, env.t_radiant);
     let rad_flux = crate::engine::heatloss::radiated_flux(s.emissivity, ts, env.t_radiant);
     let area_unit = crate::engine::heatloss::outer_area(s.shape, outer_d);
-    let run = if s.shape.is_sphere() { 1.0 } else { s.length };
+    let run = s.run();
     let q_conv_unit = finite_result("convective heat flow", h * area_unit * dt)?;
     let q_rad_unit = finite_result("radiative heat flow", area_unit * rad_flux)?;
     let q_solar_unit = finite_result("absorbed solar heat", env.solar * area_unit)?;
@@ -406,11 +406,7 @@ pub(crate) fn quick(
     env: &Surroundings,
 ) -> Result<(f64, f64, f64), EngineError> {
     let stream = s.stream(p, fluid, env);
-    let run = if s.shape == Shape::Sphere {
-        1.0
-    } else {
-        s.length
-    };
+    let run = s.run();
     if s.solved() {
         let job = s.job_with(stream, inside, env);
         let sol = crate::engine::heatloss::solve_lean(&job)?;

@@ -11,7 +11,7 @@ pub const INSPECTION_CAUTION: &str = "An infrared survey screens; it does not pr
 /// and cost inputs, the reading's accuracy and the emissivity's uncertainty.
 pub(crate) fn inspection_terms(s: &Scenario) -> Terms {
     Terms {
-        run: if s.shape.is_sphere() { 1.0 } else { s.length },
+        run: s.run(),
         hours: s.hours,
         efficiency: s.efficiency,
         price: s.price,
@@ -46,6 +46,14 @@ pub(crate) fn as_read(verdicts: &mut [Verdict], s: &Scenario, i: &Inspection, de
             ),
             _ => continue,
         };
+        // The design's own figures stay, named as the design's.
+        for f in v.figures.iter_mut() {
+            f.0 = match f.0 {
+                "surface" => "surface as designed",
+                "loss per length" => "loss per length as designed",
+                other => other,
+            };
+        }
         v.figures.insert(0, figure);
         v.summary = format!(
             "As read: {}. As designed: {}",
@@ -58,6 +66,8 @@ pub(crate) fn as_read(verdicts: &mut [Verdict], s: &Scenario, i: &Inspection, de
         );
         if bad {
             v.ok = false;
+            // A thickness that meets the limit as designed does not mend what the reading shows.
+            v.thickness = None;
             if v.id == "touch" {
                 v.caution = Some(crate::engine::job::TOUCH_CAUTION);
             }

@@ -198,6 +198,9 @@ fn a_reading_over_the_touch_limit_fails_the_touch_card() {
         t.summary
     );
     assert!(t.caution.is_some() && t.figures[0].1 >= o.inspection.unwrap().corrected.surface);
+    // The design's thickness does not mend a defect; the design's surface is named as such.
+    assert!(t.thickness.is_none());
+    assert!(t.figures.iter().any(|f| f.0 == "surface as designed"));
     // Read cool, the card passes and still says so.
     s.ir_reading = 300.15;
     let t = touch(&evaluate(&s).unwrap());

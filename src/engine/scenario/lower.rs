@@ -21,6 +21,16 @@ impl Scenario {
         ) && matches!(self.shape, Shape::Cylinder | Shape::Sphere)
     }
 
+    /// What a heat flow per unit is multiplied by for the item's total: the run length L, or 1 for
+    /// a sphere (its figures are for the whole body).
+    pub fn run(&self) -> f64 {
+        if self.shape.is_sphere() {
+            1.0
+        } else {
+            self.length
+        }
+    }
+
     /// Whether the surface was read with an infrared instrument (issue #20): the design is solved
     /// as in [`Scenario::solved`], and the reading, corrected, is set against it.
     pub fn reads(&self) -> bool {

@@ -50,12 +50,7 @@ pub fn evaluate_item(s: &Scenario) -> Result<ItemResult, EngineError> {
             surface: i.corrected.surface,
             k_ratio: i.k.factor,
             condition: i.condition,
-            loss: i.actual
-                * if s.shape == crate::engine::shape::Shape::Sphere {
-                    1.0
-                } else {
-                    s.length
-                },
+            loss: i.actual * s.run(),
             excess_loss: i.excess_total,
             excess_cost: i.excess_cost,
         }),
