@@ -14,6 +14,9 @@
 //! - [`wind`] — a wind reading carried to the body's height and terrain (EN 1991-1-4 §4.3), and
 //!   the yaw factor of forced convection on a cylinder (Morgan's relation as CIGRE TB 601 gives
 //!   it, IEEE Std 738's K_angle as the cross-check).
+//! - [`joule`] — heat made inside: the steady surface temperature of a body carrying a known
+//!   heat or a current through a temperature-dependent resistance, in everything above, and the
+//!   inverse (the heat or current that holds the surface at a limit).
 //!
 //! Units: SI `f64` — K, Pa, m, m/s, W/m², W/m — except angles, which are decimal degrees (as the
 //! published algorithms, the page and every map write latitude, longitude and the sun's
@@ -23,6 +26,7 @@
 //! published range it computes and flags ([`crate::engine::validity::Flagged`]).
 
 pub mod irradiance;
+pub mod joule;
 pub mod sky;
 pub mod sun;
 mod sun_tables;
@@ -82,6 +86,19 @@ pub mod keys {
     pub const BODY_HEIGHT: &str = "zb";
     /// The wind's angle to the body's axis, degrees.
     pub const YAW: &str = "yaw";
+    /// Surroundings temperature, existing field (indoors; outdoors the sky and ground give it).
+    pub const SURROUNDINGS: &str = "Tr";
+    /// Heat made inside: W/m for a long body, W for a sphere.
+    pub const HEAT_MADE: &str = "qm";
+    /// Current through the conductor, A (rms for AC).
+    pub const CURRENT: &str = "I";
+    /// The data sheet's two resistances per metre, Ω/m, and their temperatures.
+    pub const RESISTANCE_LOW: &str = "R1";
+    pub const RESISTANCE_HIGH: &str = "R2";
+    pub const RESISTANCE_T_LOW: &str = "TR1";
+    pub const RESISTANCE_T_HIGH: &str = "TR2";
+    /// The surface temperature limit the inverse solves for.
+    pub const TEMPERATURE_LIMIT: &str = "Tmax";
 }
 
 /// A finite value, or the error that names it.
