@@ -352,10 +352,16 @@ pub fn report(
         r#"</ol><p class="meta">Property sources: {}. Correlations of this kind are good to about ±20–25 % (common practice).</p><h2>Cautions</h2><ul>"#,
         esc(&o.property_sources())
     );
-    let all: std::collections::BTreeSet<&str> = cautions(s, o)
+    // Each caution once, in the order the page gives them.
+    let mut all: Vec<&str> = Vec::new();
+    for t in cautions(s, o)
         .into_iter()
         .chain(o.verdicts.iter().filter_map(|v| v.caution))
-        .collect();
+    {
+        if !all.contains(&t) {
+            all.push(t);
+        }
+    }
     for t in all {
         let _ = write!(m, "<li>{}</li>", esc(t));
     }

@@ -10,6 +10,7 @@ mod results;
 mod saved;
 mod shapes;
 mod start;
+mod summary;
 mod unit_select;
 
 use start::initial;
@@ -500,7 +501,12 @@ pub fn App() -> impl IntoView {
     // afterprint events, or the panel's print button, switch it on and off.
     let printing = RwSignal::new(false);
     let _ = window_event_listener(leptos::ev::beforeprint, move |_| printing.set(true));
-    let _ = window_event_listener(leptos::ev::afterprint, move |_| printing.set(false));
+    // The survey summary prints instead of the one-item report while it is set.
+    let summary = RwSignal::new(None::<String>);
+    let _ = window_event_listener(leptos::ev::afterprint, move |_| {
+        printing.set(false);
+        summary.set(None);
+    });
 
     // Item tag and location: typed in the saved-work panel, printed on the report.
     let item_name = RwSignal::new(String::from("Line 1"));
@@ -657,7 +663,7 @@ pub fn App() -> impl IntoView {
                     })}
                 </details>
             </section>
-            {(!view_opts.embed).then(|| view! { <saved::SavedPanel scenario=scenario system=system name=item_name tag=tag place=place choice=choice on_open=open_saved/> })}
+            {(!view_opts.embed).then(|| view! { <saved::SavedPanel scenario=scenario system=system name=item_name tag=tag place=place choice=choice summary=summary on_open=open_saved/> })}
             <section class="plots" class:hidden=view_opts.embed aria-labelledby="plots-title">
                 <h2 id="plots-title">"Against thickness and wind"</h2>
                 <div data-sweeps inner_html=move || shown.with(|sh| sh.outcome.as_ref().map(|o| results::sweeps(o, &scenario.get(), &choice.get())).unwrap_or_default())></div>
@@ -669,7 +675,8 @@ pub fn App() -> impl IntoView {
                     })}
                 </details>
             </section>
-            {move || printing.get().then(|| shown.with(|sh| sh.outcome.as_ref().map(|o| results::report(o, &scenario.get(), &choice.get(), &item_name.get(), &tag.get(), &place.get()))))}
+            {move || summary.get().map(|m| view! { <article class="report summary" data-survey-summary inner_html=m></article> })}
+            {move || (printing.get() && summary.with(Option::is_none)).then(|| shown.with(|sh| sh.outcome.as_ref().map(|o| results::report(o, &scenario.get(), &choice.get(), &item_name.get(), &tag.get(), &place.get()))))}
             <footer class="standing">
                 "Results are engineering estimates from published correlations. Check them before you rely on them; local codes and licensed practice govern any decision about safety."
             </footer>

@@ -238,6 +238,15 @@ fn cross_section(j: &crate::engine::scenario::JobResult, c: &UnitChoice) -> Stri
     chart::svg::section_svg(&faces, &temps, c.get(Dim::Temperature))
 }
 
+/// Now, "2026-12-05 10:05" (UTC), for a printed page.
+pub(super) fn now_utc() -> String {
+    let date = js_sys::Date::new_0()
+        .to_iso_string()
+        .as_string()
+        .unwrap_or_default();
+    date.get(..16).unwrap_or(&date).replace('T', " ")
+}
+
 /// The one-page report, shown only when printing: inputs in use, results, flags, verdicts, the
 /// working's key steps, sources, cautions, the date, the item tag and location (markup from
 /// `markup::report`; the person's name, tag and location are escaped there).
@@ -249,11 +258,7 @@ pub fn report(
     tag: &str,
     place: &str,
 ) -> impl IntoView {
-    let date = js_sys::Date::new_0()
-        .to_iso_string()
-        .as_string()
-        .unwrap_or_default();
-    let date = date.get(..16).unwrap_or(&date).replace('T', " ");
+    let date = now_utc();
     let m = super::markup::report(
         o,
         s,

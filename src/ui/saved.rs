@@ -10,7 +10,7 @@ use crate::engine::chart::svg::esc;
 use crate::engine::scenario::Scenario;
 use crate::engine::store::{self, Loaded, Plan, Saved, Store};
 use crate::engine::survey;
-use crate::engine::units::{Dim, System, UnitChoice};
+use crate::engine::units::{System, UnitChoice};
 
 const KEY: &str = "leeward.saved";
 const UNREADABLE_KEY: &str = "leeward.saved.unreadable";
@@ -213,88 +213,104 @@ fn download(name: &str, mime: &str, text: &str) {
     let _ = web_sys::Url::revoke_object_url(&url);
 }
 
-/// Replace, in `tb`, the rows between the longest common start and end of `before` and `now` (one
-/// markup string a row) with `now`'s rows there.
-fn redraw_changed(tb: &web_sys::Element, before: &[String], now: &[String]) {
+/// How to bring a list of rows from `before` to `now`: keep the first `start` rows and the `end`
+/// rows before the last `drop` of `before` (removed) and the last `add` of `now` (appended);
+/// replace the rows between.
+#[derive(Debug, PartialEq)]
+struct Edit {
+    start: usize,
+    drop: usize,
+    add: usize,
+    end: usize,
+}
+
+fn edit(before: &[String], now: &[String]) -> Edit {
     let start = before.iter().zip(now).take_while(|(a, b)| a == b).count();
-    let end = before[start..]
-        .iter()
-        .rev()
-        .zip(now[start..].iter().rev())
-        .take_while(|(a, b)| a == b)
-        .count();
+    let tail = |b: &[String], n: &[String]| {
+        b.iter()
+            .rev()
+            .zip(n.iter().rev())
+            .take_while(|(x, y)| x == y)
+            .count()
+    };
+    let (bl, nl) = (before.len() - start, now.len() - start);
+    let (drop, add, end) = [(0, 0), (1, 0), (0, 1), (2, 0), (0, 2)]
+        .into_iter()
+        .filter(|&(d, a)| d <= bl && a <= nl)
+        .map(|(d, a)| {
+            let e = tail(&before[start..before.len() - d], &now[start..now.len() - a]);
+            (d, a, e)
+        })
+        .max_by_key(|&(d, a, e)| (e, usize::MAX - d - a))
+        .unwrap_or((0, 0, 0));
+    Edit {
+        start,
+        drop,
+        add,
+        end,
+    }
+}
+
+/// Bring the rows of `tb` from `before` to `now` (one markup string a row), touching as few as it
+/// can: the rows between the longest common start and end are replaced. The list shows a window
+/// of its rows, so an insertion pushes a row off the window's end and a deletion pulls one in:
+/// the common end is also sought with up to two rows left off either list's end, and those are
+/// removed or appended ([`edit`]). A duplicate or a delete then redraws a row or two, not the
+/// window.
+fn redraw_changed(tb: &web_sys::Element, before: &[String], now: &[String]) {
+    let Edit {
+        start,
+        drop,
+        add,
+        end,
+    } = edit(before, now);
     let rows = tb.children();
-    for _ in start..before.len() - end {
+    // The rows pushed off the end.
+    for k in 0..drop {
+        if let Some(r) = rows.item((before.len() - 1 - k) as u32) {
+            r.remove();
+        }
+    }
+    // The changed run.
+    for _ in start..before.len() - drop - end {
         if let Some(r) = rows.item(start as u32) {
             r.remove();
         }
     }
-    let html = now[start..now.len() - end].concat();
-    if !html.is_empty() {
-        let _ = match rows.item(start as u32) {
-            Some(next) => next.insert_adjacent_html("beforebegin", &html),
-            None => tb.insert_adjacent_html("beforeend", &html),
-        };
-    }
+    let insert = |at: usize, html: &str| {
+        if !html.is_empty() {
+            let _ = match rows.item(at as u32) {
+                Some(next) => next.insert_adjacent_html("beforebegin", html),
+                None => tb.insert_adjacent_html("beforeend", html),
+            };
+        }
+    };
+    insert(start, &now[start..now.len() - add - end].concat());
+    // The rows pulled in at the end.
+    insert(now.len() - add, &now[now.len() - add..].concat());
 }
 
 /// One survey row as markup: the item's name (a tap opens it), its tag and place, its figures in
-/// the chosen units, and the actions in a menu; every button says what it does in `data-act`.
+/// the chosen units (`summary::cells`), and the actions in a menu; every button says what it does
+/// in `data-act`.
 fn row_markup(m: &mut String, it: &Saved, res: &survey::Figure, c: &UnitChoice) {
     use std::fmt::Write;
-    let f = |v: f64, d: Dim| crate::engine::units::show(v, c.get(d));
-    let (loss, surface, range, checks) = match res {
-        // An inspected item: its loss and surface as read (the design's are in the item).
-        Ok(r) => (
-            r.inspection.map_or_else(
-                || f(r.q_total, Dim::HeatFlow),
-                |i| format!("{} read", f(i.loss, Dim::HeatFlow)),
-            ),
-            r.inspection.map_or_else(
-                || f(r.surface_temp, Dim::Temperature),
-                |i| format!("{} read", f(i.surface, Dim::Temperature)),
-            ),
-            if r.flags == 0 {
-                "✓".to_string()
-            } else {
-                format!("⚠ {}", r.flags)
-            },
-            // An inspected item: its k ratio and what the defect costs a year.
-            match &r.inspection {
-                Some(i) => format!(
-                    "{} · k {} · {}",
-                    super::answer::failing(&r.verdicts),
-                    f(i.k_ratio, Dim::Fraction),
-                    f(i.excess_cost, Dim::MoneyPerYear)
-                ),
-                None => super::answer::failing(&r.verdicts),
-            },
-        ),
-        // Why, in the person's units, is on the page once the item is opened.
-        Err(_) => (
-            "⚠ not computed: open it to see why".into(),
-            "—".into(),
-            "—".into(),
-            "—".into(),
-        ),
-    };
-    let sub = [it.tag.as_str(), it.location.as_str()]
-        .iter()
-        .filter(|x| !x.is_empty())
-        .cloned()
-        .collect::<Vec<_>>()
-        .join(" · ");
+    let [loss, surface, checks, range] = super::summary::cells(res, c);
     let name = esc(&it.name);
     let _ = write!(
         m,
         r#"<tr data-saved="{name}"><th scope="row"><button type="button" class="item-open" data-open data-act="open" title="Open this item">{name}</button><small>{}</small></th><td data-item-loss data-label="Heat loss">{}</td><td data-label="Surface">{}</td><td data-label="Checks" data-item-checks>{}</td><td data-label="Range">{}</td><td class="item-menu"><details class="menu"><summary aria-label="Actions for {name}">Actions</summary><div class="saved-actions"><button type="button" data-act="open">Open</button><button type="button" data-act="update" title="Store the inputs shown in this item">Update</button><button type="button" data-act="rename" title="Rename to the name typed above">Rename</button><button type="button" data-act="dup">Duplicate</button><button type="button" data-act="delete">Delete</button></div></details></td></tr>"#,
-        esc(&sub),
+        esc(&super::summary::sub(it)),
         esc(&loss),
         esc(&surface),
         esc(&checks),
         esc(&range)
     );
 }
+
+/// How many rows the list shows at first, and adds at each "show more": a phone cannot use a
+/// 1,000-row table, and the browser lays out only the rows shown.
+const PAGE: usize = 100;
 
 #[component]
 pub fn SavedPanel(
@@ -305,6 +321,8 @@ pub fn SavedPanel(
     tag: RwSignal<String>,
     place: RwSignal<String>,
     choice: RwSignal<UnitChoice>,
+    /// The survey summary's markup while it prints (the page shows it in place of the report).
+    summary: RwSignal<Option<String>>,
     on_open: impl Fn(Scenario, System) + Copy + Send + Sync + 'static,
 ) -> impl IntoView {
     let saved = RwSignal::new(Store::default());
@@ -454,15 +472,6 @@ pub fn SavedPanel(
     // moment behind the store while new figures are computed.
     let find =
         move |name: &str| saved.with_untracked(|s| s.items.iter().position(|i| i.name == name));
-    // The list in the order shown; each row is keyed by what it shows, so a change redraws only
-    // the rows it changed (a unit switch updates the figures in place).
-    let sorted = move || {
-        let mut shown = list.get();
-        if by_loss.get() {
-            survey::worst_first(&mut shown);
-        }
-        shown
-    };
     // Every button of a row is handled here, by what it does (`data-act`) and its row's item
     // (`data-saved`: names are unique in the store); the rows themselves are markup.
     let open_item = move |k: &str| {
@@ -497,7 +506,8 @@ pub fn SavedPanel(
                 let mut c = next.items[i].clone();
                 c.name = store::free_name(&next, &c.name);
                 let n = c.name.clone();
-                next.items.push(c);
+                // Beside its original, where the person is looking.
+                next.items.insert(i + 1, c);
                 format!("Duplicated as “{n}”.")
             }
             "rename" => {
@@ -528,21 +538,28 @@ pub fn SavedPanel(
             act_on(&act, &k);
         }
     };
-    // The rows in the order shown, each as markup (user text escaped). Only the rows that
-    // changed are redrawn: the run between the unchanged first and last rows is replaced (a save,
-    // a duplicate, a delete or an update touches one row; a sort or a unit switch all of them),
-    // so the browser lays out one new row of a 1,000-row list, not 1,000.
+    // The rows in the order shown (sorted by reference, nothing cloned), the first `rows_shown`
+    // of them, each as markup (user text escaped). Only the rows that changed are redrawn
+    // (`redraw_changed`): a save, a duplicate, a delete or an update touches a row or two; a sort
+    // or a unit switch all of those shown.
     let drawn = StoredValue::new(Vec::<String>::new());
+    let rows_shown = RwSignal::new(PAGE);
     Effect::new(move |_| {
         let c = choice.get();
-        let now: Vec<String> = sorted()
-            .iter()
-            .map(|(it, res)| {
-                let mut m = String::with_capacity(900);
-                row_markup(&mut m, it, res, &c);
-                m
-            })
-            .collect();
+        let now: Vec<String> = list.with(|l| {
+            let mut rows: Vec<&(Saved, survey::Figure)> = l.iter().collect();
+            if by_loss.get() {
+                survey::worst_first(&mut rows);
+            }
+            rows.iter()
+                .take(rows_shown.get())
+                .map(|(it, res)| {
+                    let mut m = String::with_capacity(900);
+                    row_markup(&mut m, it, res, &c);
+                    m
+                })
+                .collect()
+        });
         if let Ok(Some(tb)) = document().query_selector("[data-saved-list] tbody") {
             drawn.update_value(|before| {
                 redraw_changed(&tb, before, &now);
@@ -551,38 +568,26 @@ pub fn SavedPanel(
         }
     });
     let totals = move || {
-        let c = choice.get();
-        let (n, computed, (q, e, m), (read, xq, xm)) = list.with(|l| {
-            let figures: Vec<survey::Figure> = l.iter().map(|(_, r)| r.clone()).collect();
-            (
-                l.len(),
-                figures.iter().filter(|r| r.is_ok()).count(),
-                survey::totals(
-                    &figures
-                        .iter()
-                        .filter_map(|r| r.clone().ok())
-                        .map(Ok)
-                        .collect::<Vec<_>>(),
-                ),
-                survey::inspection_totals(&figures),
-            )
-        });
-        let u = |v: f64, d: Dim| crate::engine::units::show(v, c.get(d));
-        // An inspection round also totals what its defects lose against design.
-        let excess = (read > 0).then(|| {
-            format!(
-                " · {read} read with infrared: {} and {} over design",
-                u(xq, Dim::HeatFlow),
-                u(xm, Dim::MoneyPerYear)
-            )
-        });
+        let (head, q, rest) = list.with(|l| super::summary::totals(l.iter(), &choice.get()));
         view! {
             <tr class="totals" data-totals>
-                <th scope="row">{if computed < n { format!("Total of {computed} of {n} item(s), the others not computed") } else { format!("Total of {n} item(s)") }}</th>
-                <td data-total-loss>{u(q, Dim::HeatFlow)}</td>
-                <td colspan="4" data-total-excess>{format!("{} · {}{}", u(e, Dim::EnergyPerYear), u(m, Dim::MoneyPerYear), excess.unwrap_or_default())}</td>
+                <th scope="row">{head}</th>
+                <td data-total-loss>{q}</td>
+                <td colspan="4" data-total-excess>{rest}</td>
             </tr>
         }
+    };
+    let count = move || list.with(Vec::len);
+    // The whole survey on paper: built now, shown in place of the one-item report while the
+    // browser prints, and taken away after.
+    let print_summary = move |_| {
+        let date = super::results::now_utc();
+        summary.set(Some(list.with(|l| {
+            super::summary::summary(l, &choice.get_untracked(), &date)
+        })));
+        wasm_bindgen_futures::spawn_local(async {
+            let _ = window().print();
+        });
     };
 
     let text_field = move |id: &'static str, label: &'static str, sig: RwSignal<String>| {
@@ -640,18 +645,84 @@ pub fn SavedPanel(
                 <button type="button" data-action="export-csv" on:click=export_csv>"Export the list as CSV"</button>
                 <label class="file-button">"Import CSV rows"<input type="file" accept=".csv,text/csv" data-action="import-csv" on:change=import_csv/></label>
                 <button type="button" data-action="sort" aria-pressed=move || by_loss.get().to_string() on:click=move |_| by_loss.update(|b| *b = !*b)>"Worst first"</button>
+                <button type="button" data-action="print-summary" on:click=print_summary>"Print the survey summary"</button>
             </div>
             <p class="notice" role="status" data-survey-progress class:hidden=move || progress.with(|p| p.is_none())>
                 {move || progress.get().map(|(done, all)| format!("Computing the survey list: {done} of {all} items…"))}
             </p>
                         <div class="table-wrap" tabindex="0" role="region" aria-label="Survey list (scrolls sideways)">
-                <table class="saved-list" data-saved-list>
+                <table class="saved-list" data-saved-list data-items=move || count().to_string()>
                     <caption>"Survey list: every saved item with its results"</caption>
                     <thead><tr><th scope="col">"Item"</th><th scope="col">"Heat loss"</th><th scope="col">"Surface"</th><th scope="col">"Checks"</th><th scope="col">"Range"</th><th scope="col">"Actions"</th></tr></thead>
                     <tbody on:click=on_list_click></tbody>
                     <tfoot>{totals}</tfoot>
                 </table>
             </div>
+            <div class="actions" data-more class:hidden=move || count() <= rows_shown.get()>
+                <span>{move || format!("Showing {} of {} items.", rows_shown.get().min(count()), count())}</span>
+                <button type="button" data-action="more" on:click=move |_| rows_shown.update(|n| *n += PAGE)>{format!("Show {PAGE} more")}</button>
+                <button type="button" data-action="all" on:click=move |_| rows_shown.set(usize::MAX)>"Show all"</button>
+            </div>
         </section>
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::{edit, Edit};
+
+    /// `edit`'s plan, carried out on a plain list as `redraw_changed` carries it out on the rows.
+    fn apply(before: &[String], now: &[String]) -> (Vec<String>, usize) {
+        let Edit {
+            start,
+            drop,
+            add,
+            end,
+        } = edit(before, now);
+        let mut rows = before.to_vec();
+        rows.truncate(before.len() - drop);
+        let kept_end = rows.split_off(rows.len() - end);
+        rows.truncate(start);
+        let new = &now[start..now.len() - add - end];
+        rows.extend_from_slice(new);
+        rows.extend(kept_end);
+        rows.extend_from_slice(&now[now.len() - add..]);
+        (rows, new.len() + add)
+    }
+
+    fn list(n: usize) -> Vec<String> {
+        (0..n).map(|i| format!("row {i}")).collect()
+    }
+
+    /// Every kind of change a person makes gives the new list, and an insertion or deletion in a
+    /// full window writes one or two rows, not the window.
+    #[test]
+    fn the_rows_follow_every_change_writing_few() {
+        let all = list(300);
+        let window = |l: &[String]| l.iter().take(100).cloned().collect::<Vec<_>>();
+        let before = window(&all);
+        for at in [0, 1, 50, 99, 150] {
+            // A copy beside row `at`.
+            let mut l = all.clone();
+            l.insert(at + 1, "copy".into());
+            let now = window(&l);
+            let (rows, written) = apply(&before, &now);
+            assert_eq!(rows, now, "insert at {at}");
+            assert!(written <= 1, "insert at {at}: {written} rows written");
+            // Row `at` deleted.
+            let mut l = all.clone();
+            l.remove(at);
+            let now = window(&l);
+            let (rows, written) = apply(&before, &now);
+            assert_eq!(rows, now, "delete at {at}");
+            assert!(written <= 1, "delete at {at}: {written} rows written");
+        }
+        // Every row changed (a unit switch), a shorter list, an empty one, from empty.
+        let changed: Vec<String> = before.iter().map(|r| format!("{r} in US")).collect();
+        for now in [changed, list(3), vec![], list(100)] {
+            assert_eq!(apply(&before, &now).0, now);
+            assert_eq!(apply(&now, &before).0, before);
+        }
+        assert_eq!(apply(&[], &list(2)).0, list(2));
     }
 }

@@ -372,10 +372,16 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
 /// `steps` equal steps over 0..=top, with `also` (the operating point) put in its place, so the
 /// plotted curve passes through the point marked on it.
 pub(crate) fn grid_with(top: f64, steps: usize, also: f64) -> Vec<f64> {
-    let mut g: Vec<f64> = (0..=steps).map(|k| top * k as f64 / steps as f64).collect();
+    with_point(
+        (0..=steps).map(|k| top * k as f64 / steps as f64).collect(),
+        also,
+    )
+}
+
+/// The rising grid `g` with `also` put in its place (once; not a negative or non-finite one).
+fn with_point(mut g: Vec<f64>, also: f64) -> Vec<f64> {
     if also.is_finite() && also >= 0.0 && !g.contains(&also) {
-        g.push(also);
-        g.sort_by(|a, b| a.total_cmp(b));
+        g.insert(g.partition_point(|x| *x < also), also);
     }
     g
 }
@@ -385,15 +391,11 @@ pub(crate) fn grid_with(top: f64, steps: usize, also: f64) -> Vec<f64> {
 /// point within 2 % of `top` of it, so the plot neither skips the steep start nor draws two dots.
 pub(crate) fn grid_dense_start(top: f64, steps: usize, also: f64) -> Vec<f64> {
     let n = steps as f64;
-    let mut g: Vec<f64> = (0..=steps)
+    let g: Vec<f64> = (0..=steps)
         .map(|k| top * (k as f64 / n).powi(2))
         .filter(|x| *x == 0.0 || !(also.is_finite() && (x - also).abs() < 0.02 * top))
         .collect();
-    if also.is_finite() && also >= 0.0 && !g.contains(&also) {
-        g.push(also);
-        g.sort_by(|a, b| a.total_cmp(b));
-    }
-    g
+    with_point(g, also)
 }
 
 /// The heat flow (W, whole run or body), surface temperature and convective h of a scenario, without

@@ -26,6 +26,8 @@ pub struct ItemResult {
 /// An item's inspection in the list.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct InspectionFigures {
+    /// The instrument's displayed temperature, K, and the surface corrected from it, K.
+    pub reading: f64,
     pub surface: f64,
     pub k_ratio: f64,
     pub condition: crate::engine::inspect::Condition,
@@ -47,6 +49,7 @@ pub fn evaluate_item(s: &Scenario) -> Result<ItemResult, EngineError> {
         annual_cost: o.annual_cost,
         verdicts: o.verdicts.iter().map(|v| (v.id, v.ok)).collect(),
         inspection: o.inspection.as_ref().map(|i| InspectionFigures {
+            reading: s.ir_reading,
             surface: i.corrected.surface,
             k_ratio: i.k.factor,
             condition: i.condition,
@@ -99,9 +102,9 @@ impl Figures {
 }
 
 /// Sums over the items that computed: heat flow W, energy J/yr, cost per year.
-pub fn totals(results: &[Result<ItemResult, EngineError>]) -> (f64, f64, f64) {
+pub fn totals<'a>(results: impl IntoIterator<Item = &'a Figure>) -> (f64, f64, f64) {
     results
-        .iter()
+        .into_iter()
         .flatten()
         .fold((0.0, 0.0, 0.0), |(q, e, c), r| {
             (q + r.q_total, e + r.annual_energy, c + r.annual_cost)
@@ -111,9 +114,9 @@ pub fn totals(results: &[Result<ItemResult, EngineError>]) -> (f64, f64, f64) {
 /// The inspected items' excess over design, summed: heat flow W and cost per year, and how many
 /// items were inspected (0: the list has no inspection, the totals row says nothing of it). An
 /// item read better than its design adds nothing (it does not pay for another's defect).
-pub fn inspection_totals(results: &[Figure]) -> (usize, f64, f64) {
+pub fn inspection_totals<'a>(results: impl IntoIterator<Item = &'a Figure>) -> (usize, f64, f64) {
     results
-        .iter()
+        .into_iter()
         .flatten()
         .filter_map(|r| r.inspection.as_ref())
         .fold((0, 0.0, 0.0), |(n, q, c), i| {
@@ -128,7 +131,8 @@ pub fn inspection_totals(results: &[Figure]) -> (usize, f64, f64) {
 /// The list worst first: inspected items by their excess cost against design (the money a defect
 /// loses), then every other item by the size of its heat flow; items that could not be computed
 /// last. Stable: equal items keep their order.
-pub fn worst_first<T>(rows: &mut [(T, Figure)]) {
+/// Rows may be the items themselves or references to them (the page sorts references).
+pub fn worst_first<T, R: std::borrow::Borrow<(T, Figure)>>(rows: &mut [R]) {
     let key = |f: &Figure| match f {
         Ok(r) => match &r.inspection {
             Some(i) => (2, i.excess_cost),
@@ -137,7 +141,7 @@ pub fn worst_first<T>(rows: &mut [(T, Figure)]) {
         Err(_) => (0, 0.0),
     };
     rows.sort_by(|a, b| {
-        let (ka, kb) = (key(&a.1), key(&b.1));
+        let (ka, kb) = (key(&a.borrow().1), key(&b.borrow().1));
         kb.0.cmp(&ka.0).then(kb.1.total_cmp(&ka.1))
     });
 }
@@ -189,7 +193,7 @@ mod tests {
     fn totals_add_the_items_that_computed() {
         let rs: Vec<_> = items()
             .iter()
-            .map(|i| evaluate_item(&i.scenario().unwrap().0))
+            .map(|i| evaluate_item(&i.scenario().unwrap().0).map_err(|e| e.to_string()))
             .collect();
         let (q, e, c) = totals(&rs);
         let want: f64 = rs.iter().map(|r| r.as_ref().unwrap().q_total).sum();
@@ -256,7 +260,7 @@ mod tests {
             cost(&rows[4].1) > cost(&rows[2].1),
             "a hotter reading loses more"
         );
-        let (n, q, c) = inspection_totals(&rows.iter().map(|r| r.1.clone()).collect::<Vec<_>>());
+        let (n, q, c) = inspection_totals(rows.iter().map(|r| &r.1));
         assert_eq!(n, 2);
         assert_eq!(c, cost(&rows[2].1) + cost(&rows[4].1));
         let ex = |r: &Figure| r.as_ref().unwrap().inspection.unwrap().excess_loss;

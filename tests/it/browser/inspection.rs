@@ -173,6 +173,68 @@ fn an_infrared_reading_gives_its_card_badge_and_answer_and_a_survey_sorted_by_it
         assert!(wet_loss.ends_with(" read"), "{wet_loss}");
         let totals = text_of(&c, "[data-totals]").await;
         assert!(totals.contains("2 read with infrared"), "{totals}");
+        // The wet row shows the instrument's reading beside the corrected surface.
+        let wet_surface = text_of(&c, "[data-saved=\"Read wet\"] td:nth-of-type(2)").await;
+        assert!(wet_surface.contains("(IR 20.0 °C)"), "{wet_surface}");
+        // The survey summary on paper: every item worst first, the totals, the conditions
+        // counted, on one page for four items (A4); the browser's print dialog is not opened.
+        js(&c, "window.print = () => {}; return true;").await;
+        tap(&c, "[data-action=print-summary]").await;
+        tokio::time::sleep(Duration::from_millis(300)).await;
+        let summary = text_of(&c, "[data-survey-summary]").await;
+        let at = |n: &str| {
+            summary
+                .find(n)
+                .unwrap_or_else(|| panic!("{n} missing: {summary}"))
+        };
+        assert!(
+            at("Read wet") < at("Read mild") && at("Read mild") < at("Plain"),
+            "{summary}"
+        );
+        for want in [
+            "Total of 4 item(s)",
+            "2 read with infrared",
+            "Insulation read with infrared",
+            "(IR 20.0 °C)",
+        ] {
+            assert!(
+                summary.contains(want),
+                "the summary lacks “{want}”: {summary}"
+            );
+        }
+        assert_eq!(
+            js(&c, "return document.querySelectorAll('[data-survey-summary] img, [data-survey-summary] b, [data-report]').length;").await,
+            json!(0),
+            "a name inserted as markup, or the one-item report printed with the summary"
+        );
+        {
+            use fantoccini::wd::{PrintConfiguration, PrintSize};
+            let pdf = c
+                .print(
+                    PrintConfiguration::builder()
+                        .size(PrintSize::A4)
+                        .build()
+                        .unwrap(),
+                )
+                .await
+                .unwrap();
+            assert_eq!(super::saved::pdf_pages(&pdf), 1, "four items take one page");
+        }
+        js(
+            &c,
+            "window.dispatchEvent(new Event('afterprint')); return true;",
+        )
+        .await;
+        tokio::time::sleep(Duration::from_millis(100)).await;
+        assert_eq!(
+            js(
+                &c,
+                "return document.querySelectorAll('[data-survey-summary]').length;"
+            )
+            .await,
+            json!(0),
+            "the summary stays in the page after printing"
+        );
         // A row's buttons still act on their own item: open the wet one.
         tap(&c, "[data-saved='Read wet'] [data-open]").await;
         tokio::time::sleep(Duration::from_millis(300)).await;

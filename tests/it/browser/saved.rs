@@ -67,7 +67,7 @@ fn layouts_fit_and_pass_axe_core() {
 }
 
 /// Pages in a PDF: page objects are written as "/Type /Page" (the tree as "/Type /Pages").
-fn pdf_pages(pdf: &[u8]) -> usize {
+pub(super) fn pdf_pages(pdf: &[u8]) -> usize {
     let pat = b"/Type /Page";
     pdf.windows(pat.len() + 1)
         .filter(|w| &w[..pat.len()] == pat && w[pat.len()] != b's')
@@ -251,12 +251,27 @@ fn saved_work_survives_travels_and_prints() {
         assert_eq!(
             js(
                 &c,
-                "return document.querySelectorAll('[data-saved]').length;"
+                "return document.querySelector('[data-saved-list]').dataset.items;"
             )
             .await,
-            json!(1000)
+            json!("1000")
         );
         assert!(text_of(&c, "[data-totals]").await.contains("1000 item"));
+        // The first 100 rows are laid out; the rest are a tap away, 100 at a time or all.
+        let rows = "return document.querySelectorAll('[data-saved]').length;";
+        assert_eq!(js(&c, rows).await, json!(100));
+        tap(&c, "[data-action=more]").await;
+        assert_eq!(js(&c, rows).await, json!(200));
+        tap(&c, "[data-action=all]").await;
+        assert_eq!(js(&c, rows).await, json!(1000));
+        assert!(
+            js(
+                &c,
+                "return document.querySelector('[data-more]').classList.contains('hidden');"
+            )
+            .await
+                == json!(true)
+        );
 
         // A corrupt store: the page opens, says so, and keeps the text.
         js(
