@@ -334,25 +334,34 @@ pub fn SavedPanel(
 
     // Every change to the saved work goes through here: refused while an unreadable store is
     // held (it would be overwritten), and committed to the page only once storage has it.
+    // What the last change to a row replaced, while it can still be undone (a tap on Delete or
+    // Update is easy to make by mistake with one thumb), and a count so an older timer does not
+    // take away a newer offer.
+    let undo = RwSignal::new(None::<(Store, u32)>);
     let commit = move |next: Store, done: String| {
         if !ready.get_untracked() {
             note.set(Some(
                 "Not saved yet: the saved work is still being read; try again in a moment.".into(),
             ));
-            return;
+            return false;
         }
         if held.with_untracked(Option::is_some) {
             note.set(Some("Not saved: the saved work that could not be read is still stored and would be overwritten. Download it first (below).".into()));
-            return;
+            return false;
         }
         match save(&next) {
             Ok(()) => {
                 saved.set(next);
                 note.set(Some(done));
+                undo.set(None);
+                true
             }
-            Err(e) => note.set(Some(format!(
-                "Not saved: {e}. Export a file to keep this work."
-            ))),
+            Err(e) => {
+                note.set(Some(format!(
+                    "Not saved: {e}. Export a file to keep this work."
+                )));
+                false
+            }
         }
     };
     let save_now = move |_| {
@@ -488,7 +497,8 @@ pub fn SavedPanel(
         if act == "open" {
             return open_item(k);
         }
-        let mut next = saved.get_untracked();
+        let before = saved.get_untracked();
+        let mut next = before.clone();
         let Some(i) = find(k) else { return };
         let done = match act {
             "update" => {
@@ -521,7 +531,21 @@ pub fn SavedPanel(
             }
             _ => return,
         };
-        commit(next, done);
+        if commit(next, done) {
+            // Offered for 15 s, beside the thumb wherever the list is scrolled.
+            let id = js_sys::Date::now() as u32;
+            undo.set(Some((before, id)));
+            set_timeout(
+                move || {
+                    undo.update(|u| {
+                        if u.as_ref().is_some_and(|(_, n)| *n == id) {
+                            *u = None
+                        }
+                    })
+                },
+                std::time::Duration::from_secs(15),
+            );
+        }
     };
     let on_list_click = move |ev: leptos::ev::MouseEvent| {
         let button = ev
@@ -535,6 +559,10 @@ pub fn SavedPanel(
             .flatten()
             .and_then(|r| r.get_attribute("data-saved"));
         if let (Some(act), Some(k)) = (b.get_attribute("data-act"), item) {
+            // The row's menu closes once its action is taken.
+            if let Ok(Some(menu)) = b.closest("details") {
+                let _ = menu.remove_attribute("open");
+            }
             act_on(&act, &k);
         }
     };
@@ -567,15 +595,15 @@ pub fn SavedPanel(
             });
         }
     });
+    // The totals row as markup (its three texts escaped).
     let totals = move || {
         let (head, q, rest) = list.with(|l| super::summary::totals(l.iter(), &choice.get()));
-        view! {
-            <tr class="totals" data-totals>
-                <th scope="row">{head}</th>
-                <td data-total-loss>{q}</td>
-                <td colspan="4" data-total-excess>{rest}</td>
-            </tr>
-        }
+        format!(
+            r#"<tr class="totals" data-totals><th scope="row">{}</th><td data-total-loss>{}</td><td colspan="4" data-total-excess>{}</td></tr>"#,
+            esc(&head),
+            esc(&q),
+            esc(&rest)
+        )
     };
     let count = move || list.with(Vec::len);
     // The whole survey on paper: built now, shown in place of the one-item report while the
@@ -644,7 +672,7 @@ pub fn SavedPanel(
             <div class="actions">
                 <button type="button" data-action="export-csv" on:click=export_csv>"Export the list as CSV"</button>
                 <label class="file-button">"Import CSV rows"<input type="file" accept=".csv,text/csv" data-action="import-csv" on:change=import_csv/></label>
-                <button type="button" data-action="sort" aria-pressed=move || by_loss.get().to_string() on:click=move |_| by_loss.update(|b| *b = !*b)>"Worst first"</button>
+                <button type="button" data-action="sort" title="Items read with infrared by what their defects cost a year over design, then the others by heat loss" aria-pressed=move || by_loss.get().to_string() on:click=move |_| by_loss.update(|b| *b = !*b)>"Worst first"</button>
                 <button type="button" data-action="print-summary" on:click=print_summary>"Print the survey summary"</button>
             </div>
             <p class="notice" role="status" data-survey-progress class:hidden=move || progress.with(|p| p.is_none())>
@@ -655,12 +683,20 @@ pub fn SavedPanel(
                     <caption>"Survey list: every saved item with its results"</caption>
                     <thead><tr><th scope="col">"Item"</th><th scope="col">"Heat loss"</th><th scope="col">"Surface"</th><th scope="col">"Checks"</th><th scope="col">"Range"</th><th scope="col">"Actions"</th></tr></thead>
                     <tbody on:click=on_list_click></tbody>
-                    <tfoot>{totals}</tfoot>
+                    <tfoot inner_html=totals></tfoot>
                 </table>
+            </div>
+            <div class="undo-bar" role="status" data-undo class:hidden=move || undo.with(Option::is_none)>
+                <span>{move || note.get()}</span>
+                <button type="button" data-action="undo" on:click=move |_| {
+                    if let Some((before, _)) = undo.get_untracked() {
+                        commit(before, "Undone: the list is as it was.".into());
+                    }
+                }>"Undo"</button>
             </div>
             <div class="actions" data-more class:hidden=move || count() <= rows_shown.get()>
                 <span>{move || format!("Showing {} of {} items.", rows_shown.get().min(count()), count())}</span>
-                <button type="button" data-action="more" on:click=move |_| rows_shown.update(|n| *n += PAGE)>{format!("Show {PAGE} more")}</button>
+                <button type="button" data-action="more" on:click=move |_| rows_shown.update(|n| *n += PAGE)>{move || format!("Show {} more", PAGE.min(count().saturating_sub(rows_shown.get())))}</button>
                 <button type="button" data-action="all" on:click=move |_| rows_shown.set(usize::MAX)>"Show all"</button>
             </div>
         </section>

@@ -173,6 +173,19 @@ fn an_infrared_reading_gives_its_card_badge_and_answer_and_a_survey_sorted_by_it
         assert!(wet_loss.ends_with(" read"), "{wet_loss}");
         let totals = text_of(&c, "[data-totals]").await;
         assert!(totals.contains("2 read with infrared"), "{totals}");
+        // The list fits its panel at a tablet upright and on its side and on a phone: no column
+        // pushed out of sight (an inspected row's checks are the longest text it holds).
+        for (w, h) in [(768u32, 1024u32), (1024, 768), (360, 740)] {
+            c.set_window_size(w, h).await.unwrap();
+            tokio::time::sleep(Duration::from_millis(300)).await;
+            let fit = js(&c, "const t = document.querySelector('[data-saved-list]'); return [t.scrollWidth, t.parentElement.clientWidth];").await;
+            assert!(
+                fit[0].as_u64() <= fit[1].as_u64(),
+                "{w}×{h}: the survey list is {} px wide in {} px",
+                fit[0],
+                fit[1]
+            );
+        }
         // The wet row shows the instrument's reading beside the corrected surface.
         let wet_surface = text_of(&c, "[data-saved=\"Read wet\"] td:nth-of-type(2)").await;
         assert!(wet_surface.contains("(IR 20.0 °C)"), "{wet_surface}");
@@ -234,6 +247,26 @@ fn an_infrared_reading_gives_its_card_badge_and_answer_and_a_survey_sorted_by_it
             .await,
             json!(0),
             "the summary stays in the page after printing"
+        );
+        // A delete made by mistake is undone from the bar at the bottom of the window: the item
+        // is back in its place and in storage.
+        let rows =
+            "return [...document.querySelectorAll('[data-saved]')].map(r => r.dataset.saved);";
+        let before = js(&c, rows).await;
+        tap(&c, "[data-saved='Read mild'] [data-act=delete]").await;
+        tokio::time::sleep(Duration::from_millis(300)).await;
+        assert_eq!(js(&c, rows).await.as_array().unwrap().len(), 3);
+        assert_eq!(
+            js(&c, "return getComputedStyle(document.querySelector('[data-undo]')).display !== 'none' && document.querySelector('[data-undo]').textContent.includes('Read mild');").await,
+            json!(true),
+            "no undo offered beside the thumb"
+        );
+        tap(&c, "[data-action=undo]").await;
+        tokio::time::sleep(Duration::from_millis(300)).await;
+        assert_eq!(js(&c, rows).await, before);
+        assert_eq!(
+            js(&c, "return JSON.parse(localStorage.getItem('leeward.saved')).scenarios.some(s => s.name === 'Read mild');").await,
+            json!(true)
         );
         // A row's buttons still act on their own item: open the wet one.
         tap(&c, "[data-saved='Read wet'] [data-open]").await;
