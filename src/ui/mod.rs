@@ -7,6 +7,7 @@ mod answer;
 mod markup;
 mod pickers;
 mod results;
+mod rows;
 mod saved;
 mod shapes;
 mod start;
