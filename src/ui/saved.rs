@@ -234,12 +234,13 @@ pub fn SavedPanel(
     let ready = RwSignal::new(false);
     let pending: RwSignal<Option<(Store, Plan)>> = RwSignal::new(None);
 
-    // Every change to the saved work goes through here: refused while an unreadable store is
-    // held (it would be overwritten), and committed to the page only once storage has it.
     // What the last change to a row replaced, while it can still be undone (a tap on Delete or
-    // Update is easy to make by mistake with one thumb), and a count so an older timer does not
+    // Update is easy to make by mistake with one thumb), with a stamp so an older timer does not
     // take away a newer offer.
     let undo = RwSignal::new(None::<(Store, u32)>);
+    // Every change to the saved work goes through here: refused while an unreadable store is
+    // held (it would be overwritten), and committed to the page only once storage has it; true
+    // when it was.
     let commit = move |next: Store, done: String| {
         if !ready.get_untracked() {
             note.set(Some(
