@@ -28,6 +28,10 @@ pub(crate) fn as_read(verdicts: &mut [Verdict], s: &Scenario, i: &Inspection, de
     let r = &i.ranges.surface;
     let (lo, hi) = (r.lo.min(i.corrected.surface), r.hi.max(i.corrected.surface));
     for v in verdicts.iter_mut() {
+        if v.id == "saving" {
+            saving_as_read(v, (i.actual * s.run()).abs());
+            continue;
+        }
         let (bad, figure) = match v.id {
             "touch" => (
                 hi > s.touch_limit,
@@ -73,6 +77,50 @@ pub(crate) fn as_read(verdicts: &mut [Verdict], s: &Scenario, i: &Inspection, de
             }
         }
     }
+}
+
+/// The card of the insulation against bare, judged again on the reading: what the line loses as
+/// read (`read`, W over the run, a magnitude) against its bare loss; the design's figures stay,
+/// named as the design's (a walk found "✓ saved …" beside insulation read as wet).
+fn saving_as_read(v: &mut Verdict, read: f64) {
+    let Some(&(bare_label, bare, _)) = v.figures.first() else {
+        return;
+    };
+    let gain = bare_label == "bare gain";
+    for f in v.figures.iter_mut().skip(1) {
+        f.0 = match f.0 {
+            "insulated loss" => "insulated loss as designed",
+            "insulated gain" => "insulated gain as designed",
+            "saved" => "saved as designed",
+            "gain avoided" => "gain avoided as designed",
+            "energy saved" => "energy saved as designed",
+            "money saved" => "money saved as designed",
+            other => other,
+        };
+    }
+    let (read_label, saved_label) = if gain {
+        ("gain as read", "gain avoided as read")
+    } else {
+        ("loss as read", "saved as read")
+    };
+    v.figures.splice(
+        1..1,
+        [
+            (read_label, read, Dim::HeatFlow),
+            (saved_label, bare - read, Dim::HeatFlow),
+        ],
+    );
+    let cuts = read < bare;
+    v.summary = format!(
+        "As read: {} As designed: {}",
+        if cuts {
+            "the insulation still cuts it, by what the reading shows."
+        } else {
+            "the insulation does not cut it."
+        },
+        v.summary
+    );
+    v.ok = v.ok && cuts;
 }
 
 /// A k ratio below this is not better insulation but a reading or an input to check (a threshold

@@ -210,3 +210,35 @@ fn a_reading_over_the_touch_limit_fails_the_touch_card() {
         t.summary
     );
 }
+
+/// The card of the insulation against bare speaks of the line as read, not only as designed: read
+/// wet, it saves less than designed by the excess the reading shows; the design's figures stay,
+/// named as the design's (a walk found "✓ … saved" beside insulation read as likely wet).
+#[test]
+fn the_saving_card_says_what_the_insulation_saves_as_read() {
+    let mut s = reading();
+    s.process_temp = 423.15;
+    s.ir_emissivity = s.emissivity;
+    s.ir_reading = 300.15;
+    let o = evaluate(&s).unwrap();
+    let i = o.inspection.as_ref().unwrap();
+    let card = o
+        .verdicts
+        .iter()
+        .find(|v| v.id == "saving")
+        .expect("a saving card");
+    let fig = |l: &str| card.figures.iter().find(|f| f.0 == l).map(|f| f.1);
+    let (bare, read, saved_read, saved_design) = (
+        fig("bare loss").unwrap(),
+        fig("loss as read").unwrap(),
+        fig("saved as read").unwrap(),
+        fig("saved as designed").unwrap(),
+    );
+    assert!(card.summary.starts_with("As read:"), "{}", card.summary);
+    // The reading is hotter than the design's surface: more is lost than designed, so less is
+    // saved, and the two savings differ by the excess loss the inspection reports.
+    assert!(i.corrected.surface > i.design_surface);
+    assert!(read > bare - saved_design && saved_read < saved_design);
+    assert!((saved_design - saved_read - i.excess_total).abs() <= 1e-6 * bare);
+    assert!(fig("saved").is_none() && fig("energy saved as designed").is_some());
+}
