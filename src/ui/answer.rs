@@ -9,7 +9,7 @@ use crate::engine::units::{self, Dim, UnitChoice};
 
 /// The verdicts that earn a badge, in the order a technician asks about them, with short names
 /// (the card's title is the long one).
-pub(super) const BADGES: [(&str, &str); 7] = [
+const BADGES: [(&str, &str); 7] = [
     ("insulation", "Insulation"),
     ("touch", "Touch"),
     ("dew", "Sweat"),

@@ -600,7 +600,6 @@ pub fn SavedPanel(
             <div class="actions" data-more class:hidden=move || count() <= rows_shown.get()>
                 <span>{move || format!("Showing {} of {} items.", rows_shown.get().min(count()), count())}</span>
                 <button type="button" data-action="more" on:click=move |_| rows_shown.update(|n| *n += PAGE)>{move || format!("Show {} more", PAGE.min(count().saturating_sub(rows_shown.get())))}</button>
-                <button type="button" data-action="all" on:click=move |_| rows_shown.set(usize::MAX)>"Show all"</button>
             </div>
         </section>
     }

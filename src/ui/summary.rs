@@ -158,27 +158,6 @@ pub fn summary(rows: &[(Saved, Figure)], c: &UnitChoice, date: &str) -> String {
             pct(DEGRADED_MAX)
         );
     }
-    // How many items each check needs attention on, by the names of the page's badges.
-    let attention: Vec<String> = super::answer::BADGES
-        .iter()
-        .filter_map(|(id, name)| {
-            let n = rows
-                .iter()
-                .filter(|(_, r)| {
-                    r.as_ref()
-                        .is_ok_and(|r| r.verdicts.iter().any(|(v, ok)| v == id && !ok))
-                })
-                .count();
-            (n > 0).then(|| format!("{name} {n}"))
-        })
-        .collect();
-    if !attention.is_empty() {
-        let _ = write!(
-            m,
-            r#"<p class="meta">Items needing attention, by check: {}.</p>"#,
-            esc(&attention.join(", "))
-        );
-    }
     m.push_str(r#"<p class="meta">Results are engineering estimates from published correlations; each item's one-page report gives its inputs, working and cautions. Local codes and licensed practice govern any decision about safety.</p>"#);
     m
 }
@@ -221,16 +200,6 @@ mod tests {
         assert!(
             !m.contains("Insulation read with infrared"),
             "no inspection, no counts: {m}"
-        );
-        // Both lines run above the touch limit (65 °C against the demo's 60 °C).
-        assert!(
-            m.contains("Items needing attention, by check: Touch 2."),
-            "{m}"
-        );
-        // Both lines run above the touch limit (65 °C against the demo's 60 °C).
-        assert!(
-            m.contains("Items needing attention, by check: Touch 2."),
-            "{m}"
         );
         assert_eq!(m.matches("<tr>").count(), 4, "head, two items, totals");
         assert_eq!(m.matches('<').count(), m.matches('>').count());
