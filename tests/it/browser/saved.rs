@@ -248,14 +248,21 @@ fn saved_work_survives_travels_and_prints() {
         .unwrap();
         c.refresh().await.unwrap();
         wait_rendered(&c).await;
-        assert_eq!(
-            js(
-                &c,
-                "return document.querySelector('[data-saved-list]').dataset.items;"
-            )
-            .await,
-            json!("1000")
-        );
+        // The survey is worked out in slices after the first result: wait for all of it.
+        let t0 = Instant::now();
+        while js(
+            &c,
+            "return document.querySelector('[data-saved-list]').dataset.items;",
+        )
+        .await
+            != json!("1000")
+        {
+            assert!(
+                t0.elapsed() < Duration::from_secs(60),
+                "the 1,000-item list never showed"
+            );
+            tokio::time::sleep(Duration::from_millis(50)).await;
+        }
         assert!(text_of(&c, "[data-totals]").await.contains("1000 item"));
         // The first 100 rows are laid out; the rest are a tap away, 100 at a time.
         let rows = "return document.querySelectorAll('[data-saved]').length;";
