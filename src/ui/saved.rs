@@ -238,6 +238,7 @@ pub fn SavedPanel(
     // Update is easy to make by mistake with one thumb), with a stamp so an older timer does not
     // take away a newer offer.
     let undo = RwSignal::new(None::<(Store, u32)>);
+    let offers = StoredValue::new(0u32);
     // Every change to the saved work goes through here: refused while an unreadable store is
     // held (it would be overwritten), and committed to the page only once storage has it; true
     // when it was.
@@ -436,7 +437,8 @@ pub fn SavedPanel(
         };
         if commit(next, done) {
             // Offered for 15 s, beside the thumb wherever the list is scrolled.
-            let id = js_sys::Date::now() as u32;
+            offers.update_value(|n| *n = n.wrapping_add(1));
+            let id = offers.get_value();
             undo.set(Some((before, id)));
             set_timeout(
                 move || {
