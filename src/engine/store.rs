@@ -75,6 +75,84 @@ pub struct File<'a> {
     unreadable: &'a [Value],
 }
 
+/// The entries of the last text written, each with its own text, in order. A change to a long
+/// list writes only the entries between the unchanged start and the unchanged end (an edit, an
+/// insertion, a deletion: one entry), and the file's text is put together from the parts.
+#[derive(Debug, Default)]
+pub struct Written(Vec<(Saved, String)>);
+
+impl Written {
+    /// Bring the written entries to `items`, writing each entry not already written with
+    /// `write` (its text, or `None` when it could not be written and read back). Returns how
+    /// many were written; on `None` nothing has changed.
+    pub fn update(
+        &mut self,
+        items: &[Saved],
+        write: &mut dyn FnMut(&Saved) -> Option<String>,
+    ) -> Option<usize> {
+        let old = &self.0;
+        let same = |(i, (k, _)): (&Saved, &(Saved, String))| i == k;
+        let head = items.iter().zip(old).take_while(|&p| same(p)).count();
+        let tail = items[head..]
+            .iter()
+            .rev()
+            .zip(old[head..].iter().rev())
+            .take_while(|&p| same(p))
+            .count();
+        let mut new = Vec::new();
+        for i in &items[head..items.len() - tail] {
+            new.push((i.clone(), write(i)?));
+        }
+        let n = new.len();
+        let end = old.len() - tail;
+        self.0.splice(head..end, new);
+        Some(n)
+    }
+
+    /// Write ahead, while the page is idle, the entries of `items` not yet written, from the
+    /// first that differs, for as long as `more()` allows; true when every entry is written (or
+    /// one could not be, which the next [`Written::update`] reports).
+    pub fn extend(
+        &mut self,
+        items: &[Saved],
+        write: &mut dyn FnMut(&Saved) -> Option<String>,
+        more: &mut dyn FnMut() -> bool,
+    ) -> bool {
+        let head = items.iter().zip(&self.0).take_while(|(i, (k, _))| i == &k).count();
+        self.0.truncate(head);
+        for i in &items[head..] {
+            if !more() {
+                return false;
+            }
+            let Some(t) = write(i) else { return true };
+            self.0.push((i.clone(), t));
+        }
+        true
+    }
+
+    /// The file's text with the `unreadable` list's text: exactly what serialising [`file`]
+    /// whole writes (tested against `serde_json`).
+    pub fn text(&self, unreadable: &str) -> String {
+        let mut t = format!(r#"{{"format":"{FORMAT}","version":{VERSION},"scenarios":["#);
+        for (k, (_, e)) in self.0.iter().enumerate() {
+            if k > 0 {
+                t.push(',');
+            }
+            t.push_str(e);
+        }
+        t + "],\"unreadable\":" + unreadable + "}"
+    }
+}
+
+/// Whether `v`, an entry read back, holds exactly `i` (compared as written).
+pub fn reads_as(i: &Saved, v: &Value) -> bool {
+    let t = |k: &str| v.get(k).and_then(Value::as_str);
+    t("name") == Some(i.name.as_str())
+        && t("tag") == Some(i.tag.as_str())
+        && t("location") == Some(i.location.as_str())
+        && t("link") == Some(i.link.as_str())
+}
+
 pub fn file(s: &Store) -> File<'_> {
     File {
         format: FORMAT,
@@ -102,11 +180,8 @@ pub fn admissible(text_len: usize, text: &str) -> Result<(), String> {
     Ok(())
 }
 
-/// Check a write before it is committed: the text (of `text_len` characters) is no longer than
-/// the reader accepts, and `back` — the text parsed again — holds the very same entries (compared
-/// as written; the links were checked when they were made or read). A write that fails is refused
-/// with the reason; the caller then changes nothing and offers an export instead.
-pub fn verify(s: &Store, text_len: usize, back: Result<Value, String>) -> Result<(), String> {
+/// A text of `text_len` characters is no longer than the reader accepts.
+pub fn verify_length(text_len: usize) -> Result<(), String> {
     if text_len > MAX_TEXT {
         return Err(format!(
             "the saved work would be {:.1} MB, more than the {:.0} MB this page can read back",
@@ -114,16 +189,19 @@ pub fn verify(s: &Store, text_len: usize, back: Result<Value, String>) -> Result
             MAX_TEXT as f64 / (1024.0 * 1024.0)
         ));
     }
+    Ok(())
+}
+
+/// Check a write before it is committed: the text (of `text_len` characters) is no longer than
+/// the reader accepts, and `back` — the text parsed again — holds the very same entries (compared
+/// as written; the links were checked when they were made or read). A write that fails is refused
+/// with the reason; the caller then changes nothing and offers an export instead.
+pub fn verify(s: &Store, text_len: usize, back: Result<Value, String>) -> Result<(), String> {
+    verify_length(text_len)?;
     let same = back.ok().is_some_and(|v| {
         let list = v.get("scenarios").and_then(Value::as_array).unwrap_or(&[]);
         list.len() == s.items.len()
-            && list.iter().zip(&s.items).all(|(e, i)| {
-                let t = |k: &str| e.get(k).and_then(Value::as_str);
-                t("name") == Some(i.name.as_str())
-                    && t("tag") == Some(i.tag.as_str())
-                    && t("location") == Some(i.location.as_str())
-                    && t("link") == Some(i.link.as_str())
-            })
+            && list.iter().zip(&s.items).all(|(e, i)| reads_as(i, e))
             && v.get("unreadable").and_then(Value::as_array) == Some(s.unreadable.as_slice())
     });
     if same {
@@ -413,6 +491,81 @@ mod tests {
                 Saved::new("Boiler room \"B\" <4in>", "", "", &s2, System::Us),
             ],
             unreadable: vec![],
+        }
+    }
+
+    /// The text the page puts together from entries written one at a time is, to the byte, the
+    /// file `serde_json` (crates.io) writes whole, after any insertion, deletion or edit at any
+    /// place; only the entries that changed are written again; a refused entry changes nothing.
+    #[test]
+    fn a_file_assembled_from_its_entries_is_the_file_written_whole() {
+        let mut s = sample();
+        s.items.push(Saved::new("tab\tnew\nline \u{1} é 漢 🙂 \\", "t\"", "<&>", &DEMO, System::Si));
+        s.unreadable = vec![Value::Number(1.5e-7), Value::String("kept \"as\" was".into()), Value::Null];
+        let mut w = Written::default();
+        let mut write = |i: &Saved| {
+            let t = serde_json::to_string(i).unwrap();
+            let v: Value = serde_json::from_str(&t).unwrap();
+            reads_as(i, &v).then_some(t)
+        };
+        let unreadable = serde_json::to_string(&s.unreadable).unwrap();
+        assert_eq!(w.update(&s.items, &mut write), Some(3));
+        assert_eq!(w.text(&unreadable), to_json(&s));
+        assert_eq!(w.update(&s.items, &mut write), Some(0));
+        for at in 0..=s.items.len() {
+            let mut t = s.clone();
+            t.items.insert(at, Saved::new(&format!("new {at}"), "", "", &DEMO, System::Us));
+            assert_eq!(w.update(&t.items, &mut write), Some(1), "insert at {at}");
+            assert_eq!(w.text(&unreadable), to_json(&t), "insert at {at}");
+            t.items.remove((at + 1) % t.items.len());
+            assert_eq!(w.update(&t.items, &mut write), Some(0), "delete after {at}");
+            assert_eq!(w.text(&unreadable), to_json(&t), "delete after {at}");
+            if let Some(e) = t.items.get_mut(at.min(2)) {
+                e.tag.push('x');
+            }
+            assert_eq!(w.update(&t.items, &mut write), Some(1), "edit near {at}");
+            assert_eq!(w.text(&unreadable), to_json(&t), "edit near {at}");
+            let before = w.text(&unreadable);
+            t.items[0].name.push('y');
+            assert_eq!(w.update(&t.items, &mut |_| None), None);
+            assert_eq!(w.text(&unreadable), before, "a refused write changes nothing");
+            assert_eq!(w.update(&s.items, &mut write).map(|n| n <= 3), Some(true));
+            assert_eq!(w.text(&unreadable), to_json(&s));
+        }
+        // Written ahead in pieces (three entries per piece), the next change writes one entry.
+        w = Written::default();
+        let mut t = s.clone();
+        for k in 0..10 {
+            t.items.push(Saved::new(&format!("more {k}"), "", "", &DEMO, System::Si));
+        }
+        let mut pieces = 0;
+        while !w.extend(&t.items, &mut write, &mut {
+            let mut budget = 3;
+            move || { budget -= 1; budget >= 0 }
+        }) {
+            pieces += 1;
+        }
+        assert_eq!(pieces, 4);
+        t.items.remove(5);
+        assert_eq!(w.update(&t.items, &mut write), Some(0));
+        t.items[7].location.push('z');
+        assert_eq!(w.update(&t.items, &mut write), Some(1));
+        assert_eq!(w.text(&unreadable), to_json(&t));
+        w = Written::default();
+        assert_eq!(w.update(&[], &mut write), Some(0));
+        assert_eq!(w.text("[]"), to_json(&Store::default()));
+    }
+
+    /// An entry read back must hold every field as written.
+    #[test]
+    fn an_entry_reads_as_written_only_when_every_field_is_the_same() {
+        let i = &sample().items[1];
+        let v: Value = serde_json::from_str(&serde_json::to_string(i).unwrap()).unwrap();
+        assert!(reads_as(i, &v));
+        for k in 0..4 {
+            let mut j = i.clone();
+            [&mut j.name, &mut j.tag, &mut j.location, &mut j.link][k].push('x');
+            assert!(!reads_as(&j, &v), "field {k}");
         }
     }
 

@@ -39,11 +39,10 @@ fn read_text(text: &str) -> Result<Loaded, String> {
     store::read(parse_text(text).map_err(|e| format!("not a saved-work file: {e}"))?)
 }
 
-/// The saved-work file as text through the browser's `JSON.stringify` (indented for a file a
-/// person may open, compact for storage).
-fn file_text(s: &Store, indent: bool) -> Result<String, String> {
-    use serde::Serialize;
-    let v = store::file(s)
+/// A value's JSON text through the browser's `JSON.stringify` (indented with one space when
+/// `indent`, for a file a person may open).
+fn json_text<T: serde::Serialize + ?Sized>(v: &T, indent: bool) -> Result<String, String> {
+    let v = v
         .serialize(&serde_wasm_bindgen::Serializer::json_compatible())
         .map_err(|e| e.to_string())?;
     let t = if indent {
@@ -54,11 +53,70 @@ fn file_text(s: &Store, indent: bool) -> Result<String, String> {
     t.map(String::from).map_err(|e| js_message(&e))
 }
 
-/// The text to store for `s`, checked before anything is written (`store::verify`).
+thread_local! {
+    /// The entries of the last text written, each written and read back (`checked_text`).
+    static WRITTEN: std::cell::RefCell<store::Written> = Default::default();
+}
+
+/// One entry's text, written and read back through the browser's JSON; `None` when it would
+/// not read back as written.
+fn entry_text(i: &Saved) -> Option<String> {
+    let t = json_text(i, false).ok()?;
+    parse_text(&t)
+        .is_ok_and(|v| store::reads_as(i, &v))
+        .then_some(t)
+}
+
+/// Write ahead, about 25 ms at a time while the page is idle, the entries a save would write
+/// (`store::Written::extend`), so that the first change to a long list writes only itself.
+fn write_ahead(gen: u64, generation: StoredValue<u64>, saved: RwSignal<Store>) {
+    if generation.get_value() != gen {
+        return;
+    }
+    let t0 = js_sys::Date::now();
+    let done = saved.with_untracked(|s| {
+        WRITTEN.with_borrow_mut(|w| {
+            w.extend(&s.items, &mut entry_text, &mut || {
+                js_sys::Date::now() - t0 < 25.0
+            })
+        })
+    });
+    if !done {
+        set_timeout(
+            move || write_ahead(gen, generation, saved),
+            std::time::Duration::ZERO,
+        );
+    }
+}
+
+/// The text to store for `s`, checked before anything is written: each entry not written before
+/// is written and read back through the browser's JSON (`store::reads_as`), the unreadable list
+/// likewise, and the whole text is read again by `JSON.parse`, which must find every entry
+/// (`store::verify` makes the same check on a whole file at once).
 fn checked_text(s: &Store) -> Result<String, String> {
-    let text = file_text(s, false)?;
-    store::verify(s, text.len(), parse_text(&text))?;
-    Ok(text)
+    let refused = || "the saved work would not read back as written".to_string();
+    WRITTEN
+        .with_borrow_mut(|w| w.update(&s.items, &mut entry_text))
+        .ok_or_else(refused)?;
+    let unreadable = json_text(&s.unreadable, false)?;
+    if parse_text(&unreadable)
+        .ok()
+        .is_none_or(|v| v.as_array() != Some(s.unreadable.as_slice()))
+    {
+        return Err(refused());
+    }
+    let text = WRITTEN.with_borrow(|w| w.text(&unreadable));
+    store::verify_length(text.len())?;
+    let count = js_sys::JSON::parse(&text)
+        .ok()
+        .and_then(|v| js_sys::Reflect::get(&v, &"scenarios".into()).ok())
+        .and_then(|l| l.dyn_into::<js_sys::Array>().ok())
+        .map(|l| l.length() as usize);
+    if count == Some(s.items.len()) {
+        Ok(text)
+    } else {
+        Err(refused())
+    }
 }
 
 /// What opening the store found.
@@ -108,6 +166,7 @@ fn load() -> Opened {
 
 /// Write the store: checked first (size, read-back), written, then read back from storage. On any
 /// failure nothing has changed and the reason is returned.
+#[inline(never)]
 fn save(s: &Store) -> Result<(), String> {
     let st = storage().ok_or("no storage in this browser")?;
     let text = checked_text(s)?;
@@ -158,6 +217,7 @@ fn compute_list(
         progress.set(None);
         list.set(shown);
         mark("leeward-survey-shown");
+        write_ahead(gen, generation, saved);
     } else {
         let known = figures.with_value(|f| links.iter().filter(|l| f.get(l).is_some()).count());
         progress.set(Some((known, links.len())));
@@ -280,7 +340,7 @@ pub fn SavedPanel(
         ));
         commit(next, format!("Saved as “{n}”."));
     };
-    let export = move |_| match file_text(&saved.get_untracked(), true) {
+    let export = move |_| match json_text(&store::file(&saved.get_untracked()), true) {
         Ok(text) => download("leeward-saved-work.json", "application/json", &text),
         Err(e) => note.set(Some(format!("Not exported: {e}."))),
     };
