@@ -193,15 +193,20 @@ fn compute_list(
     if generation.get_value() != gen {
         return;
     }
-    let items = saved.get_untracked().items;
-    let links: Vec<&str> = items.iter().map(|i| i.link.as_str()).collect();
+    // Read in place: the store is not cloned for each slice.
     let t0 = js_sys::Date::now();
-    let done = figures
-        .try_update_value(|f| f.fill(&links, &mut || js_sys::Date::now() - t0 < 25.0))
-        .unwrap_or(true);
-    if done {
+    let (counted, shown) = saved.with_untracked(|s| {
+        let links: Vec<&str> = s.items.iter().map(|i| i.link.as_str()).collect();
+        let done = figures
+            .try_update_value(|f| f.fill(&links, &mut || js_sys::Date::now() - t0 < 25.0))
+            .unwrap_or(true);
+        if !done {
+            let known = figures.with_value(|f| links.iter().filter(|l| f.get(l).is_some()).count());
+            return (Some((known, links.len())), Vec::new());
+        }
+        figures.update_value(|f| f.keep_only(&links));
         let shown = figures.with_value(|f| {
-            items
+            s.items
                 .iter()
                 .map(|it| {
                     (
@@ -213,18 +218,19 @@ fn compute_list(
                 })
                 .collect()
         });
-        figures.update_value(|f| f.keep_only(&links));
-        progress.set(None);
-        list.set(shown);
-        mark("leeward-survey-shown");
-        write_ahead(gen, generation, saved);
-    } else {
-        let known = figures.with_value(|f| links.iter().filter(|l| f.get(l).is_some()).count());
-        progress.set(Some((known, links.len())));
+        (None, shown)
+    });
+    if let Some(p) = counted {
+        progress.set(Some(p));
         set_timeout(
             move || compute_list(gen, generation, saved, figures, list, progress),
             std::time::Duration::ZERO,
         );
+    } else {
+        progress.set(None);
+        list.set(shown);
+        mark("leeward-survey-shown");
+        write_ahead(gen, generation, saved);
     }
 }
 
