@@ -140,10 +140,56 @@ pub fn worst_first<T, R: std::borrow::Borrow<(T, Figure)>>(rows: &mut [R]) {
         },
         Err(_) => (0, 0.0),
     };
-    rows.sort_by(|a, b| {
-        let (ka, kb) = (key(&a.borrow().1), key(&b.borrow().1));
-        kb.0.cmp(&ka.0).then(kb.1.total_cmp(&ka.1))
-    });
+    let keys: Vec<(u8, f64)> = rows.iter().map(|r| key(&r.borrow().1)).collect();
+    // Put the rows in that order by swaps: each cycle of the order is walked once, and a
+    // place is marked done by pointing it at itself.
+    let mut from = stable_order(&keys);
+    for i in 0..from.len() {
+        let mut j = i;
+        loop {
+            let k = from[j];
+            from[j] = j;
+            if k == i {
+                break;
+            }
+            rows.swap(j, k);
+            j = k;
+        }
+    }
+}
+
+/// The places of `keys` largest first (by class, then by value), equal keys in their own order.
+/// A plain merge sort of places, written here because the library's stable sort, used for this
+/// one list, is several kilobytes of the page's code.
+fn stable_order(keys: &[(u8, f64)]) -> Vec<usize> {
+    let first = |x: (u8, f64), y: (u8, f64)| {
+        x.0 > y.0 || (x.0 == y.0 && x.1.total_cmp(&y.1) == std::cmp::Ordering::Greater)
+    };
+    let n = keys.len();
+    let mut a: Vec<usize> = (0..n).collect();
+    let mut b = a.clone();
+    let mut w = 1;
+    while w < n {
+        let mut lo = 0;
+        while lo < n {
+            let (mid, hi) = ((lo + w).min(n), (lo + 2 * w).min(n));
+            let (mut i, mut j) = (lo, mid);
+            for slot in &mut b[lo..hi] {
+                // The right run's head goes first only when strictly before the left's: stable.
+                if j < hi && (i >= mid || first(keys[a[j]], keys[a[i]])) {
+                    *slot = a[j];
+                    j += 1;
+                } else {
+                    *slot = a[i];
+                    i += 1;
+                }
+            }
+            lo = hi;
+        }
+        std::mem::swap(&mut a, &mut b);
+        w *= 2;
+    }
+    a
 }
 
 #[cfg(test)]
@@ -268,5 +314,25 @@ mod tests {
         worst_first(&mut rows);
         let order: Vec<&str> = rows.iter().map(|r| r.0).collect();
         assert_eq!(order, ["hot", "mild", "big", "small", "failed"]);
+    }
+
+    #[test]
+    fn the_order_is_that_of_a_stable_sort_ties_and_all() {
+        // Keys with many ties (three classes, few values), at lengths around the powers of two.
+        let mut seed = 7u32;
+        for n in [0, 1, 2, 3, 7, 8, 9, 31, 64, 100, 257] {
+            let keys: Vec<(u8, f64)> = (0..n)
+                .map(|_| {
+                    seed = seed.wrapping_mul(1_103_515_245).wrapping_add(12_345);
+                    (((seed >> 16) % 3) as u8, f64::from((seed >> 8) % 5))
+                })
+                .collect();
+            let mut want: Vec<usize> = (0..n).collect();
+            want.sort_by(|&a, &b| {
+                let (ka, kb) = (keys[a], keys[b]);
+                kb.0.cmp(&ka.0).then(kb.1.total_cmp(&ka.1))
+            });
+            assert_eq!(stable_order(&keys), want, "n = {n}");
+        }
     }
 }
