@@ -334,7 +334,7 @@ pub fn SavedPanel(
             }
         }
     };
-    let save_now = move |_| {
+    let save_now = move || {
         let mut next = saved.get_untracked();
         let n = store::free_name(&next, &name.get_untracked());
         next.items.push(Saved::new(
@@ -346,7 +346,7 @@ pub fn SavedPanel(
         ));
         commit(next, format!("Saved as “{n}”."));
     };
-    let export = move |_| match json_text(&store::file(&saved.get_untracked()), true) {
+    let export = move || match json_text(&store::file(&saved.get_untracked()), true) {
         Ok(text) => download("leeward-saved-work.json", "application/json", &text),
         Err(e) => note.set(Some(format!("Not exported: {e}."))),
     };
@@ -405,7 +405,7 @@ pub fn SavedPanel(
     // responsive and the first result never waits for the survey.
     let figures = StoredValue::new(survey::Figures::default());
     // The CSV carries each item's results: those already worked out for the list are reused.
-    let export_csv = move |_| {
+    let export_csv = move || {
         let text = figures.with_value(|f| {
             survey::to_csv(&saved.get_untracked().items, system.get_untracked(), f)
         });
@@ -439,7 +439,7 @@ pub fn SavedPanel(
         std::time::Duration::ZERO,
     );
 
-    let confirm = move |_| {
+    let confirm = move || {
         if let Some((incoming, _)) = pending.get_untracked() {
             let next = store::apply_import(&saved.get_untracked(), &incoming);
             pending.set(None);
@@ -518,25 +518,6 @@ pub fn SavedPanel(
             );
         }
     };
-    let on_list_click = move |ev: leptos::ev::MouseEvent| {
-        let button = ev
-            .target()
-            .and_then(|t| t.dyn_into::<web_sys::Element>().ok())
-            .and_then(|e| e.closest("[data-act]").ok().flatten());
-        let Some(b) = button else { return };
-        let item = b
-            .closest("[data-saved]")
-            .ok()
-            .flatten()
-            .and_then(|r| r.get_attribute("data-saved"));
-        if let (Some(act), Some(k)) = (b.get_attribute("data-act"), item) {
-            // The row's menu closes once its action is taken.
-            if let Ok(Some(menu)) = b.closest("details") {
-                let _ = menu.remove_attribute("open");
-            }
-            act_on(&act, &k);
-        }
-    };
     // The rows in the order shown (sorted by reference, nothing cloned), the first `rows_shown`
     // of them, each as markup (user text escaped). Only the rows that changed are redrawn
     // (`redraw_changed`): a save, a duplicate, a delete or an update touches a row or two; a sort
@@ -579,7 +560,7 @@ pub fn SavedPanel(
     let count = move || list.with(Vec::len);
     // The whole survey on paper: built now, shown in place of the one-item report while the
     // browser prints, and taken away after.
-    let print_summary = move |_| {
+    let print_summary = move || {
         let date = super::results::now_utc();
         summary.set(Some(list.with(|l| {
             super::summary::summary(l, &choice.get_untracked(), &date)
@@ -598,35 +579,106 @@ pub fn SavedPanel(
         }
     };
 
+    // Every tap in the panel is handled here, in one place (one handler costs less code than one
+    // per button): a row's button by what it does (`data-act`) and its row's item (`data-saved`:
+    // names are unique in the store; the rows themselves are markup), any other button by its
+    // `data-action` (the import plan's Cancel has none).
+    let on_click = move |ev: leptos::ev::MouseEvent| {
+        let Some(el) = ev
+            .target()
+            .and_then(|t| t.dyn_into::<web_sys::Element>().ok())
+        else {
+            return;
+        };
+        if let Ok(Some(b)) = el.closest("[data-act]") {
+            let item = b
+                .closest("[data-saved]")
+                .ok()
+                .flatten()
+                .and_then(|r| r.get_attribute("data-saved"));
+            if let (Some(act), Some(k)) = (b.get_attribute("data-act"), item) {
+                // The row's menu closes once its action is taken.
+                if let Ok(Some(menu)) = b.closest("details") {
+                    let _ = menu.remove_attribute("open");
+                }
+                act_on(&act, &k);
+            }
+            return;
+        }
+        let Ok(Some(b)) = el.closest("button") else {
+            return;
+        };
+        match b.get_attribute("data-action").as_deref() {
+            Some("save") => save_now(),
+            Some("export") => export(),
+            Some("print") => {
+                // beforeprint builds the report; print once it is in the page.
+                let _ = window().dispatch_event(&web_sys::Event::new("beforeprint").unwrap());
+                wasm_bindgen_futures::spawn_local(async {
+                    let _ = window().print();
+                });
+            }
+            Some("download-unreadable") => {
+                if let Some(text) = held.get_untracked() {
+                    download("leeward-unreadable-saved-work.txt", "text/plain", &text);
+                }
+            }
+            Some("release-unreadable") => {
+                if let Some(text) = held.get_untracked() {
+                    download("leeward-unreadable-saved-work.txt", "text/plain", &text);
+                }
+                held.set(None);
+                note.set(Some(
+                    "Downloaded. Saving here will now replace the unreadable text.".into(),
+                ));
+            }
+            Some("confirm-import") => confirm(),
+            None if b.closest("[data-import-plan]").ok().flatten().is_some() => {
+                pending.set(None);
+                note.set(Some("Import cancelled.".into()));
+            }
+            Some("export-csv") => export_csv(),
+            Some("sort") => by_loss.update(|b| *b = !*b),
+            Some("print-summary") => print_summary(),
+            Some("undo") => {
+                if let Some((before, _)) = undo.get_untracked() {
+                    commit(before, "Undone: the list is as it was.".into());
+                }
+            }
+            Some("more") => rows_shown.update(|n| *n += PAGE),
+            _ => {}
+        }
+    };
+    // Both file inputs, by their `data-action` (the text inputs' change events pass by).
+    let on_change = move |ev: leptos::ev::Event| {
+        let act = ev
+            .target()
+            .and_then(|t| t.dyn_into::<web_sys::Element>().ok())
+            .and_then(|e| e.get_attribute("data-action"));
+        match act.as_deref() {
+            Some("import") => import(ev),
+            Some("import-csv") => import_csv(ev),
+            _ => {}
+        }
+    };
     view! {
-        <section aria-labelledby="saved-title" data-panel="saved" data-saved-ready=move || ready.get().to_string()>
+        <section aria-labelledby="saved-title" data-panel="saved" data-saved-ready=move || ready.get().to_string() on:click=on_click on:change=on_change>
             <h2 id="saved-title">"5 · Saved work"</h2>
             {text_field("in-save-name", "Name", name)}
             {text_field("in-save-tag", "Item tag (optional; printed on the report)", tag)}
             {text_field("in-save-place", "Location (optional; printed on the report)", place)}
             <div class="actions">
-                <button type="button" data-action="save" on:click=save_now>"Save this scenario"</button>
-                <button type="button" data-action="export" on:click=export>"Export all to a file"</button>
-                <label class="file-button">"Import a file"<input type="file" accept=".json,application/json" data-action="import" on:change=import/></label>
-                <button type="button" data-action="print" on:click=move |_| {
-                    // beforeprint builds the report; print once it is in the page.
-                    let _ = window().dispatch_event(&web_sys::Event::new("beforeprint").unwrap());
-                    wasm_bindgen_futures::spawn_local(async { let _ = window().print(); });
-                }>"Print a one-page report"</button>
+                <button type="button" data-action="save">"Save this scenario"</button>
+                <button type="button" data-action="export">"Export all to a file"</button>
+                <label class="file-button">"Import a file"<input type="file" accept=".json,application/json" data-action="import"/></label>
+                <button type="button" data-action="print">"Print a one-page report"</button>
             </div>
             <p class="notice" role="status" data-saved-note class:hidden=move || note.with(|n| n.is_none())>{move || note.get()}</p>
-            {move || held.get().map(|text| {
-                let text2 = text.clone();
-                view! {
-                    <div class="actions" data-held>
-                        <button type="button" data-action="download-unreadable" on:click=move |_| download("leeward-unreadable-saved-work.txt", "text/plain", &text)>"Download the unreadable saved work"</button>
-                        <button type="button" data-action="release-unreadable" on:click=move |_| {
-                            download("leeward-unreadable-saved-work.txt", "text/plain", &text2);
-                            held.set(None);
-                            note.set(Some("Downloaded. Saving here will now replace the unreadable text.".into()));
-                        }>"Download it and start afresh"</button>
-                    </div>
-                }
+            {move || held.with(Option::is_some).then(|| view! {
+                <div class="actions" data-held>
+                    <button type="button" data-action="download-unreadable">"Download the unreadable saved work"</button>
+                    <button type="button" data-action="release-unreadable">"Download it and start afresh"</button>
+                </div>
             })}
             {move || pending.with(|p| p.as_ref().map(|(_, plan)| {
                 let adds = plan.add.join(", ");
@@ -635,16 +687,16 @@ pub fn SavedPanel(
                     <div class="import-plan" data-import-plan>
                         <p>{format!("Adds: {}", if adds.is_empty() { "nothing".to_string() } else { adds })}</p>
                         <p>{format!("Replaces: {}", if repl.is_empty() { "nothing".to_string() } else { repl })}</p>
-                        <button type="button" data-action="confirm-import" on:click=confirm>"Import"</button>
-                        <button type="button" on:click=move |_| { pending.set(None); note.set(Some("Import cancelled.".into())); }>"Cancel"</button>
+                        <button type="button" data-action="confirm-import">"Import"</button>
+                        <button type="button">"Cancel"</button>
                     </div>
                 }
             }))}
             <div class="actions">
-                <button type="button" data-action="export-csv" on:click=export_csv>"Export the list as CSV"</button>
-                <label class="file-button">"Import CSV rows"<input type="file" accept=".csv,text/csv" data-action="import-csv" on:change=import_csv/></label>
-                <button type="button" data-action="sort" title="Items read with infrared by what their defects cost a year over design, then the others by heat loss" aria-pressed=move || by_loss.get().to_string() on:click=move |_| by_loss.update(|b| *b = !*b)>"Worst first"</button>
-                <button type="button" data-action="print-summary" on:click=print_summary>"Print the survey summary"</button>
+                <button type="button" data-action="export-csv">"Export the list as CSV"</button>
+                <label class="file-button">"Import CSV rows"<input type="file" accept=".csv,text/csv" data-action="import-csv"/></label>
+                <button type="button" data-action="sort" title="Items read with infrared by what their defects cost a year over design, then the others by heat loss" aria-pressed=move || by_loss.get().to_string()>"Worst first"</button>
+                <button type="button" data-action="print-summary">"Print the survey summary"</button>
             </div>
             <p class="notice" role="status" data-survey-progress class:hidden=move || progress.with(|p| p.is_none())>
                 {move || progress.get().map(|(done, all)| format!("Computing the survey list: {done} of {all} items…"))}
@@ -653,21 +705,17 @@ pub fn SavedPanel(
                 <table class="saved-list" data-saved-list data-items=move || count().to_string()>
                     <caption>"Survey list: every saved item with its results"</caption>
                     <thead><tr><th scope="col">"Item"</th><th scope="col">"Heat loss"</th><th scope="col">"Surface"</th><th scope="col">"Checks"</th><th scope="col">"Range"</th><th scope="col">"Actions"</th></tr></thead>
-                    <tbody on:click=on_list_click></tbody>
+                    <tbody></tbody>
                     <tfoot inner_html=totals></tfoot>
                 </table>
             </div>
             <div class="undo-bar" role="status" data-undo class:hidden=move || undo.with(Option::is_none)>
                 <span>{move || note.get()}</span>
-                <button type="button" data-action="undo" on:click=move |_| {
-                    if let Some((before, _)) = undo.get_untracked() {
-                        commit(before, "Undone: the list is as it was.".into());
-                    }
-                }>"Undo"</button>
+                <button type="button" data-action="undo">"Undo"</button>
             </div>
             <div class="actions" data-more class:hidden=move || count() <= rows_shown.get()>
                 <span>{move || format!("Showing {} of {} items.", rows_shown.get().min(count()), count())}</span>
-                <button type="button" data-action="more" on:click=move |_| rows_shown.update(|n| *n += PAGE)>{move || format!("Show {} more", PAGE.min(count().saturating_sub(rows_shown.get())))}</button>
+                <button type="button" data-action="more">{move || format!("Show {} more", PAGE.min(count().saturating_sub(rows_shown.get())))}</button>
             </div>
         </section>
     }
