@@ -118,7 +118,11 @@ impl Written {
         write: &mut dyn FnMut(&Saved) -> Option<String>,
         more: &mut dyn FnMut() -> bool,
     ) -> bool {
-        let head = items.iter().zip(&self.0).take_while(|(i, (k, _))| i == &k).count();
+        let head = items
+            .iter()
+            .zip(&self.0)
+            .take_while(|(i, (k, _))| i == &k)
+            .count();
         self.0.truncate(head);
         for i in &items[head..] {
             if !more() {
@@ -500,8 +504,18 @@ mod tests {
     #[test]
     fn a_file_assembled_from_its_entries_is_the_file_written_whole() {
         let mut s = sample();
-        s.items.push(Saved::new("tab\tnew\nline \u{1} é 漢 🙂 \\", "t\"", "<&>", &DEMO, System::Si));
-        s.unreadable = vec![Value::Number(1.5e-7), Value::String("kept \"as\" was".into()), Value::Null];
+        s.items.push(Saved::new(
+            "tab\tnew\nline \u{1} é 漢 🙂 \\",
+            "t\"",
+            "<&>",
+            &DEMO,
+            System::Si,
+        ));
+        s.unreadable = vec![
+            Value::Number(1.5e-7),
+            Value::String("kept \"as\" was".into()),
+            Value::Null,
+        ];
         let mut w = Written::default();
         let mut write = |i: &Saved| {
             let t = serde_json::to_string(i).unwrap();
@@ -514,7 +528,10 @@ mod tests {
         assert_eq!(w.update(&s.items, &mut write), Some(0));
         for at in 0..=s.items.len() {
             let mut t = s.clone();
-            t.items.insert(at, Saved::new(&format!("new {at}"), "", "", &DEMO, System::Us));
+            t.items.insert(
+                at,
+                Saved::new(&format!("new {at}"), "", "", &DEMO, System::Us),
+            );
             assert_eq!(w.update(&t.items, &mut write), Some(1), "insert at {at}");
             assert_eq!(w.text(&unreadable), to_json(&t), "insert at {at}");
             t.items.remove((at + 1) % t.items.len());
@@ -528,7 +545,11 @@ mod tests {
             let before = w.text(&unreadable);
             t.items[0].name.push('y');
             assert_eq!(w.update(&t.items, &mut |_| None), None);
-            assert_eq!(w.text(&unreadable), before, "a refused write changes nothing");
+            assert_eq!(
+                w.text(&unreadable),
+                before,
+                "a refused write changes nothing"
+            );
             assert_eq!(w.update(&s.items, &mut write).map(|n| n <= 3), Some(true));
             assert_eq!(w.text(&unreadable), to_json(&s));
         }
@@ -536,12 +557,16 @@ mod tests {
         w = Written::default();
         let mut t = s.clone();
         for k in 0..10 {
-            t.items.push(Saved::new(&format!("more {k}"), "", "", &DEMO, System::Si));
+            t.items
+                .push(Saved::new(&format!("more {k}"), "", "", &DEMO, System::Si));
         }
         let mut pieces = 0;
         while !w.extend(&t.items, &mut write, &mut {
             let mut budget = 3;
-            move || { budget -= 1; budget >= 0 }
+            move || {
+                budget -= 1;
+                budget >= 0
+            }
         }) {
             pieces += 1;
         }

@@ -202,6 +202,7 @@ pub fn App() -> impl IntoView {
         let t = text_of(spec.field);
         let err = field_error(spec);
         let err2 = field_error(spec);
+        let err3 = field_error(spec);
         let extra = move || {
             shown.with(|s| {
                 if s.error_at == Some(spec.field) {
@@ -246,6 +247,7 @@ pub fn App() -> impl IntoView {
                         spellcheck="false"
                         data-field=spec.key
                         aria-describedby=msg_id.clone()
+                        aria-invalid=move || if err3().is_some() { "true" } else { "false" }
                         prop:value=move || t.get()
                         on:input=on_input
                     />

@@ -112,50 +112,77 @@ fn outdoors(c: &mut Criterion) {
     use leeward::engine::body::{Axis, Body, Shape, Wind};
     use leeward::engine::outdoors::{irradiance, joule, sky, sun, wind};
     use leeward::engine::props::Fluid;
-    let day = sun::Utc { year: 2026, month: 12, day: 21, hour: 11, minute: 45, second: 0.0 };
-    let site = sun::Site { latitude: 53.4, longitude: -2.2, elevation: 40.0 };
-    let air = sun::Air { pressure: 101_325.0, temperature: 276.15 };
-    let rack = wind::Exposure { height: 3.0, terrain: wind::Terrain::Suburban };
-    c.bench_function("outdoors: sun, sky, wind and a traced line's steady surface", |b| {
-        b.iter(|| {
-            let pos = sun::position(black_box(&day), &site, &air, sun::DELTA_T_NOW).unwrap().value;
-            let g0 = irradiance::extraterrestrial_normal(pos.distance).unwrap();
-            let irr = irradiance::hottel_liu_jordan(
-                pos.zenith,
-                site.elevation,
-                irradiance::Climate::MidlatitudeWinter,
-                g0,
-            )
-            .unwrap()
-            .value;
-            let beam = irradiance::beam_across(pos.zenith, pos.azimuth, 90.0, 0.0).unwrap();
-            let view = sky::ViewFactors::OPEN;
-            let solar = irradiance::absorbed_cylinder(0.6, 0.0603, &irr, 0.2, view, beam).unwrap();
-            let s = sky::sky(276.15, 271.15, 12.0, 101_325.0, 4.0).unwrap().value;
-            let t_radiant = sky::radiant_surroundings(view, s.temperature, 276.15).unwrap();
-            let speed = wind::speed_at(black_box(6.0), wind::STATION, rack).unwrap().value;
-            let yaw = wind::yaw_factor(60.0).unwrap();
-            let surface = joule::Surface {
-                stream: Body {
-                    shape: Shape::Cylinder,
-                    axis: Axis::Horizontal,
-                    wind: Wind::Horizontal,
-                    d: 0.0603,
-                    length: 1.0,
-                    speed,
-                    t_inf: 276.15,
-                    t_s: 0.0,
-                    p: 101_325.0,
-                    fluid: Fluid::DryAir,
-                    yaw,
-                },
-                emissivity: 0.9,
-                t_radiant,
-                solar,
-            };
-            joule::surface_temperature(&surface, &joule::Source::Heat(20.0)).unwrap()
-        })
-    });
+    let day = sun::Utc {
+        year: 2026,
+        month: 12,
+        day: 21,
+        hour: 11,
+        minute: 45,
+        second: 0.0,
+    };
+    let site = sun::Site {
+        latitude: 53.4,
+        longitude: -2.2,
+        elevation: 40.0,
+    };
+    let air = sun::Air {
+        pressure: 101_325.0,
+        temperature: 276.15,
+    };
+    let rack = wind::Exposure {
+        height: 3.0,
+        terrain: wind::Terrain::Suburban,
+    };
+    c.bench_function(
+        "outdoors: sun, sky, wind and a traced line's steady surface",
+        |b| {
+            b.iter(|| {
+                let pos = sun::position(black_box(&day), &site, &air, sun::DELTA_T_NOW)
+                    .unwrap()
+                    .value;
+                let g0 = irradiance::extraterrestrial_normal(pos.distance).unwrap();
+                let irr = irradiance::hottel_liu_jordan(
+                    pos.zenith,
+                    site.elevation,
+                    irradiance::Climate::MidlatitudeWinter,
+                    g0,
+                )
+                .unwrap()
+                .value;
+                let beam = irradiance::beam_across(pos.zenith, pos.azimuth, 90.0, 0.0).unwrap();
+                let view = sky::ViewFactors::OPEN;
+                let solar =
+                    irradiance::absorbed_cylinder(0.6, 0.0603, &irr, 0.2, view, beam).unwrap();
+                let s = sky::sky(276.15, 271.15, 12.0, 101_325.0, 4.0)
+                    .unwrap()
+                    .value;
+                let t_radiant = sky::radiant_surroundings(view, s.temperature, 276.15).unwrap();
+                let speed = wind::speed_at(black_box(6.0), wind::STATION, rack)
+                    .unwrap()
+                    .value;
+                let yaw = wind::yaw_factor(60.0).unwrap();
+                let surface = joule::Surface {
+                    stream: Body {
+                        shape: Shape::Cylinder,
+                        axis: Axis::Horizontal,
+                        wind: Wind::Horizontal,
+                        d: 0.0603,
+                        length: 1.0,
+                        speed,
+                        t_inf: 276.15,
+                        t_s: 0.0,
+                        p: 101_325.0,
+                        fluid: Fluid::DryAir,
+                        yaw,
+                    },
+                    emissivity: 0.9,
+                    t_radiant,
+                    solar,
+                };
+                joule::surface_temperature(&surface, &joule::Source::Heat(20.0)).unwrap()
+            })
+        },
+    );
     // Its two largest parts alone: the sun's position, and the steady surface for a given sky,
     // sun and wind.
     c.bench_function("outdoors: the sun's position alone (SPA)", |b| {
@@ -180,7 +207,9 @@ fn outdoors(c: &mut Criterion) {
         solar: 8.0,
     };
     c.bench_function("outdoors: the traced line's steady surface alone", |b| {
-        b.iter(|| joule::surface_temperature(black_box(&surface), &joule::Source::Heat(20.0)).unwrap())
+        b.iter(|| {
+            joule::surface_temperature(black_box(&surface), &joule::Source::Heat(20.0)).unwrap()
+        })
     });
 }
 

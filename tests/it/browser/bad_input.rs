@@ -43,10 +43,23 @@ fn every_kind_of_bad_input_gets_a_message_and_loses_nothing() {
             let msg = text_of(&c, "[data-msg-for=D]").await;
             assert!(!msg.trim().is_empty(), "no message for D = {bad:?}");
             assert!(!msg.contains('<'), "message echoes markup: {msg}");
+            // A screen reader hears that the field is wrong, not only sees the red box.
+            let invalid = js(
+                &c,
+                "return document.querySelector('#in-D').getAttribute('aria-invalid')",
+            )
+            .await;
+            assert_eq!(invalid, "true", "aria-invalid for D = {bad:?}");
             assert_no_nan_shown(&c).await;
             classes += 1;
         }
         type_into(&c, "D", "60.3").await;
+        let invalid = js(
+            &c,
+            "return document.querySelector('#in-D').getAttribute('aria-invalid')",
+        )
+        .await;
+        assert_eq!(invalid, "false", "aria-invalid once D is good again");
         // 2. Out-of-range values in other fields (the message names the limit).
         for (key, bad, want) in [
             ("Ta", "-300", "absolute zero"),
