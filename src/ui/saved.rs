@@ -169,14 +169,34 @@ fn load() -> Opened {
 #[inline(never)]
 fn save(s: &Store) -> Result<(), String> {
     let st = storage().ok_or("no storage in this browser")?;
-    let text = checked_text(s)?;
-    st.set_item(KEY, &text).map_err(|_| {
+    let text = js_sys::JsString::from(checked_text(s)?);
+    let st: &TextStore = st.unchecked_ref();
+    st.set_text(KEY, &text).map_err(|_| {
         "the browser's storage is full or refused the write; nothing was changed".to_string()
     })?;
-    match st.get_item(KEY) {
-        Ok(Some(back)) if back == text => Ok(()),
-        _ => Err("the browser did not keep what was written".into()),
+    // Compared inside the browser (`===` on the two strings): the text is not copied back.
+    if st.get_text(KEY) == **text {
+        Ok(())
+    } else {
+        Err("the browser did not keep what was written".into())
     }
+}
+
+#[wasm_bindgen::prelude::wasm_bindgen]
+extern "C" {
+    /// The browser's `Storage`, with a string kept in the browser both ways.
+    #[wasm_bindgen(js_name = Storage)]
+    type TextStore;
+    /// `Storage.setItem` with a string already in the browser.
+    #[wasm_bindgen(method, catch, js_name = setItem)]
+    fn set_text(
+        this: &TextStore,
+        key: &str,
+        value: &js_sys::JsString,
+    ) -> Result<(), wasm_bindgen::JsValue>;
+    /// `Storage.getItem`, left in the browser (null when absent).
+    #[wasm_bindgen(method, js_name = getItem)]
+    fn get_text(this: &TextStore, key: &str) -> wasm_bindgen::JsValue;
 }
 
 /// Compute the survey's figures a slice at a time (about 25 ms, then yield to the browser), and
