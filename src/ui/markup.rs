@@ -216,7 +216,7 @@ pub struct Item<'a> {
     pub name: &'a str,
     pub tag: &'a str,
     pub place: &'a str,
-    /// "2026-12-05 10:05" (UTC).
+    /// "2026-12-05 11:05 (UTC+01:00)": the device's clock and its offset.
     pub date: &'a str,
 }
 
@@ -234,7 +234,7 @@ pub fn report(
     let name = item.name.trim();
     let _ = write!(
         m,
-        r#"<h1>{}</h1><p class="meta">{} UTC · item {} · {}</p><p class="meta">{}, {} in {}; recommended {} ({}).</p><h2>Results</h2><dl class="kv results">"#,
+        r#"<h1>{}</h1><p class="meta">{} · item {} · {}</p><p class="meta">{}, {} in {}; recommended {} ({}).</p><h2>Results</h2><dl class="kv results">"#,
         if name.is_empty() {
             "Leeward report".to_string()
         } else {
@@ -636,7 +636,7 @@ mod tests {
                 name: "<b>Roof & co</b>",
                 tag: "\"L-1\"",
                 place: "",
-                date: "2026-12-05 10:05",
+                date: "2026-12-05 11:05 (UTC+01:00)",
             },
         );
         assert!(

@@ -517,10 +517,10 @@ pub fn App() -> impl IntoView {
     let place = RwSignal::new(String::new());
 
     // Open a saved scenario: its numbers replace the inputs, shown in its unit system.
-    let open_saved = move |sc: Scenario, sys: System| {
-        system.set(sys);
-        let c = UnitChoice::for_system(sys);
-        choice.set(c);
+    // An item opens in the units the page is in, whichever units it was saved in: a technician
+    // working in °C who opens a colleague's item saved in °F keeps reading °C.
+    let open_saved = move |sc: Scenario, _saved_in: System| {
+        let c = choice.get_untracked();
         for spec in &FIELDS {
             text_of(spec.field).set(scenario::shown_text(
                 spec,

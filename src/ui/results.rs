@@ -238,13 +238,23 @@ fn cross_section(j: &crate::engine::scenario::JobResult, c: &UnitChoice) -> Stri
     chart::svg::section_svg(&faces, &temps, c.get(Dim::Temperature))
 }
 
-/// Now, "2026-12-05 10:05" (UTC), for a printed page.
-pub(super) fn now_utc() -> String {
-    let date = js_sys::Date::new_0()
-        .to_iso_string()
-        .as_string()
-        .unwrap_or_default();
-    date.get(..16).unwrap_or(&date).replace('T', " ")
+/// Now, on the device's clock, with its offset from UTC, for a printed page:
+/// "2026-12-05 11:05 (UTC+01:00)".
+pub(super) fn now_local() -> String {
+    let d = js_sys::Date::new_0();
+    // getTimezoneOffset is minutes west of UTC: −60 in Central Europe in winter.
+    let east = -(d.get_timezone_offset() as i32);
+    format!(
+        "{}-{:02}-{:02} {:02}:{:02} (UTC{}{:02}:{:02})",
+        d.get_full_year(),
+        d.get_month() + 1,
+        d.get_date(),
+        d.get_hours(),
+        d.get_minutes(),
+        if east < 0 { '−' } else { '+' },
+        east.abs() / 60,
+        east.abs() % 60
+    )
 }
 
 /// The one-page report, shown only when printing: inputs in use, results, flags, verdicts, the
@@ -258,7 +268,7 @@ pub fn report(
     tag: &str,
     place: &str,
 ) -> impl IntoView {
-    let date = now_utc();
+    let date = now_local();
     let m = super::markup::report(
         o,
         s,

@@ -581,7 +581,7 @@ pub fn SavedPanel(
     // The whole survey on paper: built now, shown in place of the one-item report while the
     // browser prints, and taken away after.
     let print_summary = move || {
-        let date = super::results::now_utc();
+        let date = super::results::now_local();
         summary.set(Some(list.with(|l| {
             super::summary::summary(l, &choice.get_untracked(), &date)
         })));

@@ -98,7 +98,7 @@ pub(super) fn totals<'a>(
 
 /// The printed survey summary: every item worst first (inspected items by what their defects
 /// cost), its figures and checks, the totals, how many inspected items fall in each condition,
-/// and the standing note. `date` is "2026-12-05 10:05" (UTC).
+/// and the standing note. `date` is "2026-12-05 11:05 (UTC+01:00)", the device's clock.
 pub fn summary(rows: &[(Saved, Figure)], c: &UnitChoice, date: &str) -> String {
     // Sorted by reference, as the list sorts (one sort in the page's code, nothing cloned).
     let mut rows: Vec<&(Saved, Figure)> = rows.iter().collect();
@@ -106,7 +106,7 @@ pub fn summary(rows: &[(Saved, Figure)], c: &UnitChoice, date: &str) -> String {
     let mut m = String::with_capacity(400 + 300 * rows.len());
     let _ = write!(
         m,
-        r#"<h1>Leeward survey summary</h1><p class="meta">{} UTC · {} item(s), worst first: items read with infrared by what their defects cost a year over design, then the others by heat loss</p><table><thead><tr><th>Item</th><th>Heat loss</th><th>Surface</th><th>Checks</th><th>Range notes</th></tr></thead><tbody>"#,
+        r#"<h1>Leeward survey summary</h1><p class="meta">{} · {} item(s), worst first: items read with infrared by what their defects cost a year over design, then the others by heat loss</p><table><thead><tr><th>Item</th><th>Heat loss</th><th>Surface</th><th>Checks</th><th>Range notes</th></tr></thead><tbody>"#,
         esc(date),
         rows.len()
     );

@@ -109,6 +109,24 @@ fn saved_work_survives_travels_and_prints() {
         // Open the first: the demo's diameter comes back.
         click("[data-saved='Line 1'] button").await;
         assert!(close(si(&c, "h").await, expect(&DEMO).h));
+        // An item saved on a page in US units opens in the units this page is in (SI here).
+        let kept = js(&c, "return localStorage.getItem('leeward.saved');").await;
+        js(&c, "const s = JSON.parse(localStorage.getItem('leeward.saved')); s.scenarios.push({...s.scenarios[0], name: 'Saved in US units', link: s.scenarios[0].link.replace('u=si', 'u=us')}); localStorage.setItem('leeward.saved', JSON.stringify(s)); return true;").await;
+        c.refresh().await.unwrap();
+        wait_rendered(&c).await;
+        click("[data-saved='Saved in US units'] button").await;
+        assert!(close(si(&c, "h").await, expect(&DEMO).h));
+        assert_eq!(
+            js(&c, "return [document.querySelector('[data-system=si]').getAttribute('aria-pressed'), document.querySelector('#in-D').value];").await,
+            json!(["true", "60.3"])
+        );
+        js(
+            &c,
+            &format!("localStorage.setItem('leeward.saved', {kept}); return true;"),
+        )
+        .await;
+        c.refresh().await.unwrap();
+        wait_rendered(&c).await;
 
         // Export (the stored text is the file's text) → clear → import → identical.
         let text = js(&c, "return localStorage.getItem('leeward.saved');").await;
