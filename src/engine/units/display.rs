@@ -178,7 +178,29 @@ pub fn shown(si: f64, u: &'static Unit) -> (String, &'static str) {
         }
         _ => format_value(v, u),
     };
-    (text, u.symbol)
+    (grouped(text), u.symbol)
+}
+
+/// A result's digits grouped in threes by a narrow no-break space once its whole part has five
+/// digits or more ("18 800 W", "127 000 kWh"; "6359" stays whole), as the SI Brochure (BIPM, 9th
+/// ed. 2019, §5.4.4) writes numbers: never a comma or a point, which read as the decimal marker
+/// somewhere. Typed texts, files and links are never grouped.
+fn grouped(t: String) -> String {
+    let (sign, rest) = t.strip_prefix('-').map_or(("", t.as_str()), |r| ("-", r));
+    let whole = rest
+        .find(|c: char| !c.is_ascii_digit())
+        .unwrap_or(rest.len());
+    if whole < 5 {
+        return t;
+    }
+    let mut out = String::from(sign);
+    for (k, ch) in rest[..whole].chars().enumerate() {
+        if k > 0 && (whole - k) % 3 == 0 {
+            out.push('\u{202F}');
+        }
+        out.push(ch);
+    }
+    out + &rest[whole..]
 }
 
 /// [`shown`] as one text, "149.4 °C".
@@ -201,6 +223,24 @@ fn trim_zeros(s: &str) -> String {
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    /// Grouping as the SI Brochure (BIPM, 9th ed. 2019, §5.4.4) prints its examples: threes from
+    /// the decimal marker, a four-digit whole part left whole; exponents and typed texts untouched.
+    #[test]
+    fn results_group_their_digits_in_threes() {
+        let nb = |s: &str| s.replace(' ', "\u{202F}");
+        assert_eq!(grouped("18800".into()), nb("18 800"));
+        assert_eq!(grouped("127000".into()), nb("127 000"));
+        assert_eq!(grouped("1234567.5".into()), nb("1 234 567.5"));
+        assert_eq!(grouped("-43210".into()), nb("-43 210"));
+        assert_eq!(grouped("6359".into()), "6359");
+        assert_eq!(grouped("0.000123".into()), "0.000123");
+        assert_eq!(grouped("1.23e9".into()), "1.23e9");
+        assert_eq!(grouped("—".into()), "—");
+        let w = unit("W").unwrap();
+        assert_eq!(shown(18_812.0, w).0, nb("18 800"));
+        assert_eq!(format_value(18_812.0, w), "18800", "a typed text is never grouped");
+    }
 
     #[test]
     fn formatting_significant_figures() {
