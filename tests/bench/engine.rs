@@ -129,6 +129,25 @@ fn outdoors(c: &mut Criterion) {
         pressure: 101_325.0,
         temperature: 276.15,
     };
+    // The traced line: a level 2-inch line in dry air at 3 °C, ε 0.9.
+    let traced = |speed: f64, yaw: f64, t_radiant: f64, solar: f64| joule::Surface {
+        stream: Body {
+            shape: Shape::Cylinder,
+            axis: Axis::Horizontal,
+            wind: Wind::Horizontal,
+            d: 0.0603,
+            length: 1.0,
+            speed,
+            t_inf: 276.15,
+            t_s: 0.0,
+            p: 101_325.0,
+            fluid: Fluid::DryAir,
+            yaw,
+        },
+        emissivity: 0.9,
+        t_radiant,
+        solar,
+    };
     let rack = wind::Exposure {
         height: 3.0,
         terrain: wind::Terrain::Suburban,
@@ -161,24 +180,7 @@ fn outdoors(c: &mut Criterion) {
                     .unwrap()
                     .value;
                 let yaw = wind::yaw_factor(60.0).unwrap();
-                let surface = joule::Surface {
-                    stream: Body {
-                        shape: Shape::Cylinder,
-                        axis: Axis::Horizontal,
-                        wind: Wind::Horizontal,
-                        d: 0.0603,
-                        length: 1.0,
-                        speed,
-                        t_inf: 276.15,
-                        t_s: 0.0,
-                        p: 101_325.0,
-                        fluid: Fluid::DryAir,
-                        yaw,
-                    },
-                    emissivity: 0.9,
-                    t_radiant,
-                    solar,
-                };
+                let surface = traced(speed, yaw, t_radiant, solar);
                 joule::surface_temperature(&surface, &joule::Source::Heat(20.0)).unwrap()
             })
         },
@@ -188,24 +190,7 @@ fn outdoors(c: &mut Criterion) {
     c.bench_function("outdoors: the sun's position alone (SPA)", |b| {
         b.iter(|| sun::position(black_box(&day), &site, &air, sun::DELTA_T_NOW).unwrap())
     });
-    let surface = joule::Surface {
-        stream: Body {
-            shape: Shape::Cylinder,
-            axis: Axis::Horizontal,
-            wind: Wind::Horizontal,
-            d: 0.0603,
-            length: 1.0,
-            speed: 4.0,
-            t_inf: 276.15,
-            t_s: 0.0,
-            p: 101_325.0,
-            fluid: Fluid::DryAir,
-            yaw: 0.9,
-        },
-        emissivity: 0.9,
-        t_radiant: 262.0,
-        solar: 8.0,
-    };
+    let surface = traced(4.0, 0.9, 262.0, 8.0);
     c.bench_function("outdoors: the traced line's steady surface alone", |b| {
         b.iter(|| {
             joule::surface_temperature(black_box(&surface), &joule::Source::Heat(20.0)).unwrap()

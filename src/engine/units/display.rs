@@ -239,7 +239,11 @@ mod tests {
         assert_eq!(grouped("—".into()), "—");
         let w = unit("W").unwrap();
         assert_eq!(shown(18_812.0, w).0, nb("18 800"));
-        assert_eq!(format_value(18_812.0, w), "18800", "a typed text is never grouped");
+        assert_eq!(
+            format_value(18_812.0, w),
+            "18800",
+            "a typed text is never grouped"
+        );
     }
 
     #[test]
