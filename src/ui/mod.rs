@@ -11,6 +11,7 @@ mod rows;
 mod saved;
 mod shapes;
 mod start;
+mod storage;
 mod summary;
 mod unit_select;
 
@@ -516,10 +517,10 @@ pub fn App() -> impl IntoView {
     let tag = RwSignal::new(String::new());
     let place = RwSignal::new(String::new());
 
-    // Open a saved scenario: its numbers replace the inputs, shown in its unit system.
-    // An item opens in the units the page is in, whichever units it was saved in: a technician
-    // working in °C who opens a colleague's item saved in °F keeps reading °C.
-    let open_saved = move |sc: Scenario, _saved_in: System| {
+    // Open a saved scenario: its numbers replace the inputs, shown in the units the page is in,
+    // whichever it was saved in (a technician working in °C who opens a colleague's item saved in
+    // °F keeps reading °C).
+    let open_saved = move |sc: Scenario| {
         let c = choice.get_untracked();
         for spec in &FIELDS {
             text_of(spec.field).set(scenario::shown_text(
