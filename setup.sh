@@ -176,7 +176,7 @@ size_report() {
 ledger() {
   local tmp
   tmp=$(mktemp -d)
-  wasm-bindgen --target web --out-dir "$tmp" target/wasm32-unknown-unknown/release/leeward.wasm
+  wasm-bindgen --target web --out-dir "$tmp" "${CARGO_TARGET_DIR:-target}/wasm32-unknown-unknown/release/leeward.wasm"
   wasm-opt -Oz --converge --low-memory-unused --flatten --rereloop -Oz --strip-producers --strip-target-features -g --enable-bulk-memory --enable-nontrapping-float-to-int \
     --enable-sign-ext --enable-mutable-globals "$tmp/leeward_bg.wasm" -o "$tmp/named.wasm"
   log "size ledger (raw bytes of the optimised wasm, by crate; generic view code counts under tachys):"

@@ -9,8 +9,9 @@ use crate::engine::units::{self, Dim, UnitChoice};
 
 /// The verdicts that earn a badge, in the order a technician asks about them, with short names
 /// (the card's title is the long one).
-const BADGES: [(&str, &str); 7] = [
+const BADGES: [(&str, &str); 8] = [
     ("insulation", "Insulation"),
+    ("made", "Heat"),
     ("touch", "Touch"),
     ("dew", "Sweat"),
     ("freeze", "Freeze"),

@@ -22,8 +22,8 @@ use unit_select::UnitSelect;
 
 use crate::engine::chart::svg::esc;
 use crate::engine::scenario::{
-    self, Axis, Field, FieldSpec, FluidKind, Group, HumidityInput, Outcome, PressureInput,
-    Scenario, Setting, Shape, SurfaceMode, Wind, FIELDS,
+    self, Axis, Field, FieldSpec, FluidKind, Group, HeatSource, HumidityInput, Outcome,
+    PressureInput, Scenario, Setting, Shape, SurfaceMode, Wind, FIELDS,
 };
 use crate::engine::units::{self, format_sig, Dim, System, UnitChoice};
 
@@ -416,23 +416,20 @@ pub fn App() -> impl IntoView {
         }
     };
 
-    let surface_toggle = toggle(
-        "surface-mode",
-        "Surface temperature known",
-        "Work it out from inside",
-        |s| s.surface_mode == SurfaceMode::Given,
+    let surface_toggle = pickers::surface_mode(scenario);
+    let source_toggle = toggle(
+        "heat-source",
+        "A heat",
+        "A current through a conductor",
+        |s| s.heat_source == HeatSource::Heat,
         |s, a| {
-            // Working the surface out starts from the bare line: layers are added on purpose.
-            if !a && s.surface_mode == SurfaceMode::Given {
-                s.layer_count = 0;
-            }
-            s.surface_mode = if a {
-                SurfaceMode::Given
+            s.heat_source = if a {
+                HeatSource::Heat
             } else {
-                SurfaceMode::Solved
+                HeatSource::Current
             }
         },
-        |s| matches!(s.shape, Shape::Cylinder | Shape::Sphere),
+        |s| s.makes_heat() && !s.shape.is_sphere(),
     );
     // An insulated line worked out from inside can be set against an infrared reading of its
     // surface (the design stays the reference; the reading says what the insulation really does).
@@ -613,6 +610,7 @@ pub fn App() -> impl IntoView {
                     <h2 id="surface-title">"3 · Surface"</h2>
                     {surface_toggle}
                     {reading_toggle}
+                    {source_toggle}
                     {pickers::wall_select(scenario, choice)}
                     {pickers::inside_select(scenario)}
                     {fields_of(Group::Surface)}

@@ -4,7 +4,9 @@
 
 use leptos::prelude::*;
 
-use crate::engine::scenario::{self, Field, InsideFilm, Scenario, Shape, WallMaterial};
+use crate::engine::scenario::{
+    self, Field, InsideFilm, Scenario, Shape, SurfaceMode, WallMaterial,
+};
 use crate::engine::units::{Dim, UnitChoice};
 
 /// The wall's material (or the body's, for a cooling body).
@@ -139,5 +141,30 @@ pub fn layer_picker(scenario: RwSignal<Scenario>) -> impl IntoView {
             <h3 class="sub">"Insulation"</h3>
             <div class="toggle" role="group" aria-label="Insulation layers">{buttons}</div>
         </div>
+    }
+}
+
+/// How the surface is known: typed, worked out from the process inside (round pipes and
+/// spheres), or where heat made inside is lost (any body).
+pub fn surface_mode(scenario: RwSignal<Scenario>) -> impl IntoView {
+    let pick = move |m: SurfaceMode| {
+    scenario.update(|s| {
+        // Working the surface out starts from the bare line: layers are added on purpose.
+        if m == SurfaceMode::Solved && !s.solved() {
+            s.layer_count = 0;
+        }
+        s.surface_mode = m;
+    })
+    };
+    view! {
+    <div class="toggle" role="group" aria-label="surface-mode" data-toggle="surface-mode">
+        <button type="button" aria-pressed=move || scenario.with(|s| !s.solved() && !s.makes_heat()).to_string()
+            on:click=move |_| pick(SurfaceMode::Given)>"Surface temperature known"</button>
+        <button type="button" aria-pressed=move || scenario.with(|s| s.solved()).to_string()
+            class:hidden=move || !scenario.with(|s| matches!(s.shape, Shape::Cylinder | Shape::Sphere))
+            on:click=move |_| pick(SurfaceMode::Solved)>"Work it out from inside"</button>
+        <button type="button" aria-pressed=move || scenario.with(|s| s.makes_heat()).to_string()
+            on:click=move |_| pick(SurfaceMode::Made)>"Heat made inside"</button>
+    </div>
     }
 }

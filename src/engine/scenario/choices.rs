@@ -199,4 +199,16 @@ pub enum SurfaceMode {
     Given,
     Solved,
     Reading,
+    /// Heat made inside (issue #19): a tracer, a heater or a current through a conductor holds
+    /// the surface at the temperature where it loses what it makes (link `sm=h`).
+    Made,
+}
+
+/// What the heat made inside is given as: a heat (W per metre, or W for a sphere), or a current
+/// through a conductor whose resistance is linear in temperature between two data-sheet points
+/// (link `hk=q` or `hk=i`).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
+pub enum HeatSource {
+    Heat,
+    Current,
 }

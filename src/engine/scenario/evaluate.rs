@@ -12,8 +12,9 @@ pub struct Step {
 
 /// The steps a one-page report keeps: the balance, the convection and radiation parts and the
 /// heat flow (the page shows every step).
-const KEY_STEPS: [&str; 5] = [
+const KEY_STEPS: [&str; 6] = [
     "Inside film (flow through the bore)",
+    "Heat made inside (energy balance)",
     "Surface temperature (energy balance)",
     "Forced convection (recommended correlation)",
     "Radiation",
@@ -128,6 +129,9 @@ pub struct Outcome {
     /// corrected, the loss as built against the design (the rest of the outcome is the design),
     /// the outer layer's k ratio, the condition, the excess and the ranges.
     pub inspection: Option<crate::engine::inspect::Inspection>,
+    /// Heat made inside (`SurfaceMode::Made`, issue #19): what it came to at the surface, and
+    /// the heat or current its limit allows.
+    pub made: Option<Made>,
 }
 
 /// Evaluate a scenario. Errors only where nothing meaningful can be computed.
@@ -151,6 +155,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         mut flags,
     } = s.case()?;
     let mut inspection = None;
+    let mut made_result = None;
     let (a, ts, outer_d, job_result) = match job {
         Some(job) => {
             if s.reads() {
@@ -174,6 +179,11 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
                         unit: "K",
                     })?;
             (a, r.solution.t_surface, r.solution.outer_d, Some(r))
+        }
+        None if s.makes_heat() => {
+            let (a, ts, m) = made::solve(s, &stream, &env)?;
+            made_result = Some(m);
+            (a, ts, s.diameter, None)
         }
         None => (body::analyse(&stream)?, s.surface_temp, s.diameter, None),
     };
@@ -243,6 +253,9 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
             ));
         }
     }
+    if let Some(m) = &made_result {
+        verdicts.push(made::verdict(s, ts, m));
+    }
     if let Some(i) = &inspection {
         as_read(&mut verdicts, s, i, dew_point);
         verdicts.push(inspection_verdict(s, i));
@@ -285,6 +298,9 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
     };
     let working = if sweeps {
         let mut steps = working(s, &a, &w);
+        if let Some(m) = &made_result {
+            steps.push(made::step(s, ts, m, &w));
+        }
         if let Some(i) = &inspection {
             steps.extend(inspection_working(s, i));
         }
@@ -366,6 +382,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         flags,
         working,
         inspection,
+        made: made_result,
     })
 }
 
@@ -409,7 +426,9 @@ pub(crate) fn quick(
 ) -> Result<(f64, f64, f64), EngineError> {
     let stream = s.stream(p, fluid, env);
     let run = s.run();
-    if s.solved() {
+    if s.makes_heat() {
+        made::quick(s, &stream, env)
+    } else if s.solved() {
         let job = s.job_with(stream, inside, env);
         let sol = crate::engine::heatloss::solve_lean(&job)?;
         Ok((sol.q * run, sol.t_surface, sol.loss.h_conv))
@@ -435,7 +454,11 @@ pub(crate) fn given_verdicts(s: &Scenario, ts: f64, dew_point: Option<f64>) -> V
             id: "touch",
             title: "Touch",
             ok: false,
-            summary: "The surface is above the touch limit. Work out the surface from the process temperature with an insulation layer to see the thickness that meets it.".into(),
+            summary: if s.makes_heat() {
+                "The surface is above the touch limit: guard it, or make less heat.".into()
+            } else {
+                "The surface is above the touch limit. Work out the surface from the process temperature with an insulation layer to see the thickness that meets it.".into()
+            },
             figures: vec![("surface", ts, Dim::Temperature), ("limit", s.touch_limit, Dim::Temperature)],
             thickness: None,
             caution: Some(TOUCH_CAUTION),

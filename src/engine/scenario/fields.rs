@@ -70,6 +70,15 @@ pub enum Field {
     IrBandHigh,
     IrAccuracy,
     IrEmissivityUncertainty,
+    HeatMade,
+    HeatBody,
+    Current,
+    ResistanceLow,
+    ResistanceLowTemp,
+    ResistanceHigh,
+    ResistanceHighTemp,
+    HoldTemp,
+    ConductorLimit,
 }
 
 /// The group a field is shown in.
@@ -191,7 +200,7 @@ fn user_fluid(s: &Scenario) -> bool {
     s.fluid == FluidKind::User
 }
 fn surface_typed(s: &Scenario) -> bool {
-    !s.solved()
+    !s.solved() && !s.makes_heat()
 }
 fn solved(s: &Scenario) -> bool {
     s.solved()
@@ -242,9 +251,21 @@ fn yawed(s: &Scenario) -> bool {
 fn read_ir(s: &Scenario) -> bool {
     s.reads()
 }
+fn heat_per_length(s: &Scenario) -> bool {
+    s.makes_heat() && !s.shape.is_sphere() && !s.current_given()
+}
+fn heat_per_body(s: &Scenario) -> bool {
+    s.makes_heat() && s.shape.is_sphere()
+}
+fn current_given(s: &Scenario) -> bool {
+    s.current_given()
+}
+fn heat_given(s: &Scenario) -> bool {
+    s.makes_heat() && !s.current_given()
+}
 
 #[rustfmt::skip]
-pub const FIELDS: [FieldSpec; 64] = [
+pub const FIELDS: [FieldSpec; 73] = [
     f(Field::Diameter, Group::Body, "D", "Size D", Dim::Length, (0.0, true, 100.0), "as drawn: the width across the stream (bare outside diameter of a pipe)", at!(diameter), always),
     f(Field::Length, Group::Body, "L", "Length", Dim::RunLength, (0.0, true, 10_000.0), "along the axis; the height when upright", at!(length), not_sphere),
     f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air; outdoors, the wind a weather report gives (10 m, 33 ft, over open ground)", at!(speed), always),
@@ -309,6 +330,15 @@ pub const FIELDS: [FieldSpec; 64] = [
     f(Field::IrBandHigh, Group::Surface, "lb2", "Instrument band to", Dim::Wavelength, (0.1e-6, false, 100e-6), "longest wavelength it sees; 14 µm for most field instruments", at!(ir_band_high), read_ir),
     f(Field::IrAccuracy, Group::Surface, "dTir", "Reading accuracy", Dim::TemperatureDifference, (0.0, false, 100.0), "± as the instrument's sheet states it; {dT:2} is common for field instruments (common practice)", at!(ir_accuracy), read_ir),
     f(Field::IrEmissivityUncertainty, Group::Surface, "de", "Emissivity uncertainty", Dim::Ratio, (0.0, false, 0.5), "± on the surface's emissivity; 0.05 from a table (common practice), less measured by ASTM E1933", at!(ir_emissivity_uncertainty), read_ir),
+    f(Field::HeatMade, Group::Surface, "qm", "Heat made inside", Dim::HeatFlowPerLength, (0.0, false, 1e6), "per length: a tracer's output, a heater's rating", at!(heat_made), heat_per_length),
+    f(Field::HeatBody, Group::Surface, "qb", "Heat made inside the body", Dim::HeatFlow, (0.0, false, 1e7), "the whole body's: a heater's or a sensor's rating", at!(heat_body), heat_per_body),
+    f(Field::Current, Group::Surface, "I", "Current", Dim::Current, (0.0, false, 1e6), "through the conductor; rms for AC", at!(current), current_given),
+    f(Field::ResistanceLow, Group::Surface, "R1", "Resistance at the lower temperature", Dim::ResistancePerLength, (0.0, true, 1e3), "per length, from the data sheet (AC for AC)", at!(r_low), current_given),
+    f(Field::ResistanceLowTemp, Group::Surface, "TR1", "Lower data-sheet temperature", Dim::Temperature, (0.0, true, 3000.0), "where the sheet gives the first resistance", at!(t_r_low), current_given),
+    f(Field::ResistanceHigh, Group::Surface, "R2", "Resistance at the higher temperature", Dim::ResistancePerLength, (0.0, true, 1e3), "linear between the two, and beyond them", at!(r_high), current_given),
+    f(Field::ResistanceHighTemp, Group::Surface, "TR2", "Higher data-sheet temperature", Dim::Temperature, (0.0, true, 3000.0), "where the sheet gives the second resistance", at!(t_r_high), current_given),
+    f(Field::HoldTemp, Group::Surface, "Th", "Keep the surface at least at", Dim::Temperature, (0.0, true, 3000.0), "the heat that holds it there is shown; {T:278.15} keeps water lines from freezing (common practice)", at!(hold_temp), heat_given),
+    f(Field::ConductorLimit, Group::Surface, "Tcx", "Conductor temperature limit", Dim::Temperature, (0.0, true, 3000.0), "the current that brings it there is shown; from the conductor's or cable's rating", at!(conductor_limit), current_given),
 ];
 
 /// The row of a field: `FIELDS` is in `Field`'s order (a test holds it so).

@@ -27,11 +27,18 @@ pub fn to_fragment(s: &Scenario, system: System) -> String {
         });
     }
     out.push_str(&format!("&f={}", s.fluid.id()));
-    if matches!(s.shape, Shape::Cylinder | Shape::Sphere) {
+    if matches!(s.shape, Shape::Cylinder | Shape::Sphere) || s.makes_heat() {
         out.push_str(match s.surface_mode {
             SurfaceMode::Given => "&sm=g",
             SurfaceMode::Solved => "&sm=x",
             SurfaceMode::Reading => "&sm=r",
+            SurfaceMode::Made => "&sm=h",
+        });
+    }
+    if s.makes_heat() && !s.shape.is_sphere() {
+        out.push_str(match s.heat_source {
+            HeatSource::Heat => "&hk=q",
+            HeatSource::Current => "&hk=i",
         });
     }
     if s.solved() {
@@ -154,7 +161,15 @@ pub fn from_fragment(fragment: &str) -> Result<(Scenario, System), String> {
                     "g" => SurfaceMode::Given,
                     "x" => SurfaceMode::Solved,
                     "r" => SurfaceMode::Reading,
+                    "h" => SurfaceMode::Made,
                     _ => return Err("the link names an unknown way to give the surface".into()),
+                }
+            }
+            "hk" => {
+                s.heat_source = match value {
+                    "q" => HeatSource::Heat,
+                    "i" => HeatSource::Current,
+                    _ => return Err("the link names an unknown kind of heat made inside".into()),
                 }
             }
             "wm" => {

@@ -21,6 +21,17 @@ impl Scenario {
         ) && matches!(self.shape, Shape::Cylinder | Shape::Sphere)
     }
 
+    /// Whether the body makes heat inside (issue #19): the surface is where it loses what it
+    /// makes, in the stream, the sky and the sun.
+    pub fn makes_heat(&self) -> bool {
+        self.surface_mode == SurfaceMode::Made
+    }
+
+    /// Whether the heat made inside is a current's (a long conductor; a sphere takes a heat).
+    pub fn current_given(&self) -> bool {
+        self.makes_heat() && self.heat_source == HeatSource::Current && !self.shape.is_sphere()
+    }
+
     /// What a heat flow per unit is multiplied by for the item's total: the run length L, or 1 for
     /// a sphere (its figures are for the whole body).
     pub fn run(&self) -> f64 {
@@ -108,7 +119,9 @@ impl Scenario {
 
     /// Whether the lumped cooling of a solid round bar or sphere is offered (surface typed).
     pub fn cools(&self) -> bool {
-        !self.solved() && matches!(self.shape, Shape::Cylinder | Shape::Sphere)
+        !self.solved()
+            && !self.makes_heat()
+            && matches!(self.shape, Shape::Cylinder | Shape::Sphere)
     }
 
     /// Conductivity of insulation layer `i` as k(θ): linear through the data sheet's points at A
@@ -273,7 +286,7 @@ impl Scenario {
             // a surface beyond the process is refused once corrected, by the inverse.
             crate::engine::inspect::radiometry::check(&self.ir(), self.emissivity)?;
         }
-        if !self.solved() && self.surface_temp == self.fluid_temp {
+        if !self.solved() && !self.makes_heat() && self.surface_temp == self.fluid_temp {
             return Err(EngineError::NoTemperatureDifference {
                 value: self.fluid_temp,
                 unit: "K",

@@ -28,6 +28,9 @@ mod link;
 #[cfg(test)]
 mod link_tests;
 mod lower;
+mod made;
+#[cfg(test)]
+mod made_tests;
 mod outdoor;
 #[cfg(test)]
 mod outdoor_tests;
@@ -43,6 +46,7 @@ pub use fields::*;
 pub(crate) use inspection::*;
 pub use link::*;
 pub(crate) use lower::Case;
+pub use made::{Made, MADE_CAUTION};
 pub use outdoor::*;
 pub(crate) use working::*;
 
@@ -142,6 +146,20 @@ pub struct Scenario {
     pub ir_band_high: f64,
     pub ir_accuracy: f64,
     pub ir_emissivity_uncertainty: f64,
+    /// Heat made inside (`SurfaceMode::Made`): given as a heat or a current; the heat per metre
+    /// of a long body, W/m, or of a sphere, W; the current, A, with the resistance per metre at
+    /// two data-sheet temperatures (Ω/m at K); the least surface temperature a heat must hold,
+    /// and the most a conductor may reach, K.
+    pub heat_source: HeatSource,
+    pub heat_made: f64,
+    pub heat_body: f64,
+    pub current: f64,
+    pub r_low: f64,
+    pub t_r_low: f64,
+    pub r_high: f64,
+    pub t_r_high: f64,
+    pub hold_temp: f64,
+    pub conductor_limit: f64,
 }
 
 /// The demo that opens by default (invented): a bare 2-inch line (60.3 mm outside diameter), a
@@ -230,6 +248,19 @@ pub const DEMO: Scenario = Scenario {
     ir_band_high: 14e-6,
     ir_accuracy: crate::engine::inspect::DEFAULT_ACCURACY,
     ir_emissivity_uncertainty: crate::engine::inspect::DEFAULT_EMISSIVITY_UNCERTAINTY,
+    // Heat made inside (invented magnitudes): a 20 W/m tracer, a 10 W heater in a sphere, 400 A
+    // through a conductor of 0.080 Ω/km at 20 °C and 0.096 Ω/km at 75 °C.
+    heat_source: HeatSource::Heat,
+    heat_made: 20.0,
+    heat_body: 10.0,
+    current: 400.0,
+    r_low: 8.0e-5,
+    t_r_low: 293.15,
+    r_high: 9.6e-5,
+    t_r_high: 348.15,
+    // 5 °C to hold a water line above freezing, 75 °C for a bare conductor (common practice).
+    hold_temp: 278.15,
+    conductor_limit: 348.15,
 };
 
 pub const DEMO_TITLE: &str = "Demo: a bare 2-inch line on a windy roof";

@@ -18,9 +18,10 @@ use super::{evaluate_item, Figure, Figures};
 
 /// The link keys of the choices, one CSV column each (`hf`, the inside film, was missing: a CSV
 /// round trip lost a worked-out inside film and its glycol content; `env` and `tc`, outdoors and
-/// its terrain category, are blank indoors).
-pub const CHOICE_KEYS: [&str; 12] = [
-    "s", "ax", "w", "f", "pm", "hm", "sm", "wm", "nl", "hf", "env", "tc",
+/// its terrain category, are blank indoors; `hk`, what the heat made inside is given as, is blank
+/// unless the body makes heat).
+pub const CHOICE_KEYS: [&str; 13] = [
+    "s", "ax", "w", "f", "pm", "hm", "sm", "hk", "wm", "nl", "hf", "env", "tc",
 ];
 
 /// The verdict columns of the CSV: the card's id and the column's heading.

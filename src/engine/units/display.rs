@@ -100,6 +100,8 @@ pub fn resolution(u: &Unit) -> Resolution {
         (Dim::Angle, _) => step(0),
         (Dim::Oktas, _) => step(1),
         (Dim::Wavelength, _) => sig_at_least(2, 1),
+        (Dim::Current, _) => sig_at_least(3, 0),
+        (Dim::ResistancePerLength, _) => sig(4),
         _ => sig(3),
     }
 }

@@ -53,10 +53,14 @@ pub enum Dim {
     Oktas,
     /// A wavelength (an infrared instrument's band), µm on the page in both systems.
     Wavelength,
+    /// An electric current, A (rms for AC), in both systems.
+    Current,
+    /// A conductor's resistance per length: Ω/km on SI data sheets, Ω/mi on US ones.
+    ResistancePerLength,
 }
 
 /// Every dimension, in the order the page lists them.
-pub const ALL_DIMS: [Dim; 29] = [
+pub const ALL_DIMS: [Dim; 31] = [
     Dim::Temperature,
     Dim::Length,
     Dim::Speed,
@@ -86,6 +90,8 @@ pub const ALL_DIMS: [Dim; 29] = [
     Dim::HeatFlux,
     Dim::Oktas,
     Dim::Wavelength,
+    Dim::Current,
+    Dim::ResistancePerLength,
 ];
 
 /// A unit system for the global switch.
@@ -159,6 +165,8 @@ pub const UNITS: &[Unit] = &[
         BTU_IT / HOUR / FT,
         0.0,
     ),
+    // Heat-tracing data sheets give W/ft in US units.
+    u("W/ft", "W/ft", Dim::HeatFlowPerLength, 1.0 / FT, 0.0),
     u("W/mK", "W/(m·K)", Dim::ThermalConductivity, 1.0, 0.0),
     u(
         "Btu/hftF",
@@ -257,6 +265,17 @@ pub const UNITS: &[Unit] = &[
     u("okta", "oktas", Dim::Oktas, 1.0, 0.0),
     u("m-wl", "m", Dim::Wavelength, 1.0, 0.0),
     u("um", "µm", Dim::Wavelength, 1e-6, 0.0),
+    u("A", "A", Dim::Current, 1.0, 0.0),
+    u("ohm/m", "Ω/m", Dim::ResistancePerLength, 1.0, 0.0),
+    u("ohm/km", "Ω/km", Dim::ResistancePerLength, 1e-3, 0.0),
+    u("ohm/mi", "Ω/mi", Dim::ResistancePerLength, 1.0 / MILE, 0.0),
+    u(
+        "ohm/kft",
+        "Ω/kft",
+        Dim::ResistancePerLength,
+        1.0 / (1000.0 * FT),
+        0.0,
+    ),
 ];
 
 impl Unit {
@@ -340,6 +359,9 @@ pub fn default_unit(dim: Dim, system: System) -> &'static Unit {
         (Dim::HeatFlux, System::Us) => "Btu/hft2",
         (Dim::Oktas, _) => "okta",
         (Dim::Wavelength, _) => "um",
+        (Dim::Current, _) => "A",
+        (Dim::ResistancePerLength, System::Si) => "ohm/km",
+        (Dim::ResistancePerLength, System::Us) => "ohm/mi",
     };
     unit(id).expect("every default unit is in UNITS")
 }

@@ -290,4 +290,5 @@ mod defects;
 mod field;
 mod forms;
 mod inspection;
+mod made;
 mod saved;
