@@ -67,7 +67,26 @@ fn scenarios() -> Vec<Scenario> {
     f.ir_band_high = 13e-6;
     f.ir_accuracy = 1.5;
     f.ir_emissivity_uncertainty = 0.03;
-    vec![a, b, c, d, f, e]
+
+    // Heat made inside (issue #19): a tracer outdoors, a conductor, a heated sphere.
+    let mut g = e;
+    g.surface_mode = SurfaceMode::Made;
+    g.heat_made = 25.0;
+    g.hold_temp = 280.0;
+    let mut h = DEMO;
+    h.surface_mode = SurfaceMode::Made;
+    h.heat_source = scenario::HeatSource::Current;
+    h.current = 350.0;
+    h.r_low = 9.0e-5;
+    h.t_r_low = 290.0;
+    h.r_high = 1.1e-4;
+    h.t_r_high = 350.0;
+    h.conductor_limit = 360.0;
+    let mut k = DEMO;
+    k.shape = Shape::Sphere;
+    k.surface_mode = SurfaceMode::Made;
+    k.heat_body = 7.0;
+    vec![a, b, c, d, f, g, h, k, e]
 }
 
 /// A value off round numbers, still inside the field's hard limits.
