@@ -29,6 +29,12 @@ pub fn pressure_at(h: f64) -> f64 {
     P0 * (1.0 - LAPSE * h / T0).powf(G0 * M_AIR / (R_STAR * LAPSE))
 }
 
+/// The standard-atmosphere elevation, m, where the pressure is `p` Pa (the inverse of
+/// [`pressure_at`]): a site known by its barometric pressure.
+pub fn elevation_at(p: f64) -> f64 {
+    T0 / LAPSE * (1.0 - (p / P0).powf(R_STAR * LAPSE / (G0 * M_AIR)))
+}
+
 /// Standard-atmosphere temperature, K, at elevation `h` m.
 pub fn temperature_at(h: f64) -> f64 {
     T0 - LAPSE * h
@@ -56,5 +62,13 @@ mod tests {
             );
         }
         assert!((temperature_at(11_000.0) - 216.65).abs() < 1e-9);
+        // The inverse reads the same table back (its pressures to their printed figures).
+        for (h, p) in [(1000.0, 89_875.0), (2000.0, 79_495.0), (5000.0, 54_020.0)] {
+            assert!(
+                (elevation_at(p) - h).abs() < 1.0,
+                "{p} Pa: {} m",
+                elevation_at(p)
+            );
+        }
     }
 }

@@ -9,6 +9,7 @@ use std::fmt::Write;
 
 use crate::engine::catalogue::order_text;
 use crate::engine::chart::svg::esc;
+use crate::engine::outdoors::irradiance::Irradiance;
 use crate::engine::scenario::{JobResult, Outcome};
 use crate::engine::units::{format_sig, show, Dim, UnitChoice};
 
@@ -535,6 +536,43 @@ pub fn figures(o: &Outcome, c: &UnitChoice, run: &str) -> String {
         "radiant_temperature",
         o.radiant_temp,
         t,
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Sun above the horizon",
+        "sun_elevation",
+        o.sun_elevation,
+        Some(Dim::Angle),
+        c,
+        "",
+    );
+    let sky = |f: fn(&Irradiance) -> f64| o.sunlight.as_ref().map(f);
+    figure(
+        &mut m,
+        "Clear-sky beam facing the sun",
+        "clear_beam",
+        sky(|g| g.beam_normal),
+        Some(Dim::HeatFlux),
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Clear-sky diffuse, level ground",
+        "clear_diffuse",
+        sky(|g| g.diffuse_horizontal),
+        Some(Dim::HeatFlux),
+        c,
+        "",
+    );
+    figure(
+        &mut m,
+        "Clear-sky global, level ground",
+        "clear_global",
+        sky(|g| g.global_horizontal),
+        Some(Dim::HeatFlux),
         c,
         "",
     );

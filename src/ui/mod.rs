@@ -23,7 +23,7 @@ use unit_select::UnitSelect;
 use crate::engine::chart::svg::esc;
 use crate::engine::scenario::{
     self, Axis, Field, FieldSpec, FluidKind, Group, HeatSource, HumidityInput, Outcome,
-    PressureInput, Scenario, Setting, Shape, SurfaceMode, Wind, FIELDS,
+    PressureInput, Scenario, Setting, Shape, SunInput, SurfaceMode, Wind, FIELDS,
 };
 use crate::engine::units::{self, format_sig, Dim, System, UnitChoice};
 
@@ -348,6 +348,14 @@ pub fn App() -> impl IntoView {
         },
         |_| true,
     );
+    let sun_toggle = toggle(
+        "sun-input",
+        "Sunlight typed",
+        "Clear sky at a date, time and place",
+        |s| s.sun_input == SunInput::Typed,
+        |s, a| s.sun_input = if a { SunInput::Typed } else { SunInput::Place },
+        |s| s.outdoors(),
+    );
     let terrain_options = crate::engine::outdoors::wind::Terrain::ALL
         .into_iter()
         .map(|t| {
@@ -603,6 +611,9 @@ pub fn App() -> impl IntoView {
                             }>{terrain_options}</select>
                         </div>
                         {fields_of(Group::Outdoors)}
+                        {sun_toggle}
+                        {pickers::sun_place(scenario)}
+                        {fields_of(Group::Sun)}
                         {pickers::typical_picker(scenario, choice, text_of, &crate::engine::catalogue::SOLAR_ABSORPTANCES, Field::Absorptance, "in-as-pick", "Typical solar absorptances", "Choose a finish, or type the absorptance above")}
                     </div>
                 </section>

@@ -148,13 +148,13 @@ pub fn layer_picker(scenario: RwSignal<Scenario>) -> impl IntoView {
 /// spheres), or where heat made inside is lost (any body).
 pub fn surface_mode(scenario: RwSignal<Scenario>) -> impl IntoView {
     let pick = move |m: SurfaceMode| {
-    scenario.update(|s| {
-        // Working the surface out starts from the bare line: layers are added on purpose.
-        if m == SurfaceMode::Solved && !s.solved() {
-            s.layer_count = 0;
-        }
-        s.surface_mode = m;
-    })
+        scenario.update(|s| {
+            // Working the surface out starts from the bare line: layers are added on purpose.
+            if m == SurfaceMode::Solved && !s.solved() {
+                s.layer_count = 0;
+            }
+            s.surface_mode = m;
+        })
     };
     view! {
     <div class="toggle" role="group" aria-label="surface-mode" data-toggle="surface-mode">
@@ -166,5 +166,77 @@ pub fn surface_mode(scenario: RwSignal<Scenario>) -> impl IntoView {
         <button type="button" aria-pressed=move || scenario.with(|s| s.makes_heat()).to_string()
             on:click=move |_| pick(SurfaceMode::Made)>"Heat made inside"</button>
     </div>
+    }
+}
+
+/// The instant of a clear sky from a date and place: the device's local date and time (its own
+/// time zone, the one on site), kept as seconds since 1970 UTC; and the atmosphere's type.
+pub fn sun_place(scenario: RwSignal<Scenario>) -> impl IntoView {
+    // Local calendar fields of an instant, and back, through the browser's own clock.
+    let local_text = |t: f64| {
+        let d = js_sys::Date::new(&wasm_bindgen::JsValue::from_f64(t * 1000.0));
+        format!(
+            "{:04}-{:02}-{:02}T{:02}:{:02}",
+            d.get_full_year(),
+            d.get_month() + 1,
+            d.get_date(),
+            d.get_hours(),
+            d.get_minutes()
+        )
+    };
+    let utc_text = |t: f64| {
+        let d = js_sys::Date::new(&wasm_bindgen::JsValue::from_f64(t * 1000.0));
+        format!(
+            "{:04}-{:02}-{:02} {:02}:{:02} UTC",
+            d.get_utc_full_year(),
+            d.get_utc_month() + 1,
+            d.get_utc_date(),
+            d.get_utc_hours(),
+            d.get_utc_minutes()
+        )
+    };
+    let set_local = move |ev: leptos::ev::Event| {
+        // "YYYY-MM-DDTHH:MM" from the picker; anything else (cleared) leaves the instant as it is.
+        let v = event_target_value(&ev);
+        let n: Vec<i32> = v
+            .split(['-', 'T', ':'])
+            .filter_map(|p| p.parse().ok())
+            .collect();
+        if let [y, mo, d, h, mi] = n[..] {
+            if (1583..=9999).contains(&y) {
+                let date = js_sys::Date::new_with_year_month_day_hr_min(y as u32, mo - 1, d, h, mi);
+                let t = date.get_time() / 1000.0;
+                if t.is_finite() {
+                    scenario.update(|s| s.sun_time = t);
+                }
+            }
+        }
+    };
+    let climates = crate::engine::outdoors::irradiance::Climate::ALL
+        .into_iter()
+        .map(|c| {
+            view! {
+                <option value=scenario::climate_id(c) prop:selected=move || scenario.with(|s| s.climate == c)>
+                    {c.name()}
+                </option>
+            }
+        })
+        .collect_view();
+    view! {
+        <div class:hidden=move || !scenario.with(|s| s.outdoors() && s.sun_input == scenario::SunInput::Place)>
+            <div class="field">
+                <label for="in-sun-time">"Local date and time"<small>{move || format!("this device's time zone; {}", utc_text(scenario.with(|s| s.sun_time)))}</small></label>
+                <input id="in-sun-time" type="datetime-local" data-field="tu"
+                    prop:value=move || local_text(scenario.with(|s| s.sun_time)) on:change=set_local/>
+            </div>
+            <div class="field">
+                <label for="in-climate">"Clear-sky atmosphere"<small>"Hottel's climate type: the beam that gets through"</small></label>
+                <select id="in-climate" class="wide" data-choice="climate" on:change=move |ev| {
+                    if let Some(c) = scenario::climate_from_id(&event_target_value(&ev)) {
+                        scenario.update(|s| s.climate = c);
+                    }
+                }>{climates}</select>
+            </div>
+        </div>
     }
 }

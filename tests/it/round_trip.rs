@@ -86,7 +86,14 @@ fn scenarios() -> Vec<Scenario> {
     k.shape = Shape::Sphere;
     k.surface_mode = SurfaceMode::Made;
     k.heat_body = 7.0;
-    vec![a, b, c, d, f, g, h, k, e]
+    // The sun from a date, time and place (issue #19).
+    let mut l = e;
+    l.sun_input = scenario::SunInput::Place;
+    l.latitude = -33.8688;
+    l.longitude = 151.2093;
+    l.sun_time = 1_781_000_000.0;
+    l.climate = scenario::Climate::Tropical;
+    vec![a, b, c, d, f, g, h, k, l, e]
 }
 
 /// A value off round numbers, still inside the field's hard limits.

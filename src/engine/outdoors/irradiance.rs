@@ -37,7 +37,7 @@ pub fn extraterrestrial_normal(distance_au: f64) -> Result<f64, EngineError> {
 }
 
 /// The climate types of Hottel's correction factors (Duffie & Beckman, Table 2.8.1).
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
 pub enum Climate {
     Tropical,
     MidlatitudeSummer,

@@ -25,6 +25,7 @@
 //! an [`EngineError`] naming the input (by the link key in [`keys`]); outside a method's
 //! published range it computes and flags ([`crate::engine::validity::Flagged`]).
 
+mod clock;
 pub mod irradiance;
 pub mod joule;
 pub mod sky;

@@ -3,6 +3,7 @@
 //! is typed or worked out.
 
 use super::*;
+pub use crate::engine::outdoors::irradiance::Climate;
 pub use crate::engine::outdoors::wind::Terrain;
 
 /// Where the body is: indoors it radiates to one typed surroundings temperature and the typed
@@ -202,6 +203,29 @@ pub enum SurfaceMode {
     /// Heat made inside (issue #19): a tracer, a heater or a current through a conductor holds
     /// the surface at the temperature where it loses what it makes (link `sm=h`).
     Made,
+}
+
+/// Where the sunlight comes from outdoors: typed (beam, diffuse, global), or a clear sky at a
+/// date, time and place (the sun by NREL SPA, the irradiance by Hottel with Liu & Jordan; link
+/// `sun=t` or `sun=p`).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, serde::Serialize, serde::Deserialize)]
+pub enum SunInput {
+    Typed,
+    Place,
+}
+
+/// A clear-sky atmosphere's id in links (`cl=…`) and its name.
+pub fn climate_id(c: Climate) -> &'static str {
+    match c {
+        Climate::Tropical => "tr",
+        Climate::MidlatitudeSummer => "ms",
+        Climate::SubarcticSummer => "ss",
+        Climate::MidlatitudeWinter => "mw",
+    }
+}
+
+pub fn climate_from_id(id: &str) -> Option<Climate> {
+    Climate::ALL.into_iter().find(|c| climate_id(*c) == id)
 }
 
 /// What the heat made inside is given as: a heat (W per metre, or W for a sphere), or a current

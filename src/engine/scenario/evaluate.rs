@@ -90,6 +90,10 @@ pub struct Outcome {
     /// per metre, W/m (none for a sphere). A gain: `q_total` = convection + radiation − this.
     pub solar_total: Option<f64>,
     pub solar_per_length: Option<f64>,
+    /// Outdoors with a clear sky at a date, time and place: the sun's elevation above the
+    /// horizon (refracted), degrees, and the clear-sky irradiance used (W/m²).
+    pub sun_elevation: Option<f64>,
+    pub sunlight: Option<crate::engine::outdoors::irradiance::Irradiance>,
     /// Outdoors: the typed wind carried to the body's height and terrain, m/s.
     pub wind_at_body: Option<f64>,
     /// Outdoors, for a level cylinder or bar in a level wind: the factor on forced convection
@@ -351,6 +355,14 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
             .outdoor
             .as_ref()
             .and_then(|_| s.shape.perimeter_over_d().map(|_| q_solar_unit)),
+        sun_elevation: env
+            .outdoor
+            .as_ref()
+            .and_then(|o| o.sun.map(|(pos, _)| pos.elevation)),
+        sunlight: env
+            .outdoor
+            .as_ref()
+            .and_then(|o| o.sun.map(|_| o.irradiance)),
         wind_at_body: env.outdoor.as_ref().map(|o| o.wind_at_body),
         yaw_factor: env
             .outdoor

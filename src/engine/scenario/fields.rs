@@ -56,6 +56,8 @@ pub enum Field {
     Cloud,
     GroundTemp,
     SkyView,
+    Latitude,
+    Longitude,
     BeamNormal,
     DiffuseHorizontal,
     GlobalHorizontal,
@@ -91,8 +93,10 @@ pub enum Group {
     /// The optional third point of the layers' k(T): folded on the page.
     LayerCurve,
     Job,
-    /// Sky, sun and wind at the body: outdoors only.
+    /// Sky and wind at the body: outdoors only.
     Outdoors,
+    /// The sun outdoors: where and when, or the sunlight typed, and how much of it is absorbed.
+    Sun,
 }
 
 /// One input, the single source of truth for it: identity, group, link key, label and help as
@@ -251,6 +255,12 @@ fn yawed(s: &Scenario) -> bool {
 fn read_ir(s: &Scenario) -> bool {
     s.reads()
 }
+fn sun_from_place(s: &Scenario) -> bool {
+    s.outdoors() && s.sun_input == SunInput::Place
+}
+fn sun_typed(s: &Scenario) -> bool {
+    s.outdoors() && s.sun_input == SunInput::Typed
+}
 fn heat_per_length(s: &Scenario) -> bool {
     s.makes_heat() && !s.shape.is_sphere() && !s.current_given()
 }
@@ -265,7 +275,7 @@ fn heat_given(s: &Scenario) -> bool {
 }
 
 #[rustfmt::skip]
-pub const FIELDS: [FieldSpec; 73] = [
+pub const FIELDS: [FieldSpec; 75] = [
     f(Field::Diameter, Group::Body, "D", "Size D", Dim::Length, (0.0, true, 100.0), "as drawn: the width across the stream (bare outside diameter of a pipe)", at!(diameter), always),
     f(Field::Length, Group::Body, "L", "Length", Dim::RunLength, (0.0, true, 10_000.0), "along the axis; the height when upright", at!(length), not_sphere),
     f(Field::Speed, Group::Stream, "U", "Stream speed", Dim::Speed, (0.0, false, 300.0), "across the axis; 0 for still air; outdoors, the wind a weather report gives (10 m, 33 ft, over open ground)", at!(speed), always),
@@ -316,11 +326,13 @@ pub const FIELDS: [FieldSpec; 73] = [
     f(Field::Cloud, Group::Outdoors, "cc", "Cloud cover", Dim::Oktas, (0.0, false, 8.0), "0 clear (the coldest sky: the worst case for freezing and sweating) to 8 overcast", at!(cloud), outdoors),
     f(Field::GroundTemp, Group::Outdoors, "Tg", "Ground temperature", Dim::Temperature, (0.0, true, 3000.0), "what the lower half sees; the air's if unsure", at!(t_ground), outdoors),
     f(Field::SkyView, Group::Outdoors, "fs", "Share of the view that is sky", Dim::Ratio, (0.0, false, 1.0), "0.5 in the open; less under a canopy or beside a wall", at!(sky_view), outdoors),
-    f(Field::BeamNormal, Group::Outdoors, "Gb", "Direct sunlight", Dim::HeatFlux, (0.0, false, 1500.0), "beam irradiance facing the sun; 0 at night, about 900 at a clear noon (common practice)", at!(beam_normal), outdoors),
-    f(Field::DiffuseHorizontal, Group::Outdoors, "Gd", "Diffuse sunlight", Dim::HeatFlux, (0.0, false, 1500.0), "from the sky on level ground; about 100 clear, more under thin cloud (common practice)", at!(diffuse), outdoors),
-    f(Field::GlobalHorizontal, Group::Outdoors, "Gg", "Global sunlight on level ground", Dim::HeatFlux, (0.0, false, 1500.0), "direct plus diffuse on the ground: what the ground reflects", at!(global), outdoors),
-    f(Field::Absorptance, Group::Outdoors, "as", "Solar absorptance", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 dark paint, 0.3 white paint, 0.15 bright aluminium (common practice)", at!(absorptance), outdoors),
-    f(Field::Albedo, Group::Outdoors, "alb", "Ground reflectance", Dim::Ratio, (0.0, false, 1.0), "about 0.2 grass or soil, 0.3 concrete, 0.8 fresh snow (common practice)", at!(albedo), outdoors),
+    f(Field::Latitude, Group::Sun, "lat", "Latitude", Dim::Coordinate, (-90.0, false, 90.0), "of the site, north positive (a map app shows it)", at!(latitude), sun_from_place),
+    f(Field::Longitude, Group::Sun, "lon", "Longitude", Dim::Coordinate, (-180.0, false, 180.0), "of the site, east of Greenwich positive", at!(longitude), sun_from_place),
+    f(Field::BeamNormal, Group::Sun, "Gb", "Direct sunlight", Dim::HeatFlux, (0.0, false, 1500.0), "beam irradiance facing the sun; 0 at night, about 900 at a clear noon (common practice)", at!(beam_normal), sun_typed),
+    f(Field::DiffuseHorizontal, Group::Sun, "Gd", "Diffuse sunlight", Dim::HeatFlux, (0.0, false, 1500.0), "from the sky on level ground; about 100 clear, more under thin cloud (common practice)", at!(diffuse), sun_typed),
+    f(Field::GlobalHorizontal, Group::Sun, "Gg", "Global sunlight on level ground", Dim::HeatFlux, (0.0, false, 1500.0), "direct plus diffuse on the ground: what the ground reflects", at!(global), sun_typed),
+    f(Field::Absorptance, Group::Sun, "as", "Solar absorptance", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 dark paint, 0.3 white paint, 0.15 bright aluminium (common practice)", at!(absorptance), outdoors),
+    f(Field::Albedo, Group::Sun, "alb", "Ground reflectance", Dim::Ratio, (0.0, false, 1.0), "about 0.2 grass or soil, 0.3 concrete, 0.8 fresh snow (common practice)", at!(albedo), outdoors),
     f(Field::BodyHeight, Group::Outdoors, "zb", "Height above ground", Dim::RunLength, (0.0, true, 1000.0), "of the body: the wind there is less than the report's at 10 m", at!(body_height), outdoors),
     f(Field::Yaw, Group::Outdoors, "yaw", "Wind angle to the axis", Dim::Angle, (0.0, false, 90.0), "90° square across (the most cooling), 0° along it", at!(yaw), yawed),
     f(Field::IrReading, Group::Surface, "Tir", "Infrared reading", Dim::Temperature, (0.0, true, 3000.0), "the temperature the instrument displayed on the surface", at!(ir_reading), read_ir),

@@ -66,6 +66,15 @@ pub fn to_fragment(s: &Scenario, system: System) -> String {
             s.setting.id(),
             s.terrain.category()
         ));
+        match s.sun_input {
+            SunInput::Typed => out.push_str("&sun=t"),
+            // The instant in seconds since 1970 UTC, shortest round-trip form like every value.
+            SunInput::Place => out.push_str(&format!(
+                "&sun=p&tu={}&cl={}",
+                s.sun_time,
+                climate_id(s.climate)
+            )),
+        }
     }
     for spec in FIELDS.iter().filter(|sp| s.uses(sp.field)) {
         out.push_str(&format!("&{}={}", spec.key, s.get(spec.field)));
@@ -216,6 +225,27 @@ pub fn from_fragment(fragment: &str) -> Result<(Scenario, System), String> {
                     "td" => HumidityInput::DewPoint,
                     _ => return Err("the link names an unknown way to give humidity".into()),
                 }
+            }
+            "sun" => {
+                s.sun_input = match value {
+                    "t" => SunInput::Typed,
+                    "p" => SunInput::Place,
+                    _ => return Err("the link names an unknown way to give the sunlight".into()),
+                }
+            }
+            "cl" => {
+                s.climate = climate_from_id(value)
+                    .ok_or_else(|| "the link names an unknown clear-sky atmosphere".to_string())?
+            }
+            "tu" => {
+                let t = value
+                    .parse::<f64>()
+                    .ok()
+                    .filter(|t| crate::engine::outdoors::sun::Utc::from_unix(*t).is_ok())
+                    .ok_or_else(|| {
+                        "the link's date and time is not a date from 1583 to 9999".to_string()
+                    })?;
+                s.sun_time = t;
             }
             _ => {
                 let Some(spec) = FIELDS.iter().find(|sp| sp.key == key) else {

@@ -160,6 +160,14 @@ pub struct Scenario {
     pub t_r_high: f64,
     pub hold_temp: f64,
     pub conductor_limit: f64,
+    /// Outdoors: sunlight typed, or a clear sky at a date, time and place — latitude and
+    /// longitude, degrees (north and east positive), the instant as seconds since 1970-01-01
+    /// 00:00 UTC, and the atmosphere's type for Hottel's clear-sky beam.
+    pub sun_input: SunInput,
+    pub latitude: f64,
+    pub longitude: f64,
+    pub sun_time: f64,
+    pub climate: Climate,
 }
 
 /// The demo that opens by default (invented): a bare 2-inch line (60.3 mm outside diameter), a
@@ -261,6 +269,12 @@ pub const DEMO: Scenario = Scenario {
     // 5 °C to hold a water line above freezing, 75 °C for a bare conductor (common practice).
     hold_temp: 278.15,
     conductor_limit: 348.15,
+    // An invented site at 50° N, 10° E at noon UTC on the winter solstice of 2026.
+    sun_input: SunInput::Typed,
+    latitude: 50.0,
+    longitude: 10.0,
+    sun_time: 1_797_854_400.0,
+    climate: Climate::MidlatitudeWinter,
 };
 
 pub const DEMO_TITLE: &str = "Demo: a bare 2-inch line on a windy roof";

@@ -7,7 +7,9 @@ use super::*;
 use crate::engine::error::Subject;
 use crate::engine::outdoors::irradiance::{self, Irradiance};
 use crate::engine::outdoors::sky::{self, Sky, ViewFactors};
+use crate::engine::outdoors::sun::{self, SunPosition};
 use crate::engine::outdoors::wind::{self, Exposure};
+use crate::engine::validity::Flagged;
 
 /// The hour of Berdahl & Martin's diurnal term: 6 h local solar time, where cos(2π·h/24) is
 /// zero — the daily mean of the fit (±0.013 in emissivity, under 1 K of sky temperature), as
@@ -44,6 +46,9 @@ pub struct Outdoor {
     pub wind_at_body: f64,
     /// Whether the yaw factor applies (a level cylinder or bar in a level wind).
     pub yawed: bool,
+    /// The sun's position when the sunlight is a clear sky at a date, time and place (none
+    /// when it is typed), and the site elevation that sky was worked out for, m.
+    pub sun: Option<(SunPosition, f64)>,
     /// Flags of the sky model and the wind profile.
     pub flags: Vec<Flag>,
 }
@@ -92,7 +97,18 @@ impl Scenario {
         flags.extend(sky.flags);
         let view = ViewFactors::with_sky(self.sky_view)?;
         let t_radiant = sky::radiant_surroundings(view, sky.value.temperature, self.t_ground)?;
-        let irradiance = Irradiance::typed(self.beam_normal, self.diffuse, self.global)?;
+        let (irradiance, sun) = match self.sun_input {
+            SunInput::Typed => (
+                Irradiance::typed(self.beam_normal, self.diffuse, self.global)?,
+                None,
+            ),
+            SunInput::Place => {
+                let (pos, irr, elevation) = self.clear_sky(p)?;
+                flags.extend(pos.flags);
+                flags.extend(irr.flags);
+                (irr.value, Some((pos.value, elevation)))
+            }
+        };
         let beam_share = match self.shape {
             Shape::Sphere => 0.25,
             Shape::Cylinder => 1.0 / std::f64::consts::PI,
@@ -140,8 +156,37 @@ impl Scenario {
                     self.speed * ratio.value,
                 )?,
                 yawed,
+                sun,
                 flags,
             }),
         })
+    }
+
+    /// The sun at the scenario's instant and site by NREL SPA (refracted through the stream's
+    /// air at the site pressure `p`), and the clear-sky irradiance at its zenith by Hottel with
+    /// Liu & Jordan for the chosen atmosphere, with the site elevation used, m: the typed one,
+    /// or the standard atmosphere's for a typed pressure.
+    pub fn clear_sky(
+        &self,
+        p: f64,
+    ) -> Result<(Flagged<SunPosition>, Flagged<Irradiance>, f64), EngineError> {
+        let elevation = match self.pressure_input {
+            PressureInput::Elevation => self.elevation,
+            PressureInput::Absolute => atmosphere::elevation_at(p),
+        };
+        let site = sun::Site {
+            latitude: self.latitude,
+            longitude: self.longitude,
+            elevation,
+        };
+        let air = sun::Air {
+            pressure: p,
+            temperature: self.fluid_temp,
+        };
+        let at = sun::Utc::from_unix(self.sun_time)?;
+        let pos = sun::position(&at, &site, &air, sun::DELTA_T_NOW)?;
+        let g0 = irradiance::extraterrestrial_normal(pos.value.distance)?;
+        let irr = irradiance::hottel_liu_jordan(pos.value.zenith, elevation, self.climate, g0)?;
+        Ok((pos, irr, elevation))
     }
 }

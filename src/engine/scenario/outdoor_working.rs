@@ -37,10 +37,38 @@ pub(crate) fn steps(s: &Scenario, o: &Outdoor, w: &WorkingInputs) -> Vec<Step> {
         ),
     });
     let unit = if s.shape.is_sphere() { "W" } else { "W/m" };
+    let source = match &o.sun {
+        None => "Typed irradiance".to_string(),
+        Some((pos, elevation)) => {
+            let t = crate::engine::outdoors::sun::Utc::from_unix(s.sun_time);
+            let when = t
+                .map(|t| {
+                    format!(
+                        "{:04}-{:02}-{:02} {:02}:{:02} UTC",
+                        t.year, t.month, t.day, t.hour, t.minute
+                    )
+                })
+                .unwrap_or_default();
+            format!(
+                "The sun by {} at {when}, latitude {}°, longitude {}°, site elevation {} m: zenith {}° (refracted), azimuth {}° from north, {} AU away; a clear sky by {} for a {} atmosphere (extraterrestrial {} W/m²)",
+                crate::engine::outdoors::sun::SPA,
+                g(s.latitude),
+                g(s.longitude),
+                g(*elevation),
+                g(pos.zenith),
+                g(pos.azimuth),
+                g(pos.distance),
+                irradiance::HOTTEL,
+                s.climate.name(),
+                g(irradiance::extraterrestrial_normal(pos.distance).unwrap_or(f64::NAN))
+            )
+        }
+    };
     out.push(Step {
         title: "Sun",
         text: format!(
-            "Typed irradiance: beam G_bn = {} W/m² facing the sun, diffuse G_dh = {} W/m² and global G_gh = {} W/m² on level ground; solar absorptance α_s = {}, ground reflectance ρ_g = {}. The beam taken square to the axis (the worst case) on the projected area, {} of the surface; the diffuse sky and the ground's reflection on the whole surface through its views (an isotropic sky and ground, after {}): q_sun = α_s·(G_bn·{} + G_dh·F_sky + ρ_g·G_gh·F_gnd) = {} W/m² of surface, {} {} absorbed — a gain in the balance: conduction out = convection + radiation − sun.",
+            "{}: beam G_bn = {} W/m² facing the sun, diffuse G_dh = {} W/m² and global G_gh = {} W/m² on level ground; solar absorptance α_s = {}, ground reflectance ρ_g = {}. The beam taken square to the axis (the worst case) on the projected area, {} of the surface; the diffuse sky and the ground's reflection on the whole surface through its views (an isotropic sky and ground, after {}): q_sun = α_s·(G_bn·{} + G_dh·F_sky + ρ_g·G_gh·F_gnd) = {} W/m² of surface, {} {} absorbed — a gain in the balance: conduction out = convection + radiation − sun.",
+            source,
             g(o.irradiance.beam_normal),
             g(o.irradiance.diffuse_horizontal),
             g(o.irradiance.global_horizontal),

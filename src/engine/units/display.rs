@@ -101,6 +101,8 @@ pub fn resolution(u: &Unit) -> Resolution {
         (Dim::Oktas, _) => step(1),
         (Dim::Wavelength, _) => sig_at_least(2, 1),
         (Dim::Current, _) => sig_at_least(3, 0),
+        // A coordinate keeps four decimals (about 10 m on the ground).
+        (Dim::Coordinate, _) => sig_at_least(2, 4),
         (Dim::ResistancePerLength, _) => sig(4),
         _ => sig(3),
     }

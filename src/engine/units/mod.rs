@@ -55,12 +55,14 @@ pub enum Dim {
     Wavelength,
     /// An electric current, A (rms for AC), in both systems.
     Current,
+    /// A latitude or longitude, degrees, in both systems.
+    Coordinate,
     /// A conductor's resistance per length: Ω/km on SI data sheets, Ω/mi on US ones.
     ResistancePerLength,
 }
 
 /// Every dimension, in the order the page lists them.
-pub const ALL_DIMS: [Dim; 31] = [
+pub const ALL_DIMS: [Dim; 32] = [
     Dim::Temperature,
     Dim::Length,
     Dim::Speed,
@@ -91,6 +93,7 @@ pub const ALL_DIMS: [Dim; 31] = [
     Dim::Oktas,
     Dim::Wavelength,
     Dim::Current,
+    Dim::Coordinate,
     Dim::ResistancePerLength,
 ];
 
@@ -266,6 +269,7 @@ pub const UNITS: &[Unit] = &[
     u("m-wl", "m", Dim::Wavelength, 1.0, 0.0),
     u("um", "µm", Dim::Wavelength, 1e-6, 0.0),
     u("A", "A", Dim::Current, 1.0, 0.0),
+    u("deg-geo", "°", Dim::Coordinate, 1.0, 0.0),
     u("ohm/m", "Ω/m", Dim::ResistancePerLength, 1.0, 0.0),
     u("ohm/km", "Ω/km", Dim::ResistancePerLength, 1e-3, 0.0),
     u("ohm/mi", "Ω/mi", Dim::ResistancePerLength, 1.0 / MILE, 0.0),
@@ -360,6 +364,7 @@ pub fn default_unit(dim: Dim, system: System) -> &'static Unit {
         (Dim::Oktas, _) => "okta",
         (Dim::Wavelength, _) => "um",
         (Dim::Current, _) => "A",
+        (Dim::Coordinate, _) => "deg-geo",
         (Dim::ResistancePerLength, System::Si) => "ohm/km",
         (Dim::ResistancePerLength, System::Us) => "ohm/mi",
     };

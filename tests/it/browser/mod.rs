@@ -292,3 +292,4 @@ mod forms;
 mod inspection;
 mod made;
 mod saved;
+mod sun;
