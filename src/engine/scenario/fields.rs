@@ -26,7 +26,6 @@ pub enum Field {
     ProcessGlycol,
     WallThickness,
     WallK,
-    Emissivity,
     Surround,
     Layer1T,
     Layer1Ka,
@@ -81,6 +80,7 @@ pub enum Field {
     ResistanceHighTemp,
     HoldTemp,
     ConductorLimit,
+    Emissivity,
 }
 
 /// The group a field is shown in.
@@ -296,7 +296,6 @@ pub const FIELDS: [FieldSpec; 75] = [
     f(Field::ProcessGlycol, Group::Surface, "xgp", "Glycol in the process fluid", Dim::Fraction, (0.0, false, 0.6), "by mass, 0–60 %", at!(process_glycol), process_glycol),
     f(Field::WallThickness, Group::Surface, "tw", "Wall thickness", Dim::Length, (0.0, false, 1.0), "of the pipe or vessel", at!(wall_thickness), solved),
     f(Field::WallK, Group::Surface, "kw", "Wall conductivity", Dim::ThermalConductivity, (0.0, true, 1e4), "of your wall material", at!(wall_k), wall_typed),
-    f(Field::Emissivity, Group::Surface, "e", "Emissivity", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 painted or oxidised, 0.05 bright aluminium (common practice)", at!(emissivity), always),
     f(Field::Surround, Group::Surface, "Tr", "Surroundings temperature", Dim::Temperature, (0.0, true, 3000.0), "what the surface sees (walls, roof); the stream's if unsure", at!(t_surround), indoors),
     f(Field::Layer1T, Group::Layers, "t1", "Layer 1 thickness", Dim::Length, (0.0, false, 2.0), "innermost insulation", at!(layer_t[0]), layer_1),
     f(Field::Layer1Ka, Group::Layers, "ka1", "Layer 1 k at mean temperature A", Dim::LayerConductivity, (0.0, true, 100.0), "from the data sheet", at!(layer_ka[0]), layer_1),
@@ -351,6 +350,7 @@ pub const FIELDS: [FieldSpec; 75] = [
     f(Field::ResistanceHighTemp, Group::Surface, "TR2", "Higher data-sheet temperature", Dim::Temperature, (0.0, true, 3000.0), "where the sheet gives the second resistance", at!(t_r_high), current_given),
     f(Field::HoldTemp, Group::Surface, "Th", "Keep the surface at least at", Dim::Temperature, (0.0, true, 3000.0), "the heat that holds it there is shown; {T:278.15} keeps water lines from freezing (common practice)", at!(hold_temp), heat_given),
     f(Field::ConductorLimit, Group::Surface, "Tcx", "Conductor temperature limit", Dim::Temperature, (0.0, true, 3000.0), "the current that brings it there is shown; from the conductor's or cable's rating", at!(conductor_limit), current_given),
+    f(Field::Emissivity, Group::Surface, "e", "Emissivity", Dim::Ratio, (0.0, false, 1.0), "of the outer surface: about 0.9 painted or oxidised, 0.05 bright aluminium (common practice)", at!(emissivity), always),
 ];
 
 /// The row of a field: `FIELDS` is in `Field`'s order (a test holds it so).

@@ -146,6 +146,14 @@ fn nothing_in_the_results_or_the_survey_is_clipped_and_us_pages_show_no_si_text(
                 )
                 .await;
                 assert_eq!(clipped, json!([]), "{w}×{h} {frag}: clipped");
+                // Plot text reads at 11 px or more: its font size in the SVG's units times the
+                // scale the page draws the SVG at.
+                let small = js(
+                    &c,
+                    "return [...document.querySelectorAll('.plot svg')].filter(s => s.getBoundingClientRect().width > 0).flatMap(s => { const k = s.getBoundingClientRect().width / s.viewBox.baseVal.width; return [...s.querySelectorAll('text')].map(t => [t.textContent, parseFloat(getComputedStyle(t).fontSize) * k]).filter(([, px]) => px < 10.95).map(([t, px]) => t + ' ' + px.toFixed(1)); });",
+                )
+                .await;
+                assert_eq!(small, json!([]), "{w}×{h} {frag}: plot text under 11 px");
                 if frag.ends_with("u=us") {
                     // What a person reads: rendered text, without the unit pickers' lists.
                     let text = js(
