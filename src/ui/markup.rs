@@ -541,7 +541,7 @@ pub fn figures(o: &Outcome, c: &UnitChoice, run: &str) -> String {
     );
     figure(
         &mut m,
-        "Sun above the horizon",
+        "Sun's elevation (below 0: under the horizon)",
         "sun_elevation",
         o.sun_elevation,
         Some(Dim::Angle),

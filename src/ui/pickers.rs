@@ -159,7 +159,7 @@ pub fn surface_mode(scenario: RwSignal<Scenario>) -> impl IntoView {
     view! {
     <div class="toggle" role="group" aria-label="surface-mode" data-toggle="surface-mode">
         <button type="button" aria-pressed=move || scenario.with(|s| !s.solved() && !s.makes_heat()).to_string()
-            on:click=move |_| pick(SurfaceMode::Given)>"Surface temperature known"</button>
+            on:click=move |_| pick(SurfaceMode::Given)>"Surface known"</button>
         <button type="button" aria-pressed=move || scenario.with(|s| s.solved()).to_string()
             class:hidden=move || !scenario.with(|s| matches!(s.shape, Shape::Cylinder | Shape::Sphere))
             on:click=move |_| pick(SurfaceMode::Solved)>"Work it out from inside"</button>

@@ -170,22 +170,62 @@ pub fn sweeps(o: &Outcome, s: &crate::engine::scenario::Scenario, c: &UnitChoice
             u.symbol
         )
     };
-    out.push(sweep_plot(
-        "loss-wind",
-        format!("Heat loss against stream speed, {span}."),
-        "stream speed",
-        Dim::Speed,
-        &xs,
-        Series {
-            label: "heat loss",
-            dim: Dim::HeatFlow,
-            values: o.wind_sweep.iter().map(|p| p.2).collect(),
-        },
-        Some((s.speed, o.q_total)),
-        vec![],
-        c,
-    ));
-    if s.solved() {
+    // Heat made inside fixes the loss: its curve against the speed would be flat.
+    if !s.makes_heat() {
+        out.push(sweep_plot(
+            "loss-wind",
+            format!("Heat loss against stream speed, {span}."),
+            "stream speed",
+            Dim::Speed,
+            &xs,
+            Series {
+                label: "heat loss",
+                dim: Dim::HeatFlow,
+                values: o.wind_sweep.iter().map(|p| p.2).collect(),
+            },
+            Some((s.speed, o.q_total)),
+            vec![],
+            c,
+        ));
+    }
+    if !o.yaw_sweep.is_empty() {
+        let xs: Vec<f64> = o.yaw_sweep.iter().map(|p| p.0).collect();
+        let caption = "against the wind's angle to the axis, 0° along it to 90° square across (Morgan's yaw factor).";
+        // Heat made inside fixes the loss: what the angle moves is the surface.
+        let (label, dim, marks, point, values): (_, _, _, _, Vec<f64>) = if s.makes_heat() {
+            let v = o.yaw_sweep.iter().map(|p| p.2).collect();
+            (
+                "surface",
+                Dim::Temperature,
+                o.surface_marks.clone(),
+                o.surface_temp,
+                v,
+            )
+        } else {
+            let v = o.yaw_sweep.iter().map(|p| p.1).collect();
+            ("heat loss", Dim::HeatFlow, vec![], o.q_total, v)
+        };
+        out.push(sweep_plot(
+            "yaw",
+            format!(
+                "{} {caption}",
+                if s.makes_heat() {
+                    "Surface temperature"
+                } else {
+                    "Heat loss"
+                }
+            ),
+            "wind angle to the axis",
+            Dim::Angle,
+            &xs,
+            Series { label, dim, values },
+            Some((s.yaw, point)),
+            marks,
+            c,
+        ));
+    }
+    // Where the surface moves with the wind (worked out, or set by heat made inside), its curve.
+    if s.solved() || s.makes_heat() {
         out.push(sweep_plot(
             "surface-wind",
             format!("Surface temperature against stream speed, {span}."),

@@ -436,7 +436,13 @@ pub fn line_chart(xs: &[f64], ys: &[f64], also: &[f64], width: f64, height: f64)
     } else {
         (0.0, 1.0)
     };
-    let x_step = nice_step(x1 - x0);
+    let mut x_step = nice_step(x1 - x0);
+    // A span the nice step does not divide but one and a half of it does (0–90°: 30, not 20)
+    // keeps the axis at the data's own ends.
+    let n = (x1 - x0) / (1.5 * x_step);
+    if (x1 - x0) % x_step > 1e-9 * x_step && (n - n.round()).abs() < 1e-9 && n.round() >= 3.0 {
+        x_step *= 1.5;
+    }
     let y_step = nice_step(y1 - y0);
     let frame = Frame {
         width,
@@ -488,5 +494,15 @@ mod line_tests {
         let c = line_chart(&xs, &[3.0, 2.0, 1.0], &[], 480.0, 240.0);
         assert_eq!(c.x_step, 20.0);
         assert_eq!(c.frame.x, (0.0, 100.0));
+    }
+
+    /// An angle from 0 to 90°: ticks every 30°, the axis ending at 90 (it ran to 100, a tenth of
+    /// the plot empty); a span the nice step divides keeps it (0–20 m/s by 5).
+    #[test]
+    fn a_quarter_turn_is_ticked_by_thirties() {
+        let c = line_chart(&[0.0, 45.0, 90.0], &[1.0, 2.0, 3.0], &[], 320.0, 240.0);
+        assert_eq!((c.x_step, c.frame.x), (30.0, (0.0, 90.0)));
+        let c = line_chart(&[0.0, 10.0, 20.0], &[1.0, 2.0, 3.0], &[], 320.0, 240.0);
+        assert_eq!((c.x_step, c.frame.x), (5.0, (0.0, 20.0)));
     }
 }

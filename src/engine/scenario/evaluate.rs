@@ -122,6 +122,9 @@ pub struct Outcome {
     /// Heat-transfer coefficient and heat flow against stream speed 0–20 m/s: (speed m/s,
     /// h W/(m²·K), heat flow W, surface K).
     pub wind_sweep: Vec<(f64, f64, f64, f64)>,
+    /// Outdoors, a level body in a level wind: heat flow and surface against the wind's angle to
+    /// the axis, 0–90°: (angle °, heat flow W, surface K).
+    pub yaw_sweep: Vec<(f64, f64, f64)>,
     /// The recommended forced correlation's name.
     pub method: &'static str,
     pub regime: &'static str,
@@ -207,6 +210,24 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         }
         _ => Vec::new(),
     };
+    // Outdoors, for a level body in a level wind: the loss as the wind swings from along the
+    // axis (0°) to square across it (90°), each angle with its own yaw factor.
+    let yaw_sweep = match &env.outdoor {
+        Some(o) if sweeps && o.yawed => grid_with(90.0, 9, s.yaw)
+            .into_iter()
+            .filter_map(|angle| {
+                let mut t = *s;
+                t.yaw = angle;
+                let e = Surroundings {
+                    yaw: crate::engine::outdoors::wind::yaw_factor(angle).ok()?,
+                    ..env.clone()
+                };
+                let o = quick(&t, p, fluid, &inside, &e).ok()?;
+                (o.0.is_finite() && o.1.is_finite()).then_some((angle, o.0, o.1))
+            })
+            .collect(),
+        _ => Vec::new(),
+    };
     let wind_sweep = if sweeps {
         grid_with(20.0, 10, s.speed)
     } else {
@@ -232,7 +253,12 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
     let q_rad_unit = finite_result("radiative heat flow", area_unit * rad_flux)?;
     let q_solar_unit = finite_result("absorbed solar heat", env.solar * area_unit)?;
     // Indoors the solar term is 0.0 exactly: the sum is today's, bit for bit.
-    let q_unit = q_conv_unit + q_rad_unit - q_solar_unit;
+    let q_unit = match &made_result {
+        // What the body makes is what it loses: the balance closed (its residual, rounding, is
+        // in the working), not a hair of noise shown as a loss.
+        Some(m) => m.made,
+        None => q_conv_unit + q_rad_unit - q_solar_unit,
+    };
     let q_per_length = s.shape.perimeter_over_d().map(|_| q_unit);
     let q_total = finite_result("heat flow", q_unit * run)?;
     let annual_energy = finite_result(
@@ -380,6 +406,7 @@ pub fn evaluate_with(s: &Scenario, sweeps: bool) -> Result<Outcome, EngineError>
         annual_cost,
         thickness_sweep,
         wind_sweep,
+        yaw_sweep,
         loss_marks: if s.uses(Field::LossTarget) && s.loss_target > 0.0 {
             vec![("loss target", s.loss_target * s.length)]
         } else {

@@ -80,9 +80,15 @@ pub(crate) fn solve(
         }
         joule::Source::Heat(_) => joule::heat_for_limit(&surf, limit).map(|l| (l.made, None)),
     };
-    let (at_limit, refused) = match inverse {
-        Ok(v) => (Some(v), None),
-        Err(e) => (None, Some(e.to_string())),
+    // A limit the surroundings and the sun alone already hold the surface beyond: a heat to keep
+    // it at least there needs none; no current brings a conductor down to it.
+    let (at_limit, refused) = match (inverse, &src) {
+        (Ok(v), _) => (Some(v), None),
+        (Err(_), joule::Source::Heat(_)) => (Some((0.0, None)), None),
+        (Err(_), joule::Source::Current { .. }) => (
+            None,
+            Some("the surroundings and the sun alone hold the conductor above this limit: no current brings it down there".to_string()),
+        ),
     };
     let made = Made {
         made: b.made,
@@ -130,10 +136,10 @@ pub(crate) fn verdict(s: &Scenario, ts: f64, m: &Made) -> Verdict {
         ts >= m.limit - tol
     };
     let summary = match (conductor, ok) {
-        (false, true) => "The heat made holds the surface at or above the temperature to keep.",
-        (false, false) => "Not enough: the surface settles below the temperature to keep. The heat that holds it there is below.",
+        (false, true) => "The heat made keeps the surface at or above the temperature to keep.",
+        (false, false) => "Not enough: the surface settles colder than the temperature to keep. The figures give the heat needed to keep it; insulating the line cuts that need (this mode takes the bare outer surface).",
         (true, true) => "The conductor stays at or below its temperature limit.",
-        (true, false) => "The conductor runs above its temperature limit. The current that brings it to the limit is below.",
+        (true, false) => "The conductor runs hotter than its temperature limit. The figures give the current that brings it to the limit.",
     };
     let mut figures = vec![
         ("surface", ts, Dim::Temperature),
@@ -145,14 +151,18 @@ pub(crate) fn verdict(s: &Scenario, ts: f64, m: &Made) -> Verdict {
         ("heat made", m.made, per),
     ];
     if let Some((q, amps)) = m.at_limit {
-        figures.push(("heat at the limit", q, per));
+        if conductor {
+            figures.push(("heat at the limit", q, per));
+        } else {
+            figures.push(("heat needed to keep it", q, per));
+        }
         if let Some(i) = amps {
             figures.push(("current at the limit", i, Dim::Current));
         }
     }
     let mut summary = summary.to_string();
     if let Some(why) = &m.refused {
-        summary.push_str(&format!(" At the limit: {why}."));
+        summary.push_str(&format!(" At the limit, {why}."));
     }
     Verdict {
         id: "made",

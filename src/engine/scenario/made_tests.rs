@@ -146,3 +146,28 @@ fn a_resistance_pair_in_the_wrong_order_is_refused() {
     s.t_r_high = s.t_r_low;
     assert!(evaluate(&s).is_err());
 }
+
+/// A temperature to keep that the surroundings alone already hold needs no heat (it was shown as
+/// a refusal in kelvin with fourteen decimals); a conductor limit below them has no current, in
+/// words; with nothing made (the sun alone warming the line) the loss is nothing, not rounding
+/// noise.
+#[test]
+fn limits_the_surroundings_already_hold_read_in_words() {
+    let mut s = DEMO;
+    s.surface_mode = SurfaceMode::Made;
+    s.hold_temp = s.fluid_temp - 30.0;
+    let m = evaluate(&s).unwrap().made.unwrap();
+    assert_eq!((m.at_limit, m.refused.as_deref()), (Some((0.0, None)), None));
+    let mut c = drake_line();
+    c.conductor_limit = 300.0;
+    let o = evaluate(&c).unwrap();
+    let why = o.made.as_ref().unwrap().refused.clone().unwrap();
+    assert!(!why.contains(" K") && why.contains("no current"), "{why}");
+    let card = o.verdicts.iter().find(|v| v.id == "made").unwrap();
+    assert!(card.summary.contains(&why));
+    c.current = 0.0;
+    c.conductor_limit = 373.15;
+    let o = evaluate(&c).unwrap();
+    assert_eq!(o.q_per_length, Some(0.0));
+    assert_eq!(o.annual_energy, 0.0);
+}

@@ -448,3 +448,26 @@ fn a_link_with_a_date_before_1583_is_refused() {
         to_fragment(&s, System::Si).replace(&format!("tu={}", s.sun_time), "tu=-20000000000");
     assert!(from_fragment(&link).is_err());
 }
+
+/// The plot against the wind's angle: from along the axis to square across it, Morgan's yaw
+/// factor rises, and so does a typed surface's loss; the operating angle is on the curve at the
+/// outcome's own loss, and a sphere (no axis) has no such plot.
+#[test]
+fn the_loss_rises_as_the_wind_turns_across_the_axis() {
+    let mut s = night();
+    s.surface_mode = SurfaceMode::Given;
+    s.yaw = 35.0;
+    let o = evaluate(&s).unwrap();
+    let angles: Vec<f64> = o.yaw_sweep.iter().map(|p| p.0).collect();
+    assert_eq!(angles.first(), Some(&0.0));
+    assert_eq!(angles.last(), Some(&90.0));
+    assert!(
+        o.yaw_sweep.windows(2).all(|w| w[1].1 > w[0].1),
+        "{:?}",
+        o.yaw_sweep
+    );
+    let at = o.yaw_sweep.iter().find(|p| p.0 == 35.0).unwrap();
+    assert!((at.1 - o.q_total).abs() <= 1e-9 * o.q_total.abs());
+    s.shape = Shape::Sphere;
+    assert!(evaluate(&s).unwrap().yaw_sweep.is_empty());
+}
