@@ -307,6 +307,17 @@ pub fn report(
     }) {
         kv(&mut m, sp.label, u(s.get(sp.field), sp.dim, c));
     }
+    // The sun's instant and atmosphere are not table fields: written here when they are used.
+    if s.outdoors() && s.sun_input == crate::engine::scenario::SunInput::Place {
+        if let Ok(t) = crate::engine::outdoors::sun::Utc::from_unix(s.sun_time) {
+            let when = format!(
+                "{:04}-{:02}-{:02} {:02}:{:02} UTC",
+                t.year, t.month, t.day, t.hour, t.minute
+            );
+            kv(&mut m, "Date and time of the clear sky", when);
+        }
+        kv(&mut m, "Clear-sky atmosphere", s.climate.name().to_string());
+    }
     m.push_str("</dl><h2>Range notes</h2>");
     if o.flags.is_empty() {
         m.push_str(
@@ -682,6 +693,22 @@ mod tests {
             "{r}"
         );
         assert!(!r.contains("<b>") && r.contains("item &quot;L-1&quot;"));
+        // A clear sky at a date and place prints its instant (in UTC) and atmosphere, which are
+        // not table fields; typed sunlight prints neither.
+        assert!(!r.contains("Date and time of the clear sky"));
+        let mut sun = DEMO;
+        sun.setting = crate::engine::scenario::Setting::Outdoors;
+        sun.sun_input = crate::engine::scenario::SunInput::Place;
+        let so = evaluate(&sun).expect("outdoors");
+        let item = Item {
+            name: "Roof",
+            tag: "",
+            place: "",
+            date: "",
+        };
+        let r2 = report(&so, &sun, &c, &item);
+        assert!(r2.contains("<dt>Date and time of the clear sky</dt><dd>2026-12-21 12:00 UTC</dd>"));
+        assert!(r2.contains("<dt>Clear-sky atmosphere</dt><dd>mid-latitude winter</dd>"));
         let f = figures(&o, &c, " (over L = 39.4 ft)");
         // every output the README lists beside the answer, once, with its full value
         for q in [

@@ -341,7 +341,7 @@ pub const FIELDS: [FieldSpec; 75] = [
     f(Field::IrBandHigh, Group::Surface, "lb2", "Instrument band to", Dim::Wavelength, (0.1e-6, false, 100e-6), "longest wavelength it sees; 14 µm for most field instruments", at!(ir_band_high), read_ir),
     f(Field::IrAccuracy, Group::Surface, "dTir", "Reading accuracy", Dim::TemperatureDifference, (0.0, false, 100.0), "± as the instrument's sheet states it; {dT:2} is common for field instruments (common practice)", at!(ir_accuracy), read_ir),
     f(Field::IrEmissivityUncertainty, Group::Surface, "de", "Emissivity uncertainty", Dim::Ratio, (0.0, false, 0.5), "± on the surface's emissivity; 0.05 from a table (common practice), less measured by ASTM E1933", at!(ir_emissivity_uncertainty), read_ir),
-    f(Field::HeatMade, Group::Surface, "qm", "Heat made inside", Dim::HeatFlowPerLength, (0.0, false, 1e6), "per length: a tracer's output, a heater's rating", at!(heat_made), heat_per_length),
+    f(Field::HeatMade, Group::Surface, "qm", "Heat made inside", Dim::HeatOutputPerLength, (0.0, false, 1e6), "per length: a tracer's output, a heater's rating", at!(heat_made), heat_per_length),
     f(Field::HeatBody, Group::Surface, "qb", "Heat made inside the body", Dim::HeatFlow, (0.0, false, 1e7), "the whole body's: a heater's or a sensor's rating", at!(heat_body), heat_per_body),
     f(Field::Current, Group::Surface, "I", "Current", Dim::Current, (0.0, false, 1e6), "through the conductor; rms for AC", at!(current), current_given),
     f(Field::ResistanceLow, Group::Surface, "R1", "Resistance at the lower temperature", Dim::ResistancePerLength, (0.0, true, 1e3), "per length, from the data sheet (AC for AC)", at!(r_low), current_given),

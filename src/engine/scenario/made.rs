@@ -125,7 +125,7 @@ pub(crate) fn verdict(s: &Scenario, ts: f64, m: &Made) -> Verdict {
     let per = if s.shape.is_sphere() {
         Dim::HeatFlow
     } else {
-        Dim::HeatFlowPerLength
+        Dim::HeatOutputPerLength
     };
     let conductor = s.current_given();
     // A hair of rounding at the limit itself is not a failure.

@@ -157,7 +157,10 @@ fn limits_the_surroundings_already_hold_read_in_words() {
     s.surface_mode = SurfaceMode::Made;
     s.hold_temp = s.fluid_temp - 30.0;
     let m = evaluate(&s).unwrap().made.unwrap();
-    assert_eq!((m.at_limit, m.refused.as_deref()), (Some((0.0, None)), None));
+    assert_eq!(
+        (m.at_limit, m.refused.as_deref()),
+        (Some((0.0, None)), None)
+    );
     let mut c = drake_line();
     c.conductor_limit = 300.0;
     let o = evaluate(&c).unwrap();
@@ -170,4 +173,22 @@ fn limits_the_surroundings_already_hold_read_in_words() {
     let o = evaluate(&c).unwrap();
     assert_eq!(o.q_per_length, Some(0.0));
     assert_eq!(o.annual_energy, 0.0);
+}
+
+/// A tracer's output reads in W/ft on a US page, as heat-tracing data sheets give it (the loss
+/// stays in Btu/(h·ft), the insulation trade's); 10 W/ft is 32.8 W/m (1 ft = 0.3048 m exactly).
+#[test]
+fn a_tracers_output_is_in_watts_per_foot_in_us_units() {
+    use crate::engine::units::UnitChoice;
+    let us = UnitChoice::for_system(System::Us);
+    let u = us.get(spec(Field::HeatMade).dim);
+    assert_eq!(u.symbol, "W/ft");
+    assert!((u.to_si(10.0) - 10.0 / 0.3048).abs() < 1e-12);
+    assert_eq!(
+        UnitChoice::for_system(System::Si)
+            .get(spec(Field::HeatMade).dim)
+            .symbol,
+        "W/m"
+    );
+    assert_eq!(us.get(Dim::HeatFlowPerLength).symbol, "Btu/(h·ft)");
 }

@@ -59,10 +59,13 @@ pub enum Dim {
     Coordinate,
     /// A conductor's resistance per length: Ω/km on SI data sheets, Ω/mi on US ones.
     ResistancePerLength,
+    /// Heat made per length (a tracer's output): the same quantity as `HeatFlowPerLength`, in the
+    /// units of heat-tracing data sheets (W/ft in US units).
+    HeatOutputPerLength,
 }
 
 /// Every dimension, in the order the page lists them.
-pub const ALL_DIMS: [Dim; 32] = [
+pub const ALL_DIMS: [Dim; 33] = [
     Dim::Temperature,
     Dim::Length,
     Dim::Speed,
@@ -95,6 +98,7 @@ pub const ALL_DIMS: [Dim; 32] = [
     Dim::Current,
     Dim::Coordinate,
     Dim::ResistancePerLength,
+    Dim::HeatOutputPerLength,
 ];
 
 /// A unit system for the global switch.
@@ -270,6 +274,15 @@ pub const UNITS: &[Unit] = &[
     u("um", "µm", Dim::Wavelength, 1e-6, 0.0),
     u("A", "A", Dim::Current, 1.0, 0.0),
     u("deg-geo", "°", Dim::Coordinate, 1.0, 0.0),
+    u("W/m-out", "W/m", Dim::HeatOutputPerLength, 1.0, 0.0),
+    u("W/ft-out", "W/ft", Dim::HeatOutputPerLength, 1.0 / FT, 0.0),
+    u(
+        "Btu/hft-out",
+        "Btu/(h·ft)",
+        Dim::HeatOutputPerLength,
+        BTU_IT / HOUR / FT,
+        0.0,
+    ),
     u("ohm/m", "Ω/m", Dim::ResistancePerLength, 1.0, 0.0),
     u("ohm/km", "Ω/km", Dim::ResistancePerLength, 1e-3, 0.0),
     u("ohm/mi", "Ω/mi", Dim::ResistancePerLength, 1.0 / MILE, 0.0),
@@ -296,6 +309,7 @@ impl Unit {
 pub fn same_quantity(a: Dim, b: Dim) -> bool {
     let norm = |d| match d {
         Dim::LayerConductivity => Dim::ThermalConductivity,
+        Dim::HeatOutputPerLength => Dim::HeatFlowPerLength,
         d => d,
     };
     norm(a) == norm(b)
@@ -367,6 +381,8 @@ pub fn default_unit(dim: Dim, system: System) -> &'static Unit {
         (Dim::Coordinate, _) => "deg-geo",
         (Dim::ResistancePerLength, System::Si) => "ohm/km",
         (Dim::ResistancePerLength, System::Us) => "ohm/mi",
+        (Dim::HeatOutputPerLength, System::Si) => "W/m-out",
+        (Dim::HeatOutputPerLength, System::Us) => "W/ft-out",
     };
     unit(id).expect("every default unit is in UNITS")
 }
