@@ -309,11 +309,7 @@ pub fn report(
     }
     // The sun's instant and atmosphere are not table fields: written here when they are used.
     if s.outdoors() && s.sun_input == crate::engine::scenario::SunInput::Place {
-        if let Ok(t) = crate::engine::outdoors::sun::Utc::from_unix(s.sun_time) {
-            let when = format!(
-                "{:04}-{:02}-{:02} {:02}:{:02} UTC",
-                t.year, t.month, t.day, t.hour, t.minute
-            );
+        if let Some(when) = crate::engine::outdoors::sun::Utc::minute_text(s.sun_time) {
             kv(&mut m, "Date and time of the clear sky", when);
         }
         kv(&mut m, "Clear-sky atmosphere", s.climate.name().to_string());

@@ -4,6 +4,7 @@
 
 use leptos::prelude::*;
 
+use crate::engine::outdoors::sun::Utc;
 use crate::engine::scenario::{
     self, Field, InsideFilm, Scenario, Shape, SurfaceMode, WallMaterial,
 };
@@ -184,17 +185,6 @@ pub fn sun_place(scenario: RwSignal<Scenario>) -> impl IntoView {
             d.get_minutes()
         )
     };
-    let utc_text = |t: f64| {
-        let d = js_sys::Date::new(&wasm_bindgen::JsValue::from_f64(t * 1000.0));
-        format!(
-            "{:04}-{:02}-{:02} {:02}:{:02} UTC",
-            d.get_utc_full_year(),
-            d.get_utc_month() + 1,
-            d.get_utc_date(),
-            d.get_utc_hours(),
-            d.get_utc_minutes()
-        )
-    };
     let set_local = move |ev: leptos::ev::Event| {
         // "YYYY-MM-DDTHH:MM" from the picker; anything else (cleared) leaves the instant as it is.
         let v = event_target_value(&ev);
@@ -203,12 +193,12 @@ pub fn sun_place(scenario: RwSignal<Scenario>) -> impl IntoView {
             .filter_map(|p| p.parse().ok())
             .collect();
         if let [y, mo, d, h, mi] = n[..] {
-            if (1583..=9999).contains(&y) {
-                let date = js_sys::Date::new_with_year_month_day_hr_min(y as u32, mo - 1, d, h, mi);
-                let t = date.get_time() / 1000.0;
-                if t.is_finite() {
-                    scenario.update(|s| s.sun_time = t);
-                }
+            let date =
+                js_sys::Date::new_with_year_month_day_hr_min(y.max(0) as u32, mo - 1, d, h, mi);
+            let t = date.get_time() / 1000.0;
+            // The engine's own bounds on an instant (1583–9999), not a second copy of them.
+            if Utc::from_unix(t).is_ok() {
+                scenario.update(|s| s.sun_time = t);
             }
         }
     };
@@ -225,7 +215,7 @@ pub fn sun_place(scenario: RwSignal<Scenario>) -> impl IntoView {
     view! {
         <div class:hidden=move || !scenario.with(|s| s.outdoors() && s.sun_input == scenario::SunInput::Place)>
             <div class="field">
-                <label for="in-sun-time">"Local date and time"<small>{move || format!("this device's time zone; {}", utc_text(scenario.with(|s| s.sun_time)))}</small></label>
+                <label for="in-sun-time">"Local date and time"<small>{move || format!("this device's time zone; {}", Utc::minute_text(scenario.with(|s| s.sun_time)).unwrap_or_default())}</small></label>
                 <input id="in-sun-time" type="datetime-local" data-field="tu"
                     prop:value=move || local_text(scenario.with(|s| s.sun_time)) on:change=set_local/>
             </div>

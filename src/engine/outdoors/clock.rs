@@ -7,6 +7,16 @@ use super::{keys, undefined};
 use crate::engine::error::{EngineError, Subject};
 
 impl Utc {
+    /// The instant to the minute as the page, the working and the report write it:
+    /// "2026-12-21 12:00 UTC", or `None` outside the years [`Utc::from_unix`] takes.
+    pub fn minute_text(seconds: f64) -> Option<String> {
+        let t = Utc::from_unix(seconds).ok()?;
+        Some(format!(
+            "{:04}-{:02}-{:02} {:02}:{:02} UTC",
+            t.year, t.month, t.day, t.hour, t.minute
+        ))
+    }
+
     /// The instant `seconds` after 1970-01-01 00:00 UTC (before it when negative), on the
     /// proleptic Gregorian calendar (days to a civil date by H. Hinnant's `civil_from_days`).
     /// The page keeps a date and time as this one number. Errors: a non-finite value, or an

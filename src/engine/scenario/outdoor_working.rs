@@ -40,15 +40,8 @@ pub(crate) fn steps(s: &Scenario, o: &Outdoor, w: &WorkingInputs) -> Vec<Step> {
     let source = match &o.sun {
         None => "Typed irradiance".to_string(),
         Some((pos, elevation)) => {
-            let t = crate::engine::outdoors::sun::Utc::from_unix(s.sun_time);
-            let when = t
-                .map(|t| {
-                    format!(
-                        "{:04}-{:02}-{:02} {:02}:{:02} UTC",
-                        t.year, t.month, t.day, t.hour, t.minute
-                    )
-                })
-                .unwrap_or_default();
+            let when =
+                crate::engine::outdoors::sun::Utc::minute_text(s.sun_time).unwrap_or_default();
             format!(
                 "The sun by {} at {when}, latitude {}°, longitude {}°, site elevation {} m: zenith {}° (refracted), azimuth {}° from north, {} AU away; a clear sky by {} for a {} atmosphere (extraterrestrial {} W/m²)",
                 crate::engine::outdoors::sun::SPA,
